@@ -1,0 +1,155 @@
+package materials
+
+import (
+	"cmp"
+	"fmt"
+	"slices"
+
+	"terminus/constraint/date"
+)
+
+// Problem is one finding of [Lint].
+type Problem struct {
+	File         string
+	Line, Column int
+	Msg          string
+}
+
+func (p Problem) String() string {
+	if p.Column > 0 {
+		return fmt.Sprintf("%s:%d:%d: %s", p.File, p.Line, p.Column, p.Msg)
+	}
+	return fmt.Sprintf("%s:%d: %s", p.File, p.Line, p.Msg)
+}
+
+// Problems turns a load error into problems, so that a lint can show
+// schema errors and logic errors alike. It returns nil for other errors.
+func Problems(err error) []Problem {
+	var out []Problem
+	for _, e := range errorsAsList(err) {
+		msg := e.Msg
+		if e.Suggestion != "" {
+			msg += " (hint: " + e.Suggestion + ")"
+		}
+		out = append(out, Problem{File: e.File, Line: e.Line, Column: e.Column, Msg: msg})
+	}
+	return out
+}
+
+// Lint checks the logic of a loaded dataset, beyond what loading already
+// enforces:
+//
+//   - every material has a made milestone;
+//   - no sold claim lies wholly before the earliest made claim, no arrived
+//     claim before it, and no withdrawn claim wholly before the earliest sold
+//     claim (or made, when there is no sold);
+//   - every milestone names a source, and every source key cited exists;
+//   - every source in the bibliography is cited by some milestone;
+//   - no name (folded as [Dataset.Lookup] folds it) belongs to two materials;
+//   - ids and source keys are unique.
+//
+// Problems are sorted by file and line.
+func Lint(d *Dataset) []Problem {
+	var ps []Problem
+	add := func(file string, line, col int, format string, args ...any) {
+		ps = append(ps, Problem{File: file, Line: line, Column: col, Msg: fmt.Sprintf(format, args...)})
+	}
+	cited := map[string]bool{}
+	keys := map[string]Source{}
+	for _, s := range d.Sources {
+		if prev, dup := keys[s.Key]; dup {
+			add(s.File, s.Line, 0, "source key %q is already defined at %s:%d", s.Key, prev.File, prev.Line)
+			continue
+		}
+		keys[s.Key] = s
+	}
+	ids := map[string]*Material{}
+	names := map[string]*Material{}
+	for _, m := range d.Materials {
+		if prev, dup := ids[m.ID]; dup {
+			add(m.File, m.Line, 0, "id %q is already used at %s:%d", m.ID, prev.File, prev.Line)
+		}
+		ids[m.ID] = m
+		for _, n := range append([]string{m.ID}, m.Names...) {
+			k := fold(n)
+			if other, ok := names[k]; ok && other != m {
+				add(m.File, m.Line, 0, "name %q of %q is also a name of %q (%s:%d)", n, m.ID, other.ID, other.File, other.Line)
+				continue
+			}
+			names[k] = m
+		}
+		for _, ms := range m.Milestones {
+			switch {
+			case ms.Source == "":
+				add(ms.File, ms.Line, ms.Column, "%s milestone of %q has no source", ms.Kind, m.ID)
+			case !hasKey(keys, ms.Source):
+				add(ms.File, ms.Line, ms.Column, "%s milestone of %q cites %q, which is not in the bibliography", ms.Kind, m.ID, ms.Source)
+			}
+			cited[ms.Source] = true
+		}
+		ps = append(ps, lintOrder(m)...)
+	}
+	for _, s := range d.Sources {
+		if !cited[s.Key] {
+			add(s.File, s.Line, 0, "source %q is never cited; cite it or remove it", s.Key)
+		}
+	}
+	slices.SortStableFunc(ps, func(a, b Problem) int {
+		return cmp.Or(cmp.Compare(a.File, b.File), cmp.Compare(a.Line, b.Line), cmp.Compare(a.Column, b.Column))
+	})
+	return ps
+}
+
+func hasKey(m map[string]Source, k string) bool {
+	_, ok := m[k]
+	return ok
+}
+
+// lintOrder checks that a material's milestones come in a possible order.
+// A claim is out of order only when it lies wholly before the earliest
+// claim it must follow, so disagreeing sources alone are not a problem.
+func lintOrder(m *Material) []Problem {
+	var ps []Problem
+	made := m.Claims(KindMade, "")
+	if len(made) == 0 {
+		return []Problem{{File: m.File, Line: m.Line, Msg: fmt.Sprintf("material %q has no made milestone", m.ID)}}
+	}
+	firstMade, okMade := earliestStart(made)
+	check := func(claims []Milestone, after date.Day, ok bool, what string) {
+		if !ok {
+			return
+		}
+		for _, ms := range claims {
+			if last, ok := ms.Date.Latest(); ok && last < after {
+				ps = append(ps, Problem{File: ms.File, Line: ms.Line, Column: ms.Column,
+					Msg: fmt.Sprintf("%s milestone of %q (%s) lies wholly before its earliest %s claim", ms.Kind, m.ID, ms.Date.EDTF(), what)})
+			}
+		}
+	}
+	check(m.Claims(KindSold, ""), firstMade, okMade, "made")
+	check(m.Claims(KindArrived, ""), firstMade, okMade, "made")
+	sold := m.Claims(KindSold, "")
+	if len(sold) > 0 {
+		first, ok := earliestStart(sold)
+		check(m.Claims(KindWithdrawn, ""), first, ok, "sold")
+	} else {
+		check(m.Claims(KindWithdrawn, ""), firstMade, okMade, "made")
+	}
+	return ps
+}
+
+// earliestStart is the first day of the earliest claim; false when a claim
+// is open at its start.
+func earliestStart(ms []Milestone) (date.Day, bool) {
+	var best date.Day
+	for i, m := range ms {
+		d, ok := m.Date.Earliest()
+		if !ok {
+			return 0, false
+		}
+		if i == 0 || d < best {
+			best = d
+		}
+	}
+	return best, len(ms) > 0
+}

@@ -1,0 +1,268 @@
+package materials
+
+import (
+	"cmp"
+	"slices"
+	"strings"
+	"unicode"
+)
+
+// index maps folded keys to materials.
+type index struct {
+	names map[string]*Material   // id and every name
+	ci    map[string][]*Material // Colour Index name, its short form and number
+	cas   map[string][]*Material // CAS RN digits
+	all   []nameRef              // every id and name, for suggestions
+}
+
+type nameRef struct {
+	key, shown string
+}
+
+func buildIndex(ms []*Material) *index {
+	ix := &index{names: map[string]*Material{}, ci: map[string][]*Material{}, cas: map[string][]*Material{}}
+	addMulti := func(m map[string][]*Material, k string, mat *Material) {
+		if k == "" || slices.Contains(m[k], mat) {
+			return
+		}
+		m[k] = append(m[k], mat)
+	}
+	for _, m := range ms {
+		for _, n := range append([]string{m.ID}, m.Names...) {
+			k := fold(n)
+			if k == "" {
+				continue
+			}
+			if _, ok := ix.names[k]; !ok {
+				ix.names[k] = m
+			}
+			ix.all = append(ix.all, nameRef{k, n})
+		}
+		if ci := m.ColourIndex; ci != nil {
+			addMulti(ix.ci, fold(ci.Name), m)
+			addMulti(ix.ci, fold(ciShort(ci.Name)), m)
+			addMulti(ix.ci, fold(ci.Number), m)
+		}
+		addMulti(ix.cas, fold(m.CAS), m)
+	}
+	return ix
+}
+
+// Lookup finds a material by its id, any of its names, its Colour Index
+// generic name ("Pigment Blue 27", short "PB27" or "PB 27") or number
+// ("77510", "C.I. 77510"), or its CAS RN. Case, accents, hyphens, spaces and
+// punctuation do not count. A miss is a [*NotFoundError] with the nearest
+// names; a Colour Index or CAS key that several materials share is an
+// [*AmbiguousError].
+func (d *Dataset) Lookup(name string) (*Material, error) {
+	ix := d.index
+	if ix == nil {
+		ix = buildIndex(d.Materials)
+	}
+	k := fold(name)
+	if m, ok := ix.names[k]; ok {
+		return m, nil
+	}
+	try := []string{k}
+	if rest, ok := strings.CutPrefix(k, "ci"); ok && rest != "" {
+		try = append(try, rest)
+	}
+	for _, t := range try {
+		for _, tab := range []map[string][]*Material{ix.ci, ix.cas} {
+			switch ms := tab[t]; len(ms) {
+			case 0:
+			case 1:
+				return ms[0], nil
+			default:
+				ids := make([]string, len(ms))
+				for i, m := range ms {
+					ids[i] = m.ID
+				}
+				return nil, &AmbiguousError{Name: name, Matches: ids}
+			}
+		}
+	}
+	return nil, &NotFoundError{Name: name, Suggestions: ix.nearest(k, 3)}
+}
+
+// nearest returns up to n names nearest to key by edit distance, within a
+// distance that still looks like a slip of spelling.
+func (ix *index) nearest(key string, n int) []string {
+	if key == "" {
+		return nil
+	}
+	type cand struct {
+		shown string
+		dist  int
+	}
+	limit := max(2, len([]rune(key))/3)
+	best := map[string]cand{}
+	for _, r := range ix.all {
+		dist := levenshtein(key, r.key)
+		if len(key) >= 4 && strings.Contains(r.key, key) {
+			dist = min(dist, 1)
+		}
+		if dist > limit {
+			continue
+		}
+		m := ix.names[r.key]
+		if c, ok := best[m.ID]; !ok || dist < c.dist {
+			best[m.ID] = cand{r.shown, dist}
+		}
+	}
+	cs := make([]cand, 0, len(best))
+	for _, c := range best {
+		cs = append(cs, c)
+	}
+	slices.SortFunc(cs, func(a, b cand) int { return cmp.Or(cmp.Compare(a.dist, b.dist), cmp.Compare(a.shown, b.shown)) })
+	out := make([]string, 0, n)
+	for _, c := range cs {
+		if len(out) == n {
+			break
+		}
+		out = append(out, c.shown)
+	}
+	return out
+}
+
+// ciColour gives the letters that stand for a colour word of a Colour Index
+// generic name in its usual short form (Pigment Blue 27 is PB27, Pigment
+// Black 11 PBk11, Natural Brown 8 NBr8): common practice.
+func ciColour(word string) (string, bool) {
+	switch strings.ToLower(word) {
+	case "blue":
+		return "B", true
+	case "red":
+		return "R", true
+	case "yellow":
+		return "Y", true
+	case "green":
+		return "G", true
+	case "orange":
+		return "O", true
+	case "violet":
+		return "V", true
+	case "brown":
+		return "Br", true
+	case "black":
+		return "Bk", true
+	case "white":
+		return "W", true
+	case "metal":
+		return "M", true
+	}
+	return "", false
+}
+
+// ciShort turns "Pigment Blue 27" into "PB27" and "Basic Violet 3" into
+// "BV3": the initials of the usage words, the colour's letters and the
+// number. It returns "" when name does not have that shape.
+func ciShort(name string) string {
+	f := strings.Fields(name)
+	if len(f) < 3 {
+		return ""
+	}
+	num := f[len(f)-1]
+	colour, ok := ciColour(f[len(f)-2])
+	if !ok || num == "" || num[0] < '0' || num[0] > '9' {
+		return ""
+	}
+	var b strings.Builder
+	for _, w := range f[:len(f)-2] {
+		r := []rune(w)
+		b.WriteRune(unicode.ToUpper(r[0]))
+	}
+	return b.String() + colour + num
+}
+
+// fold reduces a name to its lookup key: lower case, Latin accents and
+// ligatures folded to plain letters (é→e, ß→ss, æ→ae, ü→u), and everything
+// but letters and digits dropped.
+func fold(s string) string {
+	var b strings.Builder
+	b.Grow(len(s))
+	for _, r := range s {
+		if r < 0x80 {
+			switch {
+			case 'a' <= r && r <= 'z', '0' <= r && r <= '9':
+				b.WriteRune(r)
+			case 'A' <= r && r <= 'Z':
+				b.WriteRune(r + 'a' - 'A')
+			}
+			continue
+		}
+		if f, ok := foldRune(r); ok {
+			b.WriteString(f)
+			continue
+		}
+		if unicode.IsLetter(r) || unicode.IsDigit(r) {
+			b.WriteRune(unicode.ToLower(r))
+		}
+	}
+	return b.String()
+}
+
+// foldGroups pairs plain forms with the Latin letters (with diacritics)
+// and ligatures of the European languages that fold to them, after the
+// Unicode decompositions of Latin-1 Supplement and Latin Extended-A; ß, æ,
+// œ, ø, ł, đ and þ are written out as is common practice.
+var foldGroups = [...]struct{ plain, from string }{
+	{"a", "àáâãäåāăąǎÀÁÂÃÄÅĀĂĄǍ"},
+	{"ae", "æǽÆǼ"},
+	{"c", "çćĉċčÇĆĈĊČ"},
+	{"d", "ďđðĎĐÐ"},
+	{"e", "èéêëēĕėęěÈÉÊËĒĔĖĘĚ"},
+	{"g", "ĝğġģĜĞĠĢ"},
+	{"h", "ĥħĤĦ"},
+	{"i", "ìíîïĩīĭįıǐÌÍÎÏĨĪĬĮİǏ"},
+	{"ij", "ĳĲ"},
+	{"j", "ĵĴ"},
+	{"k", "ķĶ"},
+	{"l", "ĺļľŀłĹĻĽĿŁ"},
+	{"n", "ñńņňŉÑŃŅŇ"},
+	{"o", "òóôõöøōŏőǒÒÓÔÕÖØŌŎŐǑ"},
+	{"oe", "œŒ"},
+	{"r", "ŕŗřŔŖŘ"},
+	{"s", "śŝşšſŚŜŞŠș"},
+	{"ss", "ß"},
+	{"t", "ţťŧŢŤŦțȚ"},
+	{"th", "þÞ"},
+	{"u", "ùúûüũūŭůűųǔÙÚÛÜŨŪŬŮŰŲǓ"},
+	{"w", "ŵŴ"},
+	{"y", "ýÿŷÝŸŶ"},
+	{"z", "źżžŹŻŽ"},
+}
+
+func foldRune(r rune) (string, bool) {
+	for _, g := range foldGroups {
+		if strings.ContainsRune(g.from, r) {
+			return g.plain, true
+		}
+	}
+	return "", false
+}
+
+// levenshtein is the edit distance between a and b, counted in runes.
+func levenshtein(a, b string) int {
+	ra, rb := []rune(a), []rune(b)
+	if len(ra) < len(rb) {
+		ra, rb = rb, ra
+	}
+	prev := make([]int, len(rb)+1)
+	cur := make([]int, len(rb)+1)
+	for j := range prev {
+		prev[j] = j
+	}
+	for i := 1; i <= len(ra); i++ {
+		cur[0] = i
+		for j := 1; j <= len(rb); j++ {
+			cost := 1
+			if ra[i-1] == rb[j-1] {
+				cost = 0
+			}
+			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+		}
+		prev, cur = cur, prev
+	}
+	return prev[len(rb)]
+}

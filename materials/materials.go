@@ -1,0 +1,208 @@
+// Package materials is the dated, sourced dataset of colorants and the other
+// materials an examiner meets beside them: its schema, strict loading, lookup
+// by any name, the region table for places, lint and statistics.
+//
+// # Model
+//
+// A [Material] is one substance as practitioners keep it apart from others:
+// natural and synthetic ultramarine are two materials, and so are the two
+// crystal forms of titanium dioxide white. Each material carries dated
+// [Milestone] records of four kinds ([KindMade], [KindSold], [KindArrived],
+// [KindWithdrawn]). Every milestone names a [Source] from the dataset's
+// bibliography and says whether its date was read there ([BasisDocumented])
+// or written down from memory ([BasisFromMemory]). Several milestones of the
+// same kind and place are the claims of sources that disagree; the dataset
+// keeps them all and leaves the choice to the reasoner.
+//
+// Places are ISO 3166-1 alpha-2 country codes ("NL") or UN M49 area codes
+// ("155" Western Europe, "150" Europe, "001" World), resolved by [Regions].
+// An arrival recorded for an area holds for every country inside it, and
+// [Dataset.Arrival] picks the most specific area that contains a place.
+//
+// # Files
+//
+// A dataset is read from YAML (*.yaml, *.yml) or TOML (*.toml) files, each
+// with a "sources" list and a "materials" list. Decoding is strict: an
+// unknown key, a date that is not EDTF, a source key or place that does not
+// exist, a duplicate id or name, a bad kind or basis, or an allowance on a
+// milestone other than withdrawn is an [*Error] naming the file, line and
+// column, with a hint where one fits. A file with several problems yields an
+// [ErrorList] holding each of them.
+//
+// The built-in dataset is embedded in the binary and parsed once, on first
+// use, by [Builtin]; after that it is only read. A user's own file is laid
+// over it with [Dataset.Extend] or [Overlay]: an entry with the same id
+// replaces the built-in one, and the notes returned say which.
+//
+// # Limits
+//
+// The dataset is as good as its sources. Dates of first making, sale and
+// arrival are lower bounds of availability, not of use; end dates are weak
+// because stocks linger. Lookup folds case, accents, hyphens, spaces and
+// punctuation, but does not guess at spelling: a miss is a [*NotFoundError]
+// with the nearest names, never a silent best match. The accent folding
+// covers the Latin letters of the European languages; other scripts are
+// compared as written, without case.
+package materials
+
+import (
+	"terminus/constraint/date"
+)
+
+// Kind is the kind of a milestone.
+type Kind string
+
+// The milestone kinds, in the order a material's history runs.
+const (
+	// KindMade is first existence anywhere: discovery, synthesis or the
+	// earliest known use.
+	KindMade Kind = "made"
+	// KindSold is the first commercial manufacture or sale as a colorant.
+	KindSold Kind = "sold"
+	// KindArrived is the first availability in a place.
+	KindArrived Kind = "arrived"
+	// KindWithdrawn is the end of manufacture, or a ban.
+	KindWithdrawn Kind = "withdrawn"
+)
+
+// Kinds lists the milestone kinds in order.
+func Kinds() []Kind { return []Kind{KindMade, KindSold, KindArrived, KindWithdrawn} }
+
+// Basis says how a milestone's date was taken from its source.
+type Basis string
+
+// The bases.
+const (
+	// BasisDocumented: the writer of the entry read the claim in the source.
+	BasisDocumented Basis = "documented"
+	// BasisFromMemory: the claim is attributed to the source from memory.
+	BasisFromMemory Basis = "from-memory"
+)
+
+// Classes are the values a material's class may take.
+func Classes() []string {
+	return []string{"pigment", "dye", "lake", "ink", "binder", "filler", "brightener", "support"}
+}
+
+// Origins are the values a material's origin may take.
+func Origins() []string {
+	return []string{"natural", "mineral", "synthetic", "semi-synthetic"}
+}
+
+// Source is one entry of the dataset's bibliography.
+type Source struct {
+	Key  string // unique across the dataset
+	Cite string // the full citation: authors, title, publisher or journal, year, pages
+	URL  string // optional address
+
+	File string // where it was defined
+	Line int
+}
+
+// ColourIndex is a Colour Index International generic name and constitution
+// number.
+type ColourIndex struct {
+	Name   string // "Pigment Blue 27"
+	Number string // "77510", or with a suffix "58000:1"
+}
+
+// Milestone is one dated claim about a material.
+type Milestone struct {
+	Kind   Kind
+	Date   date.Date
+	Place  string // ISO 3166-1 alpha-2 or UN M49 area code; empty for "anywhere"
+	Source string // a key into the bibliography
+	Basis  Basis
+	Note   string
+	// Allowance is the time stocks may have lingered after a withdrawal;
+	// only withdrawn milestones carry it.
+	Allowance *date.Duration
+
+	File         string
+	Line, Column int
+}
+
+// Material is one entry of the dataset.
+type Material struct {
+	ID          string   // lower case letters, digits and hyphens
+	Names       []string // synonyms and trade names, any language; the first is the display name
+	Class       string   // one of [Classes]
+	Origin      string   // one of [Origins]
+	ColourIndex *ColourIndex
+	CAS         string // CAS Registry Number, "14038-43-8"
+	Formula     string
+	Note        string
+	Milestones  []Milestone
+
+	File string
+	Line int
+}
+
+// Name returns the material's display name: its first name, or its id.
+func (m *Material) Name() string {
+	if len(m.Names) > 0 {
+		return m.Names[0]
+	}
+	return m.ID
+}
+
+// Claims returns the milestones of kind k (and, when place is not empty, of
+// that place), in dataset order.
+func (m *Material) Claims(k Kind, place string) []Milestone {
+	var out []Milestone
+	for _, ms := range m.Milestones {
+		if ms.Kind == k && (place == "" || ms.Place == place) {
+			out = append(out, ms)
+		}
+	}
+	return out
+}
+
+// Dataset is a loaded set of materials with its bibliography and region
+// table. A Dataset is not changed after loading; functions that combine
+// datasets return new ones.
+type Dataset struct {
+	Materials []*Material // in file order, files sorted by name
+	Sources   []Source
+	Regions   *Regions
+
+	// Version is the dataset version: the built-in [DataVersion], with
+	// "+local" when a user's files were laid over it.
+	Version string
+	// SHA256 is the hex digest over the files read (sorted by name, name and
+	// content), so that a report can say exactly which data it used.
+	SHA256 string
+	// Files are the names of the files read, sorted.
+	Files []string
+
+	index    *index
+	sources  map[string]int
+	fileData []fileDigest
+}
+
+// DataVersion is the version of the built-in dataset.
+const DataVersion = "2026.12"
+
+// Source returns the bibliography entry for key.
+func (d *Dataset) Source(key string) (Source, bool) {
+	if i, ok := d.sources[key]; ok {
+		return d.Sources[i], true
+	}
+	return Source{}, false
+}
+
+// Arrival returns the arrived claims of m for the most specific area that
+// contains place: place itself first, then its intermediate region,
+// sub-region, region and the world ("001"). It returns nil and "" when no
+// area containing place has an arrival, or when place is unknown.
+func (d *Dataset) Arrival(m *Material, place string) (claims []Milestone, area string) {
+	if m == nil || d.Regions == nil {
+		return nil, ""
+	}
+	for _, a := range d.Regions.Ancestors(place) {
+		if c := m.Claims(KindArrived, a); len(c) > 0 {
+			return c, a
+		}
+	}
+	return nil, ""
+}

@@ -1,0 +1,498 @@
+package materials
+
+import (
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"regexp"
+	"slices"
+	"strconv"
+	"strings"
+
+	"gopkg.in/yaml.v3"
+
+	"terminus/constraint/date"
+)
+
+// fileResult is what one file gave.
+type fileResult struct {
+	sources   []Source
+	materials []*Material
+	errs      ErrorList
+}
+
+// parser checks one file's node tree against the schema.
+type parser struct {
+	file    string
+	regions *Regions
+	errs    ErrorList
+}
+
+func parseFile(f rawFile, regions *Regions) *fileResult {
+	p := &parser{file: f.name, regions: regions}
+	var root *yaml.Node
+	if f.toml {
+		root = p.tomlTree(f.data)
+	} else {
+		root = p.yamlTree(f.data)
+	}
+	res := &fileResult{}
+	if root != nil {
+		res.sources, res.materials = p.top(root)
+	}
+	res.errs = p.errs
+	return res
+}
+
+var yamlLine = regexp.MustCompile(`line (\d+)`)
+
+// yamlTree reads the one document of a YAML file.
+func (p *parser) yamlTree(data []byte) *yaml.Node {
+	dec := yaml.NewDecoder(bytes.NewReader(data))
+	var doc yaml.Node
+	if err := dec.Decode(&doc); err != nil {
+		if errors.Is(err, io.EOF) {
+			return nil // an empty file holds nothing
+		}
+		p.syntax(err)
+		return nil
+	}
+	var extra yaml.Node
+	if err := dec.Decode(&extra); err == nil {
+		p.errAt(&extra, "a materials file holds one YAML document; found a second", "remove the '---' line or split the file")
+	} else if !errors.Is(err, io.EOF) {
+		p.syntax(err)
+	}
+	if doc.Kind == yaml.DocumentNode && len(doc.Content) == 1 {
+		return doc.Content[0]
+	}
+	return &doc
+}
+
+// syntax reports a YAML syntax error at the line the decoder names.
+func (p *parser) syntax(err error) {
+	line := 1
+	if m := yamlLine.FindStringSubmatch(err.Error()); m != nil {
+		line, _ = strconv.Atoi(m[1])
+	}
+	msg := strings.TrimPrefix(err.Error(), "yaml: ")
+	if m := yamlLine.FindStringIndex(msg); m != nil && m[0] == 0 {
+		msg = strings.TrimLeft(msg[m[1]:], ": ")
+	}
+	p.errs = append(p.errs, &Error{File: p.file, Line: line, Msg: "YAML syntax: " + msg, Err: err,
+		Suggestion: "check the indentation and quoting on this line and the one before; quote dates and places"})
+}
+
+func (p *parser) errAt(n *yaml.Node, msg, hint string) {
+	line, col := 1, 0
+	if n != nil && n.Line > 0 {
+		line, col = n.Line, n.Column
+	}
+	p.errs = append(p.errs, &Error{File: p.file, Line: line, Column: col, Msg: msg, Suggestion: hint})
+}
+
+// field is one key of a mapping.
+type field struct {
+	key, val *yaml.Node
+}
+
+// fields returns the keys of mapping n, reporting keys not in allowed
+// (with the nearest allowed key) and keys given twice. what names n in
+// messages ("material", "milestone").
+func (p *parser) fields(n *yaml.Node, what string, allowed []string) map[string]field {
+	n = deref(n)
+	if n.Kind != yaml.MappingNode {
+		p.errAt(n, fmt.Sprintf("expected a %s as a mapping of %s; found %s", what, strings.Join(allowed, ", "), nodeKind(n)), "")
+		return nil
+	}
+	out := make(map[string]field, len(n.Content)/2)
+	for i := 0; i+1 < len(n.Content); i += 2 {
+		k, v := deref(n.Content[i]), deref(n.Content[i+1])
+		if k.Kind != yaml.ScalarNode {
+			p.errAt(k, fmt.Sprintf("expected a key of the %s; found %s", what, nodeKind(k)), "")
+			continue
+		}
+		if !slices.Contains(allowed, k.Value) {
+			hint := "the keys of a " + what + " are " + strings.Join(allowed, ", ")
+			if s := nearestWords(k.Value, allowed, 1); len(s) == 1 {
+				hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
+			}
+			p.errAt(k, fmt.Sprintf("unknown key %q in a %s", k.Value, what), hint)
+			continue
+		}
+		if prev, dup := out[k.Value]; dup {
+			p.errAt(k, fmt.Sprintf("key %q is given twice in this %s (first on line %d)", k.Value, what, prev.key.Line), "keep one of them")
+			continue
+		}
+		out[k.Value] = field{k, v}
+	}
+	return out
+}
+
+func deref(n *yaml.Node) *yaml.Node {
+	for i := 0; n != nil && n.Kind == yaml.AliasNode && i < 8; i++ {
+		n = n.Alias
+	}
+	if n == nil {
+		return &yaml.Node{}
+	}
+	return n
+}
+
+func nodeKind(n *yaml.Node) string {
+	switch n.Kind {
+	case yaml.MappingNode:
+		return "a mapping"
+	case yaml.SequenceNode:
+		return "a list"
+	case yaml.ScalarNode:
+		if n.Tag == "!!null" {
+			return "nothing"
+		}
+		return fmt.Sprintf("%q", n.Value)
+	}
+	return "something else"
+}
+
+// str reads a scalar as text; a null is "".
+func (p *parser) str(f field, what string) string {
+	if f.val == nil {
+		return ""
+	}
+	if f.val.Kind != yaml.ScalarNode {
+		p.errAt(f.val, fmt.Sprintf("expected %s as text; found %s", what, nodeKind(f.val)), "")
+		return ""
+	}
+	if f.val.Tag == "!!null" {
+		return ""
+	}
+	return f.val.Value
+}
+
+// required reads a key that must be there and not empty.
+func (p *parser) required(fs map[string]field, key, what string, at *yaml.Node) string {
+	f, ok := fs[key]
+	if !ok {
+		p.errAt(at, fmt.Sprintf("%s has no %q", what, key), "")
+		return ""
+	}
+	s := strings.TrimSpace(p.str(f, key))
+	if s == "" {
+		p.errAt(f.val, fmt.Sprintf("%q of %s is empty", key, what), "")
+	}
+	return s
+}
+
+func (p *parser) top(root *yaml.Node) ([]Source, []*Material) {
+	root = deref(root)
+	if root.Kind == yaml.ScalarNode && root.Tag == "!!null" {
+		return nil, nil
+	}
+	fs := p.fields(root, "materials file", []string{"sources", "materials"})
+	var sources []Source
+	var mats []*Material
+	if f, ok := fs["sources"]; ok {
+		for _, n := range p.list(f.val, "sources") {
+			if s, ok := p.source(n); ok {
+				sources = append(sources, s)
+			}
+		}
+	}
+	if f, ok := fs["materials"]; ok {
+		for _, n := range p.list(f.val, "materials") {
+			if m := p.material(n); m != nil {
+				mats = append(mats, m)
+			}
+		}
+	}
+	return sources, mats
+}
+
+func (p *parser) list(n *yaml.Node, what string) []*yaml.Node {
+	n = deref(n)
+	if n.Kind == yaml.ScalarNode && n.Tag == "!!null" {
+		return nil
+	}
+	if n.Kind != yaml.SequenceNode {
+		p.errAt(n, fmt.Sprintf("expected %s as a list; found %s", what, nodeKind(n)), "start each entry with '- '")
+		return nil
+	}
+	return n.Content
+}
+
+var sourceKeys = []string{"key", "cite", "url"}
+
+func (p *parser) source(n *yaml.Node) (Source, bool) {
+	n = deref(n)
+	fs := p.fields(n, "source", sourceKeys)
+	if fs == nil {
+		return Source{}, false
+	}
+	s := Source{File: p.file, Line: n.Line}
+	s.Key = p.required(fs, "key", "a source", n)
+	s.Cite = p.required(fs, "cite", fmt.Sprintf("source %q", s.Key), n)
+	if f, ok := fs["url"]; ok {
+		s.URL = strings.TrimSpace(p.str(f, "url"))
+		if s.URL != "" && !strings.HasPrefix(s.URL, "https://") && !strings.HasPrefix(s.URL, "http://") {
+			p.errAt(f.val, fmt.Sprintf("url %q of source %q is not a web address", s.URL, s.Key), "write it in full, starting with https://")
+		}
+	}
+	if s.Key != "" && !validID(s.Key) {
+		p.errAt(fs["key"].val, fmt.Sprintf("source key %q is not lower case letters, digits and hyphens", s.Key),
+			"write it like 'artists-pigments-1'")
+	}
+	return s, s.Key != ""
+}
+
+var materialKeys = []string{"id", "names", "class", "origin", "colour_index", "cas", "formula", "note", "milestones"}
+
+func (p *parser) material(n *yaml.Node) *Material {
+	n = deref(n)
+	fs := p.fields(n, "material", materialKeys)
+	if fs == nil {
+		return nil
+	}
+	m := &Material{File: p.file, Line: n.Line}
+	m.ID = p.required(fs, "id", "a material", n)
+	if m.ID != "" && !validID(m.ID) {
+		p.errAt(fs["id"].val, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
+			"write it like "+quote(suggestID(m.ID)))
+	}
+	what := fmt.Sprintf("material %q", m.ID)
+	if f, ok := fs["names"]; ok {
+		for _, nn := range p.list(f.val, "names") {
+			nn = deref(nn)
+			s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
+			switch {
+			case s == "":
+				p.errAt(nn, "empty name in "+what, "")
+			case fold(s) == "":
+				p.errAt(nn, fmt.Sprintf("name %q of %s has no letters or digits", s, what), "")
+			default:
+				m.Names = append(m.Names, s)
+			}
+		}
+	}
+	m.Class = p.oneOf(fs, "class", what, n, Classes())
+	m.Origin = p.oneOf(fs, "origin", what, n, Origins())
+	if f, ok := fs["colour_index"]; ok {
+		m.ColourIndex = p.colourIndex(f, what)
+	}
+	if f, ok := fs["cas"]; ok {
+		m.CAS = strings.TrimSpace(p.str(f, "cas"))
+		if m.CAS != "" {
+			if msg, hint := checkCAS(m.CAS); msg != "" {
+				p.errAt(f.val, fmt.Sprintf("cas %q of %s: %s", m.CAS, what, msg), hint)
+			}
+		}
+	}
+	if f, ok := fs["formula"]; ok {
+		m.Formula = strings.TrimSpace(p.str(f, "formula"))
+	}
+	if f, ok := fs["note"]; ok {
+		m.Note = strings.TrimSpace(p.str(f, "note"))
+	}
+	if f, ok := fs["milestones"]; ok {
+		for _, mn := range p.list(f.val, "milestones") {
+			if ms, ok := p.milestone(mn, what); ok {
+				m.Milestones = append(m.Milestones, ms)
+			}
+		}
+	}
+	return m
+}
+
+func (p *parser) oneOf(fs map[string]field, key, what string, at *yaml.Node, allowed []string) string {
+	s := p.required(fs, key, what, at)
+	if s == "" || slices.Contains(allowed, s) {
+		return s
+	}
+	hint := key + " is one of " + strings.Join(allowed, ", ")
+	if n := nearestWords(strings.ToLower(s), allowed, 1); len(n) == 1 {
+		hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
+	}
+	p.errAt(fs[key].val, fmt.Sprintf("unknown %s %q for %s", key, s, what), hint)
+	return s
+}
+
+var ciNumber = regexp.MustCompile(`^[0-9]{5}(:[0-9]{1,2})?$`)
+
+func (p *parser) colourIndex(f field, what string) *ColourIndex {
+	fs := p.fields(f.val, "colour_index", []string{"name", "number"})
+	if fs == nil {
+		return nil
+	}
+	ci := &ColourIndex{}
+	if g, ok := fs["name"]; ok {
+		ci.Name = strings.TrimSpace(p.str(g, "the Colour Index name"))
+	}
+	if g, ok := fs["number"]; ok {
+		ci.Number = strings.TrimSpace(p.str(g, "the Colour Index number"))
+		if ci.Number != "" && !ciNumber.MatchString(ci.Number) {
+			p.errAt(g.val, fmt.Sprintf("Colour Index number %q of %s is not five digits with an optional ':n' suffix", ci.Number, what),
+				`write it like "77510" or "58000:1", quoted`)
+		}
+	}
+	if ci.Name == "" && ci.Number == "" {
+		p.errAt(f.val, "colour_index of "+what+" has neither name nor number", "give {name: Pigment Blue 27, number: \"77510\"} or leave colour_index out")
+		return nil
+	}
+	return ci
+}
+
+var milestoneKeys = []string{"kind", "date", "place", "source", "basis", "note", "allowance"}
+
+func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
+	n = deref(n)
+	fs := p.fields(n, "milestone", milestoneKeys)
+	if fs == nil {
+		return Milestone{}, false
+	}
+	ms := Milestone{File: p.file, Line: n.Line, Column: n.Column}
+	where := "a milestone of " + what
+	ok := true
+	kind := p.required(fs, "kind", where, n)
+	switch Kind(kind) {
+	case KindMade, KindSold, KindArrived, KindWithdrawn:
+		ms.Kind = Kind(kind)
+	case "":
+		ok = false
+	default:
+		hint := "kind is one of made, sold, arrived, withdrawn"
+		if s := nearestWords(strings.ToLower(kind), []string{"made", "sold", "arrived", "withdrawn"}, 1); len(s) == 1 {
+			hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
+		}
+		p.errAt(fs["kind"].val, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
+		ok = false
+	}
+	if f, has := fs["date"]; has {
+		text := strings.TrimSpace(p.str(f, "a date"))
+		if text == "" {
+			p.errAt(f.val, "empty date in "+where, `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
+			ok = false
+		} else if d, err := date.Parse(text); err != nil {
+			col := f.val.Column
+			var pe *date.ParseError
+			if errors.As(err, &pe) && f.val.Value == text {
+				if f.val.Style&(yaml.DoubleQuotedStyle|yaml.SingleQuotedStyle) != 0 {
+					col++
+				}
+				col += pe.Pos
+			}
+			p.errs = append(p.errs, &Error{File: p.file, Line: f.val.Line, Column: col,
+				Msg: fmt.Sprintf("bad date in %s: %v", where, err), Err: err,
+				Suggestion: `write an EDTF date such as "1856", "1830~", "18XX" or "1704/1706", quoted`})
+			ok = false
+		} else {
+			ms.Date = d
+		}
+	} else {
+		p.errAt(n, where+" has no \"date\"", "")
+		ok = false
+	}
+	if f, has := fs["place"]; has {
+		ms.Place = strings.TrimSpace(p.str(f, "a place"))
+		if ms.Place != "" && !p.regions.Valid(ms.Place) {
+			hint := "a place is an ISO 3166-1 alpha-2 code (\"NL\") or a UN M49 area code (\"155\", quoted)"
+			if s := p.regions.Suggest(ms.Place); len(s) > 0 {
+				hint = "did you mean " + orList(s) + "? (" + hint + ")"
+			}
+			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where)
+			if f.val.Tag == "!!int" {
+				msg += " (an unquoted number loses its leading zeros)"
+			}
+			p.errAt(f.val, msg, hint)
+			ok = false
+		}
+	}
+	if ms.Kind == KindArrived && ms.Place == "" && fs["place"].val == nil {
+		p.errAt(n, "an arrived milestone of "+what+" has no place", "add place: with the country or area code where it arrived")
+		ok = false
+	}
+	if f, has := fs["source"]; has {
+		ms.Source = strings.TrimSpace(p.str(f, "a source key"))
+	}
+	if ms.Source == "" {
+		p.errAt(n, where+" cites no source", "every milestone names a source key from the bibliography; write 'from-memory' as its basis if you could not check it")
+		ok = false
+	}
+	basis := p.required(fs, "basis", where, n)
+	switch Basis(basis) {
+	case BasisDocumented, BasisFromMemory:
+		ms.Basis = Basis(basis)
+	case "":
+		ok = false
+	default:
+		p.errAt(fs["basis"].val, fmt.Sprintf("unknown basis %q in %s", basis, where),
+			"basis is 'documented' (you read the claim in the source) or 'from-memory'")
+		ok = false
+	}
+	if f, has := fs["note"]; has {
+		ms.Note = strings.TrimSpace(p.str(f, "a note"))
+	}
+	if f, has := fs["allowance"]; has {
+		text := strings.TrimSpace(p.str(f, "an allowance"))
+		switch {
+		case ms.Kind != "" && ms.Kind != KindWithdrawn:
+			p.errAt(f.key, fmt.Sprintf("allowance on a %s milestone of %s", ms.Kind, what),
+				"only a withdrawn milestone has an allowance (how long stocks lingered); remove it here")
+			ok = false
+		case text == "":
+		default:
+			u, err := date.ParseDuration(text)
+			if err != nil {
+				p.errs = append(p.errs, &Error{File: p.file, Line: f.val.Line, Column: f.val.Column,
+					Msg: fmt.Sprintf("bad allowance in %s: %v", where, err), Err: err,
+					Suggestion: "write an ISO 8601 duration such as P10Y or P6M"})
+				ok = false
+			} else {
+				ms.Allowance = &u
+			}
+		}
+	}
+	return ms, ok
+}
+
+var idPattern = regexp.MustCompile(`^[a-z0-9]+(-[a-z0-9]+)*$`)
+
+func validID(s string) bool { return idPattern.MatchString(s) }
+
+// suggestID turns "Prussian Blue" into "prussian-blue".
+func suggestID(s string) string {
+	words := strings.FieldsFunc(s, func(r rune) bool {
+		return !(r >= 'a' && r <= 'z' || r >= 'A' && r <= 'Z' || r >= '0' && r <= '9' || r > 0x7f)
+	})
+	for i, w := range words {
+		words[i] = fold(w)
+	}
+	return strings.Join(slices.DeleteFunc(words, func(w string) bool { return w == "" }), "-")
+}
+
+// checkCAS checks the shape and check digit of a CAS Registry Number (the
+// check digit is the sum of the other digits, each times its position
+// counted from the right, modulo 10: the registry's published rule).
+func checkCAS(s string) (msg, hint string) {
+	parts := strings.Split(s, "-")
+	if len(parts) != 3 || len(parts[0]) < 2 || len(parts[0]) > 7 || len(parts[1]) != 2 || len(parts[2]) != 1 {
+		return "not a CAS Registry Number", "write it as digits in three groups, like 14038-43-8"
+	}
+	digits := parts[0] + parts[1]
+	sum := 0
+	for i := range len(digits) {
+		c := digits[len(digits)-1-i]
+		if c < '0' || c > '9' {
+			return "not a CAS Registry Number", "write it as digits in three groups, like 14038-43-8"
+		}
+		sum += int(c-'0') * (i + 1)
+	}
+	c := parts[2][0]
+	if c < '0' || c > '9' {
+		return "not a CAS Registry Number", "write it as digits in three groups, like 14038-43-8"
+	}
+	if want := byte('0' + sum%10); c != want {
+		return fmt.Sprintf("check digit is %c, but the digits before it give %c", c, want),
+			"check the number against the source; one digit is probably mistyped"
+	}
+	return "", ""
+}
