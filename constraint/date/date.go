@@ -1,12 +1,7 @@
-// Package date reads and writes historical dates as intervals of days.
-//
-// (The full package documentation — supported EDTF features, friendly forms,
-// the circa policy, durations and calendars — is written with the parser.)
 package date
 
 import (
 	"fmt"
-	"strconv"
 	"strings"
 )
 
@@ -24,8 +19,35 @@ const (
 	PrecisionMillennium
 )
 
+var precisionNames = [...]string{"day", "month", "season", "year", "decade", "century", "millennium"}
+
+// String returns the name of p as the case files write it ("year").
+func (p Precision) String() string {
+	if int(p) < len(precisionNames) {
+		return precisionNames[p]
+	}
+	return fmt.Sprintf("Precision(%d)", uint8(p))
+}
+
+// Calendar is the calendar a written date is read in.
+type Calendar uint8
+
+// The calendars. Every result is a [Day], whatever the input calendar.
+const (
+	CalendarGregorian Calendar = iota // proleptic Gregorian, the default
+	CalendarJulian                    // the Julian calendar, for documents dated before the reform
+)
+
+// String returns "Gregorian" or "Julian".
+func (c Calendar) String() string {
+	if c == CalendarJulian {
+		return "Julian"
+	}
+	return "Gregorian"
+}
+
 // Interval is a closed run of days. An open side (OpenStart, OpenEnd) is
-// unbounded and its First or Last is meaningless.
+// unbounded and its First or Last is meaningless (zero).
 type Interval struct {
 	First, Last        Day
 	OpenStart, OpenEnd bool
@@ -36,39 +58,42 @@ type Interval struct {
 type Date struct {
 	// Input is the text as written.
 	Input string
-	// Alternatives holds the intervals in ascending order; a plain date or
-	// an EDTF interval has exactly one.
+	// Alternatives holds the intervals in ascending order, disjoint and not
+	// touching (adjacent or overlapping members of a set are merged); a
+	// plain date or an EDTF interval has exactly one.
 	Alternatives []Interval
-	// Precision is the precision of the (first) written date.
+	// Precision is the precision of the first written date (the start of an
+	// interval, the first member of a set).
 	Precision Precision
 	// Approximate and Uncertain are the EDTF qualifiers "~" and "?" ("%"
-	// sets both), on any part of the date.
+	// sets both), true when any end of the date carries them.
 	Approximate, Uncertain bool
 	// OneOf marks a level-2 one-of set "[…]".
 	OneOf bool
 
-	edtf string
-	// parts keep what Widen needs: the precision and approximation of each end.
-	parts []part
-}
-
-type part struct {
-	precision              Precision
-	approxStart, approxEnd bool
+	edtf    string
+	members []member
+	widened bool
 }
 
 // ParseError is the error of every parse in this package.
 type ParseError struct {
 	Input string // the whole text
 	Pos   int    // byte offset of the problem in Input
-	Msg   string // what was expected
+	Msg   string // what was wrong and what was expected
+	hint  string
 }
 
 func (e *ParseError) Error() string {
 	return fmt.Sprintf("date %q at column %d: %s", e.Input, e.Pos+1, e.Msg)
 }
 
-// EDTF returns the canonical EDTF form of d.
+// Hint suggests a fix, or returns "".
+func (e *ParseError) Hint() string { return e.hint }
+
+// EDTF returns the canonical EDTF form of d, as parsed: friendly input
+// normalised, Julian dates converted to Gregorian days. [Date.Widen] does
+// not change it.
 func (d Date) EDTF() string { return d.edtf }
 
 // Earliest returns the first day d can be, or false when it is open.
@@ -87,93 +112,42 @@ func (d Date) Latest() (Day, bool) {
 	return d.Alternatives[len(d.Alternatives)-1].Last, true
 }
 
-// String returns d for people: "1874", "1874-05", "1200 BCE", "c. 1870".
-func (d Date) String() string { return d.edtf }
+// Widened reports whether d is the result of [Date.Widen].
+func (d Date) Widened() bool { return d.widened }
 
-// Parse reads EDTF or one of the friendly forms.
-//
-// This first version reads years, year-months and full dates, "~" and "?",
-// and "A/B" intervals; the full grammar replaces it.
-func Parse(s string) (Date, error) {
-	in := strings.TrimSpace(s)
-	d := Date{Input: s, edtf: in}
-	if a, b, ok := strings.Cut(in, "/"); ok {
-		first, p1, err := parseSimple(s, a)
-		if err != nil {
-			return Date{}, err
+// QualifiedEnds reports the qualifiers of the start and the end of d: for a
+// single date both ends carry the date's qualifiers; for an interval each
+// end its own; for a set, the qualifiers of the first member's start and the
+// last member's end.
+func (d Date) QualifiedEnds() (startApprox, startUncertain, endApprox, endUncertain bool) {
+	if len(d.members) == 0 {
+		return
+	}
+	first, last := d.members[0], d.members[len(d.members)-1]
+	if first.kind&openStart == 0 {
+		startApprox, startUncertain = first.start.approx, first.start.uncert
+	}
+	if last.kind&openEnd == 0 {
+		endApprox, endUncertain = last.end.approx, last.end.uncert
+	}
+	return
+}
+
+// String returns d for people: "1874", "May 1874", "1200 BCE",
+// "c. 1870", "1870 to 1879", "one of 1667, 1668, 1670 to 1672".
+func (d Date) String() string {
+	if len(d.members) == 0 {
+		return d.edtf
+	}
+	var b strings.Builder
+	if d.OneOf {
+		b.WriteString("one of ")
+	}
+	for i, m := range d.members {
+		if i > 0 {
+			b.WriteString(", ")
 		}
-		last, _, err := parseSimple(s, b)
-		if err != nil {
-			return Date{}, err
-		}
-		d.Alternatives = []Interval{{First: first.First, Last: last.Last}}
-		d.Precision = p1
-		return d, nil
+		m.people(&b, d.OneOf)
 	}
-	iv, p, err := parseSimple(s, in)
-	if err != nil {
-		return Date{}, err
-	}
-	d.Alternatives = []Interval{iv}
-	d.Precision = p
-	d.Approximate = strings.ContainsAny(in, "~%")
-	d.Uncertain = strings.ContainsAny(in, "?%")
-	return d, nil
+	return b.String()
 }
-
-func parseSimple(input, s string) (Interval, Precision, error) {
-	s = strings.TrimRight(s, "~?%")
-	neg := strings.HasPrefix(s, "-")
-	if neg {
-		s = s[1:]
-	}
-	fields := strings.Split(s, "-")
-	nums := make([]int64, len(fields))
-	for i, f := range fields {
-		n, err := strconv.ParseInt(f, 10, 64)
-		if err != nil {
-			return Interval{}, 0, &ParseError{Input: input, Msg: "expected a date such as 1874, 1874-05 or 1874-05-21"}
-		}
-		nums[i] = n
-	}
-	y := nums[0]
-	if neg {
-		y = -y
-	}
-	switch len(nums) {
-	case 1:
-		return Interval{First: Gregorian(y, 1, 1), Last: Gregorian(y, 12, 31)}, PrecisionYear, nil
-	case 2:
-		m := int(nums[1])
-		return Interval{First: Gregorian(y, m, 1), Last: Gregorian(y, m, DaysInMonth(y, m))}, PrecisionMonth, nil
-	case 3:
-		day := Gregorian(y, int(nums[1]), int(nums[2]))
-		return Interval{First: day, Last: day}, PrecisionDay, nil
-	}
-	return Interval{}, 0, &ParseError{Input: input, Msg: "expected a date such as 1874, 1874-05 or 1874-05-21"}
-}
-
-// Duration is an ISO 8601 duration in calendar units ("P1Y6M", "P10D").
-type Duration struct {
-	Years, Months, Weeks, Days int64
-}
-
-// ParseDuration reads an ISO 8601 duration of years, months, weeks and days.
-func ParseDuration(s string) (Duration, error) {
-	return Duration{}, &ParseError{Input: s, Msg: "durations are not read yet"}
-}
-
-// MinDays is the fewest days the duration can span (years of 365 days,
-// months of 28): what an "at least" gap uses.
-func (u Duration) MinDays() int64 { return u.Years*365 + u.Months*28 + u.Weeks*7 + u.Days }
-
-// MaxDays is the most days the duration can span (years of 366 days,
-// months of 31): what an "at most" gap uses.
-func (u Duration) MaxDays() int64 { return u.Years*366 + u.Months*31 + u.Weeks*7 + u.Days }
-
-// Circa is the widening policy for approximate ("~") dates: how far each
-// side of an approximate date moves out, by the precision it was written in.
-type Circa map[Precision]Duration
-
-// Widen returns d with every approximate part moved out by the policy.
-func (d Date) Widen(c Circa) Date { return d }

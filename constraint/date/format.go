@@ -1,0 +1,308 @@
+package date
+
+import "strings"
+
+var monthNames = [12]string{"January", "February", "March", "April", "May", "June",
+	"July", "August", "September", "October", "November", "December"}
+
+var divisionNames = [...]string{
+	21: "spring", 22: "summer", 23: "autumn", 24: "winter",
+	25: "northern spring", 26: "northern summer", 27: "northern autumn", 28: "northern winter",
+	29: "southern spring", 30: "southern summer", 31: "southern autumn", 32: "southern winter",
+	33: "first quarter", 34: "second quarter", 35: "third quarter", 36: "fourth quarter",
+	37: "first third", 38: "second third", 39: "last third",
+	40: "first half", 41: "second half",
+}
+
+// JulianDaysInMonth returns the number of days of month m of year y of the
+// Julian calendar, where every fourth year (astronomical numbering) is a
+// leap year.
+func JulianDaysInMonth(y int64, m int) int {
+	if m == 2 {
+		if y%4 == 0 {
+			return 29
+		}
+		return 28
+	}
+	return DaysInMonth(1, m)
+}
+
+func itoa(v int) string { return string(appendInt(nil, int64(v))) }
+
+func twoDigits(v int) string { return string([]byte{byte('0' + v/10%10), byte('0' + v%10)}) }
+
+func appendInt(b []byte, v int64) []byte {
+	if v < 0 {
+		b = append(b, '-')
+		v = -v
+	}
+	var tmp [20]byte
+	i := len(tmp)
+	for {
+		i--
+		tmp[i] = byte('0' + v%10)
+		v /= 10
+		if v == 0 {
+			break
+		}
+	}
+	return append(b, tmp[i:]...)
+}
+
+func append2(b []byte, v int) []byte { return append(b, byte('0'+v/10%10), byte('0'+v%10)) }
+
+// appendYear writes an EDTF year: four digits with a sign before years
+// below 0, X for unspecified digits, and the Y prefix for years of more
+// than four digits.
+func appendYear(b []byte, y int64, yx uint8) []byte {
+	a := y
+	if a < 0 {
+		a = -a
+	}
+	if a > 9999 {
+		b = append(b, 'Y')
+		return appendInt(b, y)
+	}
+	if y < 0 {
+		b = append(b, '-')
+	}
+	digits := [4]byte{byte('0' + a/1000), byte('0' + a/100%10), byte('0' + a/10%10), byte('0' + a%10)}
+	for k := 0; k < int(yx) && k < 4; k++ {
+		digits[3-k] = 'X'
+	}
+	return append(b, digits[:]...)
+}
+
+func appendQual(b []byte, approx, uncert bool) []byte {
+	switch {
+	case approx && uncert:
+		return append(b, '%')
+	case approx:
+		return append(b, '~')
+	case uncert:
+		return append(b, '?')
+	}
+	return b
+}
+
+func appendDay(b []byte, d Day) []byte {
+	y, m, dd := d.Civil()
+	b = appendYear(b, y, 0)
+	b = append(b, '-')
+	b = append2(b, m)
+	b = append(b, '-')
+	return append2(b, dd)
+}
+
+const (
+	roleSingle = iota
+	roleStart
+	roleEnd
+)
+
+// appendPoint writes pt in EDTF. A Julian date is written as the Gregorian
+// day or days it names: one day, or first and last joined by sep.
+func appendPoint(b []byte, pt point, role int, sep string) []byte {
+	if pt.cal == CalendarJulian {
+		switch {
+		case role == roleStart || (role == roleSingle && pt.first == pt.last):
+			b = appendDay(b, pt.first)
+			b = append(b, pt.time...)
+		case role == roleEnd:
+			b = appendDay(b, pt.last)
+		default:
+			b = appendDay(b, pt.first)
+			b = appendQual(b, pt.approx, pt.uncert)
+			b = append(b, sep...)
+			b = appendDay(b, pt.last)
+		}
+		return appendQual(b, pt.approx, pt.uncert)
+	}
+	b = appendYear(b, pt.year, pt.yx)
+	if pt.month != 0 || pt.mx != 0 {
+		b = append(b, '-')
+		switch pt.mx {
+		case 2:
+			b = append(b, 'X', 'X')
+		case 1:
+			b = append(b, '0'+pt.month/10, 'X')
+		default:
+			b = append2(b, int(pt.month))
+		}
+		if pt.day != 0 || pt.dx != 0 {
+			b = append(b, '-')
+			switch pt.dx {
+			case 2:
+				b = append(b, 'X', 'X')
+			case 1:
+				b = append(b, '0'+pt.day/10, 'X')
+			default:
+				b = append2(b, int(pt.day))
+			}
+		}
+	}
+	b = append(b, pt.time...)
+	return appendQual(b, pt.approx, pt.uncert)
+}
+
+func appendMember(b []byte, m member, inSet bool) []byte {
+	if m.kind&ranged == 0 {
+		sep := "/"
+		if inSet {
+			sep = ".."
+		}
+		return appendPoint(b, m.start, roleSingle, sep)
+	}
+	if inSet {
+		if m.kind&openStart == 0 {
+			b = appendPoint(b, m.start, roleStart, "")
+		}
+		b = append(b, ".."...)
+		if m.kind&openEnd == 0 {
+			b = appendPoint(b, m.end, roleEnd, "")
+		}
+		return b
+	}
+	switch {
+	case m.kind&openStart != 0:
+		b = append(b, ".."...)
+	case m.kind&unknownStart != 0:
+	default:
+		b = appendPoint(b, m.start, roleStart, "")
+	}
+	b = append(b, '/')
+	switch {
+	case m.kind&openEnd != 0:
+		b = append(b, ".."...)
+	case m.kind&unknownEnd != 0:
+	default:
+		b = appendPoint(b, m.end, roleEnd, "")
+	}
+	return b
+}
+
+// canonical writes the EDTF form of the members, reusing the input text
+// when it is already canonical.
+func (p *parser) canonical(ms []member, oneOf bool) string {
+	var buf [64]byte
+	b := buf[:0]
+	if oneOf {
+		b = append(b, '[')
+		for i, m := range ms {
+			if i > 0 {
+				b = append(b, setSep...)
+			}
+			b = appendMember(b, m, true)
+		}
+		b = append(b, ']')
+	} else {
+		b = appendMember(b, ms[0], false)
+	}
+	lo, hi := p.trim(0, len(p.in))
+	if string(b) == p.in[lo:hi] {
+		return p.in[lo:hi]
+	}
+	return string(b)
+}
+
+// setSep separates the members of a set in the canonical form.
+const setSep = ","
+
+// edtfString is the EDTF of one point, for messages.
+func (pt point) edtfString() string { return string(appendPoint(nil, pt, roleSingle, "/")) }
+
+// yearPeople writes a year for people: 1874, AD 79, 1200 BCE.
+func yearPeople(b *strings.Builder, y int64) {
+	switch {
+	case y >= 1000:
+		b.Write(appendInt(nil, y))
+	case y >= 1:
+		b.WriteString("AD ")
+		b.Write(appendInt(nil, y))
+	default:
+		b.Write(appendInt(nil, 1-y))
+		b.WriteString(" BCE")
+	}
+}
+
+func (pt point) people(b *strings.Builder) {
+	if pt.approx {
+		b.WriteString("c. ")
+	}
+	if pt.yx > 0 {
+		switch {
+		case pt.year >= 1000 && pt.yx <= 2:
+			b.Write(appendInt(nil, pt.year))
+			b.WriteByte('s')
+		default:
+			lo, _, _ := civilIn(pt.first, pt.cal)
+			hi, _, _ := civilIn(pt.last, pt.cal)
+			yearPeople(b, lo)
+			b.WriteString(" to ")
+			yearPeople(b, hi)
+		}
+	} else {
+		switch {
+		case pt.month > 12:
+			b.WriteString(divisionNames[pt.month])
+			b.WriteByte(' ')
+		case pt.mx == 1 && pt.month == 0:
+			b.WriteString("January to September ")
+		case pt.mx == 1:
+			b.WriteString("October to December ")
+		case pt.month != 0 && pt.mx == 0:
+			switch pt.dx {
+			case 0:
+				if pt.day != 0 {
+					b.Write(appendInt(nil, int64(pt.day)))
+					b.WriteByte(' ')
+				}
+			case 1:
+				_, _, dlo := civilIn(pt.first, pt.cal)
+				_, _, dhi := civilIn(pt.last, pt.cal)
+				b.Write(appendInt(nil, int64(dlo)))
+				b.WriteString(" to ")
+				b.Write(appendInt(nil, int64(dhi)))
+				b.WriteByte(' ')
+			}
+			b.WriteString(monthNames[pt.month-1])
+			b.WriteByte(' ')
+		}
+		yearPeople(b, pt.year)
+	}
+	if pt.time != "" {
+		b.WriteByte(' ')
+		b.WriteString(pt.time[1:])
+	}
+	if pt.cal == CalendarJulian {
+		b.WriteString(" (Julian)")
+	}
+	if pt.uncert {
+		b.WriteByte('?')
+	}
+}
+
+func (m member) people(b *strings.Builder, inSet bool) {
+	if m.kind&ranged == 0 {
+		m.start.people(b)
+		return
+	}
+	switch {
+	case m.kind&openStart != 0:
+		b.WriteString("up to ")
+		m.end.people(b)
+	case m.kind&unknownStart != 0:
+		b.WriteString("from an unknown date to ")
+		m.end.people(b)
+	case m.kind&openEnd != 0:
+		m.start.people(b)
+		b.WriteString(" or later")
+	case m.kind&unknownEnd != 0:
+		m.start.people(b)
+		b.WriteString(" to an unknown date")
+	default:
+		m.start.people(b)
+		b.WriteString(" to ")
+		m.end.people(b)
+	}
+}

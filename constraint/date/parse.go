@@ -1,0 +1,1090 @@
+package date
+
+import (
+	"slices"
+	"strings"
+)
+
+// maxInput is the longest text Parse reads; longer input is an error, so
+// that a date can never make the parser do unbounded work.
+const maxInput = 1024
+
+// maxYear bounds the absolute value of a year. Day numbers of such years
+// stay far inside int64, also after widening.
+const maxYear = 999_999_999_999
+
+// point is one written calendar date: a year, perhaps a month or season,
+// perhaps a day, with its qualifiers and the run of days it names.
+type point struct {
+	year  int64  // astronomical year, X digits read as 0 (187X → 1870, -18XX → -1800)
+	yx    uint8  // unspecified (X) trailing digits of the year
+	month uint8  // 0 none; 1–12 a month; 21–41 a season or other division
+	mx    uint8  // unspecified trailing digits of the month
+	day   uint8  // 0 none
+	dx    uint8  // unspecified trailing digits of the day
+	time  string // a time of day as written ("T23:20:30Z"); kept, never used
+	cal   Calendar
+	prec  Precision
+
+	approx, uncert bool
+
+	first, last Day
+}
+
+// member is one element of a date: a single point, or a run from start to
+// end (an interval, a set range, a friendly "early 1870s").
+type member struct {
+	start, end point
+	kind       uint8
+}
+
+const (
+	ranged       = 1 << iota // start..end rather than one point
+	openStart                // ".." start: unbounded
+	openEnd                  // ".." end: unbounded
+	unknownStart             // empty start: unknown, read as unbounded
+	unknownEnd               // empty end: unknown, read as unbounded
+	friendly                 // a friendly form that EDTF writes as an interval
+)
+
+func (m member) interval() Interval {
+	var iv Interval
+	if m.kind&(openStart|unknownStart) != 0 {
+		iv.OpenStart = true
+	} else {
+		iv.First = m.start.first
+	}
+	if m.kind&(openEnd|unknownEnd) != 0 {
+		iv.OpenEnd = true
+	} else {
+		iv.Last = m.end.last
+	}
+	return iv
+}
+
+type parser struct {
+	in  string
+	cal Calendar
+}
+
+func (p *parser) fail(pos int, msg string) *ParseError {
+	return &ParseError{Input: p.in, Pos: pos, Msg: msg}
+}
+
+func (p *parser) failHint(pos int, msg, hint string) *ParseError {
+	return &ParseError{Input: p.in, Pos: pos, Msg: msg, hint: hint}
+}
+
+// Parse reads a date written in EDTF or in one of the friendly forms (see
+// the package documentation) on the proleptic Gregorian calendar, unless the
+// text ends with a Julian marker. Every error is a *[ParseError].
+func Parse(s string) (Date, error) { return ParseIn(s, CalendarGregorian) }
+
+// ParseIn is [Parse] with the calendar that unmarked dates are read in. A
+// marker at the end of the text ("(Julian)", "O.S.", "(Gregorian)", "N.S.")
+// overrides cal.
+func ParseIn(s string, cal Calendar) (Date, error) {
+	p := parser{in: s, cal: cal}
+	if len(s) > maxInput {
+		return Date{}, p.fail(maxInput, "text too long for a date (more than 1024 bytes)")
+	}
+	lo, hi := p.trim(0, len(s))
+	if lo == hi {
+		return Date{}, p.failHint(lo, "empty date: expected EDTF such as 1874, 1874-05-21 or 1870/1879",
+			"write a year (1874), a month (1874-05), a day (1874-05-21) or an interval (1870/1879)")
+	}
+	hi = p.calendarMarker(lo, hi)
+	if lo == hi {
+		return Date{}, p.fail(lo, "expected a date before the calendar marker")
+	}
+	ms, oneOf, err := p.top(lo, hi)
+	if err != nil {
+		return Date{}, err
+	}
+	return p.finish(ms, oneOf), nil
+}
+
+func isSpace(c byte) bool { return c == ' ' || c == '\t' || c == '\n' || c == '\r' }
+func isDigit(c byte) bool { return c >= '0' && c <= '9' }
+
+func (p *parser) trim(lo, hi int) (int, int) {
+	for lo < hi && isSpace(p.in[lo]) {
+		lo++
+	}
+	for hi > lo && isSpace(p.in[hi-1]) {
+		hi--
+	}
+	return lo, hi
+}
+
+// hasFold reports whether s[lo:hi] begins with word, ignoring ASCII case.
+func hasFold(s string, lo, hi int, word string) bool {
+	return hi-lo >= len(word) && strings.EqualFold(s[lo:lo+len(word)], word)
+}
+
+// endsFold reports whether s[lo:hi] ends with word, ignoring ASCII case.
+func endsFold(s string, lo, hi int, word string) bool {
+	return hi-lo >= len(word) && strings.EqualFold(s[hi-len(word):hi], word)
+}
+
+var julianMarkers = []string{"(julian)", "julian", "(o.s.)", "o.s.", "(os)", "os"}
+var gregorianMarkers = []string{"(gregorian)", "gregorian", "(n.s.)", "n.s.", "(ns)", "ns"}
+
+// calendarMarker strips a trailing calendar marker, which must follow a
+// space, and sets the calendar.
+func (p *parser) calendarMarker(lo, hi int) int {
+	for _, set := range [...]struct {
+		cal   Calendar
+		words []string
+	}{{CalendarJulian, julianMarkers}, {CalendarGregorian, gregorianMarkers}} {
+		for _, w := range set.words {
+			if endsFold(p.in, lo, hi, w) && hi-len(w) > lo && isSpace(p.in[hi-len(w)-1]) {
+				p.cal = set.cal
+				_, h := p.trim(lo, hi-len(w))
+				return h
+			}
+		}
+	}
+	return hi
+}
+
+// top reads the whole expression: a set, a friendly bound, an interval or
+// a single date.
+func (p *parser) top(lo, hi int) ([]member, bool, error) {
+	s := p.in
+	switch s[lo] {
+	case '[':
+		ms, err := p.set(lo, hi)
+		return ms, true, err
+	case '{':
+		return nil, false, p.failHint(lo, "an all-of set {…} names several dates at once; a date here is one run of days",
+			"for one of several dates write a one-of set: [1667,1668]")
+	}
+	if ms, ok, err := p.bound(lo, hi); ok {
+		return ms, false, err
+	}
+	if k := strings.IndexByte(s[lo:hi], '/'); k >= 0 {
+		m, err := p.interval(lo, lo+k, hi)
+		return []member{m}, false, err
+	}
+	if a, b, ok := p.rangeSplit(lo, hi); ok {
+		m, err := p.span(lo, a, b, hi)
+		return []member{m}, false, err
+	}
+	m, err := p.pointish(lo, hi)
+	return []member{m}, false, err
+}
+
+// bound reads the friendly one-sided and two-sided forms: "before X",
+// "after X", "not before X", "not after X", "between X and Y".
+func (p *parser) bound(lo, hi int) ([]member, bool, error) {
+	s := p.in
+	word := func(w string) bool {
+		return hasFold(s, lo, hi, w) && lo+len(w) < hi && isSpace(s[lo+len(w)])
+	}
+	switch {
+	case word("not before"), word("no earlier than"), word("from"), word("since"):
+		n := len("not before")
+		switch {
+		case word("no earlier than"):
+			n = len("no earlier than")
+		case word("from"):
+			n = len("from")
+		case word("since"):
+			n = len("since")
+		}
+		m, err := p.pointish(lo+n, hi)
+		if err != nil {
+			return nil, true, err
+		}
+		return []member{{start: m.start, kind: ranged | openEnd | friendly}}, true, nil
+	case word("not after"), word("no later than"), word("by"), word("until"):
+		n := len("not after")
+		switch {
+		case word("no later than"):
+			n = len("no later than")
+		case word("by"):
+			n = len("by")
+		case word("until"):
+			n = len("until")
+		}
+		m, err := p.pointish(lo+n, hi)
+		if err != nil {
+			return nil, true, err
+		}
+		return []member{{end: m.end, kind: ranged | openStart | friendly}}, true, nil
+	case word("before"):
+		m, err := p.pointish(lo+len("before"), hi)
+		if err != nil {
+			return nil, true, err
+		}
+		e := m.start
+		if e.time == "" {
+			e = p.pointAt(m.start.first-1, m.start)
+		}
+		return []member{{end: e, kind: ranged | openStart | friendly}}, true, nil
+	case word("after"):
+		m, err := p.pointish(lo+len("after"), hi)
+		if err != nil {
+			return nil, true, err
+		}
+		st := m.end
+		if st.time == "" {
+			st = p.pointAt(m.end.last+1, m.end)
+		}
+		return []member{{start: st, kind: ranged | openEnd | friendly}}, true, nil
+	case word("between"):
+		b := lo + len("between")
+		k := indexFold(s[b:hi], " and ")
+		if k < 0 {
+			return nil, true, p.fail(hi, `expected "between X and Y"`)
+		}
+		m, err := p.span(lo+len("between"), b+k, b+k+len(" and "), hi)
+		return []member{m}, true, err
+	}
+	return nil, false, nil
+}
+
+func indexFold(s, sub string) int {
+	for i := 0; i+len(sub) <= len(s); i++ {
+		if strings.EqualFold(s[i:i+len(sub)], sub) {
+			return i
+		}
+	}
+	return -1
+}
+
+// pointAt makes the point of the given precision class that holds day d,
+// in the calendar of like, keeping like's qualifiers: the year, month or
+// day just before or after a date.
+func (p *parser) pointAt(d Day, like point) point {
+	y, m, dd := civilIn(d, like.cal)
+	pt := point{year: y, cal: like.cal, approx: like.approx, uncert: like.uncert}
+	switch {
+	case like.prec == PrecisionDay:
+		pt.month, pt.day = uint8(m), uint8(dd)
+	case like.prec <= PrecisionSeason:
+		pt.month = uint8(m)
+	}
+	pt.span()
+	return pt
+}
+
+// rangeSplit finds a friendly range "1870-1875", "1870 - 1875",
+// "1870–1875" or "1870 to 1875": the end of the first part and the start
+// of the second.
+func (p *parser) rangeSplit(lo, hi int) (int, int, bool) {
+	s := p.in[lo:hi]
+	for _, sep := range []string{" – ", "–", " — ", "—", " - ", " to "} {
+		if k := indexFold(s, sep); k > 0 {
+			return lo + k, lo + k + len(sep), true
+		}
+	}
+	// 1870-1875 and 1870s-1880s: a year (or decade), a hyphen, four digits.
+	i := 0
+	for i < len(s) && isDigit(s[i]) {
+		i++
+	}
+	if i == 4 && i+1 < len(s) && s[i] == 's' {
+		i++
+	}
+	if i >= 4 && i+5 <= len(s) && s[i] == '-' && isDigit(s[i+1]) && isDigit(s[i+2]) && isDigit(s[i+3]) && isDigit(s[i+4]) {
+		return lo + i, lo + i + 1, true
+	}
+	return 0, 0, false
+}
+
+// span reads a two-part friendly range whose parts are [lo,a) and [b,hi).
+func (p *parser) span(lo, a, b, hi int) (member, error) {
+	m1, err := p.pointish(lo, a)
+	if err != nil {
+		return member{}, err
+	}
+	m2, err := p.pointish(b, hi)
+	if err != nil {
+		return member{}, err
+	}
+	m := member{start: m1.start, end: m2.end, kind: ranged}
+	return m, p.ordered(m, a)
+}
+
+func (p *parser) ordered(m member, pos int) error {
+	if m.start.first > m.end.last {
+		return p.failHint(pos, "the interval ends before it starts",
+			"write the earlier date first: "+m.end.edtfString()+"/"+m.start.edtfString())
+	}
+	return nil
+}
+
+// interval reads an EDTF interval "A/B"; slash is the position of "/".
+func (p *parser) interval(lo, slash, hi int) (member, error) {
+	s := p.in
+	if k := strings.IndexByte(s[slash+1:hi], '/'); k >= 0 {
+		return member{}, p.fail(slash+1+k, "an interval has one \"/\"")
+	}
+	m := member{kind: ranged}
+	a, b := p.trim(lo, slash)
+	switch {
+	case a == b:
+		m.kind |= unknownStart
+	case s[a:b] == "..":
+		m.kind |= openStart
+	default:
+		x, err := p.pointish(a, b)
+		if err != nil {
+			return member{}, err
+		}
+		m.start = x.start
+	}
+	a, b = p.trim(slash+1, hi)
+	switch {
+	case a == b:
+		m.kind |= unknownEnd
+	case s[a:b] == "..":
+		m.kind |= openEnd
+	default:
+		x, err := p.pointish(a, b)
+		if err != nil {
+			return member{}, err
+		}
+		m.end = x.end
+	}
+	if m.kind&(openStart|unknownStart) != 0 && m.kind&(openEnd|unknownEnd) != 0 {
+		return member{}, p.failHint(slash, "an interval needs at least one date",
+			"write 1850/.. (from 1850 on) or ../1900 (up to 1900)")
+	}
+	if m.kind&(openStart|unknownStart|openEnd|unknownEnd) == 0 {
+		if err := p.ordered(m, slash); err != nil {
+			return member{}, err
+		}
+	}
+	return m, nil
+}
+
+// set reads a level-2 one-of set "[a, b, c..d, ..e, f..]".
+func (p *parser) set(lo, hi int) ([]member, error) {
+	s := p.in
+	if s[hi-1] != ']' {
+		return nil, p.fail(hi, `expected "]" to close the set`)
+	}
+	var ms []member
+	i := lo + 1
+	for {
+		j := i
+		for j < hi-1 && s[j] != ',' {
+			j++
+		}
+		a, b := p.trim(i, j)
+		if a == b {
+			return nil, p.fail(a, "expected a date in the set")
+		}
+		m, err := p.setMember(a, b)
+		if err != nil {
+			return nil, err
+		}
+		ms = append(ms, m)
+		if j >= hi-1 {
+			break
+		}
+		i = j + 1
+	}
+	return ms, nil
+}
+
+func (p *parser) setMember(a, b int) (member, error) {
+	s := p.in
+	k := strings.Index(s[a:b], "..")
+	if k < 0 {
+		return p.pointish(a, b)
+	}
+	k += a
+	switch {
+	case k == a:
+		x, err := p.pointish(k+2, b)
+		if err != nil {
+			return member{}, err
+		}
+		return member{end: x.end, kind: ranged | openStart}, nil
+	case k+2 == b:
+		x, err := p.pointish(a, k)
+		if err != nil {
+			return member{}, err
+		}
+		return member{start: x.start, kind: ranged | openEnd}, nil
+	}
+	x, err := p.pointish(a, k)
+	if err != nil {
+		return member{}, err
+	}
+	y, err := p.pointish(k+2, b)
+	if err != nil {
+		return member{}, err
+	}
+	m := member{start: x.start, end: y.end, kind: ranged}
+	return m, p.ordered(m, k)
+}
+
+var circaWords = []string{"circa", "approximately", "approx.", "approx", "about", "around", "ca.", "ca", "c."}
+
+// pointish reads one date with the friendly forms: a circa word, "early",
+// "mid", "late", "1870s", era names (BCE, AD), and the EDTF date itself.
+func (p *parser) pointish(lo, hi int) (member, error) {
+	s := p.in
+	lo, hi = p.trim(lo, hi)
+	if lo == hi {
+		return member{}, p.failHint(lo, "expected a date", "write a year (1874), a month (1874-05) or a day (1874-05-21)")
+	}
+	var approx, uncert, friendlyForm bool
+	// A circa word: "c. 1870", "c.1870", "ca 1870", "circa 1870".
+	for _, w := range circaWords {
+		if !hasFold(s, lo, hi, w) {
+			continue
+		}
+		n := lo + len(w)
+		if n < hi && (isSpace(s[n]) || (w[len(w)-1] == '.' && isDigit(s[n]))) {
+			approx, friendlyForm = true, true
+			lo, hi = p.trim(n, hi)
+			break
+		}
+	}
+	if !approx && hi-lo > 2 && (s[lo] == 'c' || s[lo] == 'C') && isSpace(s[lo+1]) {
+		approx, friendlyForm = true, true
+		lo, hi = p.trim(lo+2, hi)
+	}
+	// Early, mid, late.
+	frac := 0
+	for i, w := range []string{"early", "mid", "late"} {
+		if hasFold(s, lo, hi, w) && lo+len(w) < hi && (isSpace(s[lo+len(w)]) || s[lo+len(w)] == '-') {
+			frac = i + 1
+			lo, hi = p.trim(lo+len(w)+1, hi)
+			break
+		}
+	}
+	// Trailing qualifiers.
+	q := hi
+	for q > lo && (s[q-1] == '?' || s[q-1] == '~' || s[q-1] == '%') {
+		q--
+	}
+	if hi-q > 2 || (hi-q == 2 && (s[q] == s[q+1] || s[q] == '%' || s[q+1] == '%')) {
+		return member{}, p.failHint(q, "too many qualifiers", "write one: ? (uncertain), ~ (approximate) or % (both)")
+	}
+	for _, c := range []byte(s[q:hi]) {
+		switch c {
+		case '?':
+			uncert = true
+		case '~':
+			approx = true
+		case '%':
+			approx, uncert = true, true
+		}
+	}
+	hi = q
+	_, hi = p.trim(lo, hi)
+	if lo == hi {
+		return member{}, p.fail(lo, "expected a date before the qualifier")
+	}
+	var pt point
+	pt.cal = p.cal
+	era, eraLo, eraHi := p.era(lo, hi)
+	switch {
+	case era != 0:
+		if era == eraAD && eraLo == lo {
+			lo = eraHi
+		} else {
+			hi = eraLo
+		}
+		lo, hi = p.trim(lo, hi)
+		if err := p.eraYear(lo, hi, era, &pt); err != nil {
+			return member{}, err
+		}
+		friendlyForm = true
+	case hi-lo >= 4 && (s[hi-1] == 's' || s[hi-1] == 'S') && isDigit(s[lo]):
+		if err := p.plural(lo, hi, &pt); err != nil {
+			return member{}, err
+		}
+		friendlyForm = true
+	default:
+		i, err := p.core(lo, hi, &pt)
+		if err != nil {
+			return member{}, err
+		}
+		if i < hi {
+			return member{}, p.unexpected(i, hi)
+		}
+	}
+	pt.approx, pt.uncert = approx, uncert
+	if frac != 0 {
+		if pt.yx != 1 && pt.yx != 2 || pt.month != 0 {
+			return member{}, p.failHint(lo, "early, mid and late apply to a decade or a century",
+				"write early 1870s or late 1800s")
+		}
+		return fraction(pt, frac), nil
+	}
+	_ = friendlyForm
+	return member{start: pt, end: pt}, nil
+}
+
+func (p *parser) unexpected(i, hi int) *ParseError {
+	s := p.in
+	switch c := s[i]; {
+	case c == '?' || c == '~' || c == '%':
+		return p.failHint(i, "a qualifier stands at the end of a date in this version",
+			"write the qualifier after the whole date: 2004-06-11?")
+	case c == '-' && i+1 < hi && isDigit(s[i+1]):
+		return p.failHint(i, "expected the end of the date after the day",
+			"a date has at most a year, a month and a day: 1874-05-21")
+	case c == 'T':
+		return p.fail(i, "expected a time hh:mm:ss after T")
+	case c == 'X':
+		return p.failHint(i, "unspecified digits (X) replace digits, they do not follow them", "write 187X or 1874-XX")
+	}
+	return p.failHint(i, "unexpected "+quoteChar(s, i)+" after the date",
+		"EDTF dates look like 1874, 1874-05, 1874-05-21, 187X, 1874~ or 1870/1879")
+}
+
+func quoteChar(s string, i int) string {
+	j := i + 1
+	for j < len(s) && s[j]&0xC0 == 0x80 {
+		j++
+	}
+	return `"` + s[i:j] + `"`
+}
+
+// fraction makes the friendly "early", "mid" or "late" part of a decade
+// or century: the thirds 0–3, 3–6, 6–9 of a decade and 00–33, 33–66,
+// 66–99 of a century, overlapping by one year at the seams.
+func fraction(pt point, frac int) member {
+	step := int64(3)
+	if pt.yx == 2 {
+		step = 33
+	}
+	base := pt.year
+	a := point{year: base + int64(frac-1)*step, cal: pt.cal, approx: pt.approx, uncert: pt.uncert}
+	b := a
+	b.year = a.year + step
+	a.span()
+	b.span()
+	return member{start: a, end: b, kind: ranged | friendly}
+}
+
+const (
+	eraBCE = 1 + iota
+	eraAD
+)
+
+var eraBCEWords = []string{"b.c.e.", "bce", "b.c.", "bc"}
+var eraADWords = []string{"a.d.", "ad", "c.e.", "ce"}
+
+// era finds an era name after the year ("1200 BCE", "79 AD") or "AD"
+// before it ("AD 79"); it returns where the name stands.
+func (p *parser) era(lo, hi int) (int, int, int) {
+	s := p.in
+	for _, w := range eraBCEWords {
+		if endsFold(s, lo, hi, w) && hi-len(w) > lo && (isSpace(s[hi-len(w)-1]) || isDigit(s[hi-len(w)-1])) {
+			return eraBCE, hi - len(w), hi
+		}
+	}
+	for _, w := range eraADWords {
+		if endsFold(s, lo, hi, w) && hi-len(w) > lo && (isSpace(s[hi-len(w)-1]) || isDigit(s[hi-len(w)-1])) {
+			return eraAD, hi - len(w), hi
+		}
+	}
+	for _, w := range eraADWords[:2] {
+		if hasFold(s, lo, hi, w) && lo+len(w) < hi && isSpace(s[lo+len(w)]) {
+			return eraAD, lo, lo + len(w)
+		}
+	}
+	return 0, 0, 0
+}
+
+// eraYear reads the year number before or after an era name: 1200 BCE is
+// the astronomical year -1199, AD 79 the year 79.
+func (p *parser) eraYear(lo, hi int, era int, pt *point) error {
+	s := p.in
+	if lo == hi {
+		return p.fail(lo, "expected a year with the era")
+	}
+	var v int64
+	for i := lo; i < hi; i++ {
+		if !isDigit(s[i]) {
+			return p.failHint(i, "expected the digits of a year with the era",
+				"write a whole year, such as 1200 BCE or AD 79; for months and days use EDTF with astronomical years (-1199-05)")
+		}
+		if i-lo >= 12 {
+			return p.fail(lo, "year out of range: this package reads years up to 999999999999")
+		}
+		v = v*10 + int64(s[i]-'0')
+	}
+	if v == 0 {
+		return p.failHint(lo, "there is no year 0 in the BCE/AD count", "1 BCE is followed by AD 1; in EDTF 1 BCE is 0000")
+	}
+	if era == eraBCE {
+		pt.year = 1 - v
+	} else {
+		pt.year = v
+	}
+	pt.span()
+	return nil
+}
+
+// plural reads "1870s" (the decade 187X) and "1800s" (the century 18XX:
+// a year ending in 00 reads as the wider century).
+func (p *parser) plural(lo, hi int, pt *point) error {
+	s := p.in
+	end := hi - 1
+	if end-lo >= 2 && (s[end-1] == '\'' || s[end-1] == '`') {
+		end--
+	}
+	for i := lo; i < end; i++ {
+		if !isDigit(s[i]) {
+			return p.failHint(i, "expected a decade such as 1870s", "write 1870s (the decade) or 1800s (the century)")
+		}
+	}
+	n := end - lo
+	if n < 3 || n > 4 {
+		return p.failHint(lo, "expected a decade of three or four digits, such as 1870s", "write 1870s or 870s")
+	}
+	if s[end-1] != '0' {
+		return p.failHint(end-1, "a decade ends in 0: 1870s", "for one year write 1874")
+	}
+	var v int64
+	for i := lo; i < end; i++ {
+		v = v*10 + int64(s[i]-'0')
+	}
+	pt.year = v
+	pt.yx = 1
+	if s[end-2] == '0' {
+		pt.yx = 2
+	}
+	pt.span()
+	return nil
+}
+
+// core reads an EDTF date from s[i:hi] (years, months or seasons, days,
+// X digits, a time of day; no qualifiers) and returns where it stopped.
+func (p *parser) core(i, hi int, pt *point) (int, error) {
+	s := p.in
+	if s[i] == 'Y' {
+		return p.longYear(i, hi, pt)
+	}
+	neg := false
+	if s[i] == '-' {
+		neg = true
+		i++
+	}
+	j := i
+	for i < hi && (isDigit(s[i]) || s[i] == 'X') {
+		i++
+	}
+	n := i - j
+	if n < 4 {
+		if n == 0 {
+			return i, p.failHint(j, "expected a year of four digits", "write 1874, 0079, -1199 (1200 BCE), 187X or c. 1870")
+		}
+		return i, p.failHint(j, "expected a year of four digits",
+			"EDTF years have four digits: write "+strings.Repeat("0", 4-n)+s[j:i]+" or AD "+s[j:i]+" (and 1200 BCE for years before the era)")
+	}
+	seenX := false
+	var v int64
+	for k := j; k < i; k++ {
+		c := s[k]
+		if c == 'X' {
+			if n > 4 {
+				return k, p.fail(k, "unspecified digits (X) are read in four-digit years only")
+			}
+			seenX = true
+			pt.yx++
+			v *= 10
+			continue
+		}
+		if seenX {
+			return k, p.xRun(k)
+		}
+		if k-j >= 12 {
+			return k, p.fail(j, "year out of range: this package reads years up to 999999999999")
+		}
+		v = v*10 + int64(c-'0')
+	}
+	if neg {
+		v = -v
+	}
+	pt.year = v
+	// Month or season.
+	if i < hi && s[i] == '-' {
+		i++
+		j = i
+		for i < hi && (isDigit(s[i]) || s[i] == 'X') {
+			i++
+		}
+		if i-j != 2 {
+			return i, p.failHint(j, "expected a month of two digits (01–12) or a season (21–24)", "write 1874-05")
+		}
+		if n > 4 {
+			return j, p.failHint(j, "a year of more than four digits has no month here", "write the long year alone: Y12000")
+		}
+		c0, c1 := s[j], s[j+1]
+		switch {
+		case c0 == 'X' && c1 == 'X':
+			pt.mx = 2
+		case c1 == 'X':
+			if seenX {
+				return j, p.xRun(j)
+			}
+			if c0 != '0' && c0 != '1' {
+				return j, p.fail(j, "month "+s[j:j+2]+": months are 01–12; unspecified months are 0X, 1X or XX")
+			}
+			pt.mx = 1
+			pt.month = (c0 - '0') * 10
+		case c0 == 'X':
+			return j + 1, p.xRun(j + 1)
+		default:
+			if seenX {
+				return j, p.xRun(j)
+			}
+			m := (c0-'0')*10 + c1 - '0'
+			if m == 0 || (m > 12 && m < 21) || m > 41 {
+				return j, p.failHint(j, "month "+s[j:j+2]+": months are 01–12, seasons 21–24 (and 25–41, ISO 8601-2 divisions of the year)",
+					"for a range of years write 1870/1875")
+			}
+			pt.month = m
+		}
+		seenX = seenX || pt.mx > 0
+		// Day.
+		if i < hi && s[i] == '-' {
+			i++
+			j = i
+			for i < hi && (isDigit(s[i]) || s[i] == 'X') {
+				i++
+			}
+			if i-j != 2 {
+				return i, p.failHint(j, "expected a day of two digits (01–31)", "write 1874-05-21")
+			}
+			if pt.month > 12 {
+				return j, p.fail(j, "a season has no days")
+			}
+			c0, c1 := s[j], s[j+1]
+			switch {
+			case c0 == 'X' && c1 == 'X':
+				pt.dx = 2
+			case c1 == 'X':
+				if seenX {
+					return j, p.xRun(j)
+				}
+				if c0 > '3' {
+					return j, p.fail(j, "day "+s[j:j+2]+": days are 01–31; unspecified days are 0X, 1X, 2X, 3X or XX")
+				}
+				pt.dx = 1
+				pt.day = (c0 - '0') * 10
+			case c0 == 'X':
+				return j + 1, p.xRun(j + 1)
+			default:
+				if seenX {
+					return j, p.xRun(j)
+				}
+				pt.day = (c0-'0')*10 + c1 - '0'
+			}
+			if err := p.checkDay(j, pt); err != nil {
+				return j, err
+			}
+			if i < hi && s[i] == 'T' {
+				if pt.dx > 0 {
+					return i, p.fail(i, "a time of day needs a whole date")
+				}
+				t := i
+				var err error
+				if i, err = p.clock(i, hi); err != nil {
+					return i, err
+				}
+				pt.time = s[t:i]
+			}
+		}
+	}
+	pt.span()
+	return i, nil
+}
+
+func (p *parser) xRun(k int) *ParseError {
+	return p.failHint(k, "unspecified digits (X) must run to the end of the date, so that the date is one run of days",
+		"write 1985-04-XX, 1985-XX-XX, 198X or 19XX; a set such as [1985-01-12,1985-02-12] names scattered days")
+}
+
+// checkDay checks that the day (or the run of unspecified days) exists in
+// the month, in the point's calendar.
+func (p *parser) checkDay(pos int, pt *point) error {
+	if pt.mx > 0 {
+		return nil // XX day with an unspecified month: always some days
+	}
+	dim := daysIn(pt.year, int(pt.month), pt.cal)
+	switch {
+	case pt.dx == 0 && (pt.day == 0 || int(pt.day) > dim):
+		return p.fail(pos, "day "+twoDigits(int(pt.day))+": "+monthNames[pt.month-1]+" "+FormatYear(pt.year)+
+			" has "+itoa(dim)+" days"+calNote(pt.cal))
+	case pt.dx == 1 && int(pt.day) > dim:
+		return p.fail(pos, "days "+itoa(int(pt.day))+"–"+itoa(int(pt.day)+9)+": "+monthNames[pt.month-1]+" "+FormatYear(pt.year)+
+			" has "+itoa(dim)+" days"+calNote(pt.cal))
+	}
+	return nil
+}
+
+func calNote(c Calendar) string {
+	if c == CalendarJulian {
+		return " (Julian calendar)"
+	}
+	return ""
+}
+
+// clock reads "Thh:mm:ss" and an optional zone "Z", "±hh" or "±hh:mm".
+func (p *parser) clock(i, hi int) (int, error) {
+	s := p.in
+	two := func(k int, max byte) bool {
+		return k+2 <= hi && isDigit(s[k]) && isDigit(s[k+1]) && (s[k]-'0')*10+s[k+1]-'0' <= max
+	}
+	k := i + 1
+	if !(two(k, 23) && k+2 < hi && s[k+2] == ':' && two(k+3, 59) && k+5 < hi && s[k+5] == ':' && two(k+6, 59)) {
+		return k, p.failHint(k, "expected a time hh:mm:ss (00:00:00–23:59:59) after T", "write 1985-04-12T23:20:30")
+	}
+	k += 8
+	if k < hi {
+		switch s[k] {
+		case 'Z':
+			k++
+		case '+', '-':
+			if !two(k+1, 14) {
+				return k + 1, p.fail(k+1, "expected a zone offset ±hh or ±hh:mm")
+			}
+			k += 3
+			if k < hi && s[k] == ':' {
+				if !two(k+1, 59) {
+					return k + 1, p.fail(k+1, "expected the minutes of the zone offset")
+				}
+				k += 3
+			}
+		}
+	}
+	return k, nil
+}
+
+// longYear reads a Y-prefixed year: "Y170000002", "Y-170000002", and the
+// level-2 exponential form "Y-17E7".
+func (p *parser) longYear(i, hi int, pt *point) (int, error) {
+	s := p.in
+	i++
+	neg := false
+	if i < hi && s[i] == '-' {
+		neg = true
+		i++
+	}
+	j := i
+	var v int64
+	for i < hi && isDigit(s[i]) {
+		if i-j >= 12 {
+			return i, p.fail(j, "year out of range: this package reads years up to 999999999999")
+		}
+		v = v*10 + int64(s[i]-'0')
+		i++
+	}
+	if i == j {
+		return i, p.failHint(j, "expected the digits of a year after Y", "write Y170000002 or Y-12000")
+	}
+	if i < hi && s[i] == 'E' {
+		i++
+		k := i
+		e := 0
+		for i < hi && isDigit(s[i]) && i-k < 3 {
+			e = e*10 + int(s[i]-'0')
+			i++
+		}
+		if i == k {
+			return i, p.fail(k, "expected the digits of an exponent after E")
+		}
+		for ; e > 0; e-- {
+			v *= 10
+			if v > maxYear {
+				return i, p.fail(j, "year out of range: this package reads years up to 999999999999")
+			}
+		}
+	}
+	if neg {
+		v = -v
+	}
+	pt.year = v
+	if i < hi && s[i] == '-' {
+		return i, p.failHint(i, "a Y-prefixed year stands alone, without month or day", "write Y12000")
+	}
+	pt.span()
+	return i, nil
+}
+
+// divisions gives the first month and the length in months of the season
+// codes 21–41: 21–24 are spring, summer, autumn, winter (read as in the
+// northern hemisphere, as 25–28); 29–32 the southern seasons; 33–36
+// quarters; 37–39 quadrimesters; 40–41 semesters.
+var divisions = [...][2]uint8{
+	21: {3, 3}, 22: {6, 3}, 23: {9, 3}, 24: {12, 3},
+	25: {3, 3}, 26: {6, 3}, 27: {9, 3}, 28: {12, 3},
+	29: {9, 3}, 30: {12, 3}, 31: {3, 3}, 32: {6, 3},
+	33: {1, 3}, 34: {4, 3}, 35: {7, 3}, 36: {10, 3},
+	37: {1, 4}, 38: {5, 4}, 39: {9, 4},
+	40: {1, 6}, 41: {7, 6},
+}
+
+// span sets the precision and the run of days of pt.
+func (pt *point) span() {
+	ylo, yhi := pt.year, pt.year
+	if pt.yx > 0 {
+		w := int64(1)
+		for k := uint8(0); k < pt.yx; k++ {
+			w *= 10
+		}
+		if pt.year < 0 {
+			ylo = pt.year - (w - 1)
+		} else {
+			yhi = pt.year + (w - 1)
+		}
+	}
+	mlo, mhi := 1, 12
+	dlo, dhi := 1, 0 // dhi 0: the last day of the month
+	switch {
+	case pt.month == 0 || pt.mx == 2:
+		// the whole year
+	case pt.month > 12:
+		dv := divisions[pt.month]
+		mlo = int(dv[0])
+		mhi = mlo + int(dv[1]) - 1
+	case pt.mx == 1:
+		mlo = int(pt.month)
+		if mlo == 0 {
+			mlo, mhi = 1, 9
+		} else {
+			mhi = 12
+		}
+	default:
+		mlo, mhi = int(pt.month), int(pt.month)
+		switch {
+		case pt.day == 0 && pt.dx == 0, pt.dx == 2:
+		case pt.dx == 1:
+			dlo, dhi = int(pt.day), int(pt.day)+9
+			if dlo == 0 {
+				dlo = 1
+			}
+		default:
+			dlo, dhi = int(pt.day), int(pt.day)
+		}
+	}
+	yEnd := yhi
+	if mhi > 12 {
+		yEnd++
+		mhi -= 12
+	}
+	if dim := daysIn(yEnd, mhi, pt.cal); dhi == 0 || dhi > dim {
+		dhi = dim
+	}
+	pt.first = dayIn(ylo, mlo, dlo, pt.cal)
+	pt.last = dayIn(yEnd, mhi, dhi, pt.cal)
+	switch {
+	case pt.yx == 1:
+		pt.prec = PrecisionDecade
+	case pt.yx == 2:
+		pt.prec = PrecisionCentury
+	case pt.yx > 2:
+		pt.prec = PrecisionMillennium
+	case pt.month == 0 || pt.mx > 0:
+		pt.prec = PrecisionYear
+	case pt.month > 12:
+		pt.prec = PrecisionSeason
+	case pt.day == 0 && pt.dx == 0, pt.dx > 0:
+		pt.prec = PrecisionMonth
+	default:
+		pt.prec = PrecisionDay
+	}
+}
+
+func dayIn(y int64, m, d int, c Calendar) Day {
+	if c == CalendarJulian {
+		return Julian(y, m, d)
+	}
+	return Gregorian(y, m, d)
+}
+
+func civilIn(d Day, c Calendar) (int64, int, int) {
+	if c == CalendarJulian {
+		return d.JulianCivil()
+	}
+	return d.Civil()
+}
+
+func daysIn(y int64, m int, c Calendar) int {
+	if c == CalendarJulian {
+		return JulianDaysInMonth(y, m)
+	}
+	return DaysInMonth(y, m)
+}
+
+// finish builds the Date from its members.
+func (p *parser) finish(ms []member, oneOf bool) Date {
+	d := Date{Input: p.in, OneOf: oneOf, members: ms}
+	for _, m := range ms {
+		if m.kind&(openStart|unknownStart) == 0 {
+			d.Approximate = d.Approximate || m.start.approx
+			d.Uncertain = d.Uncertain || m.start.uncert
+		}
+		if m.kind&(openEnd|unknownEnd) == 0 {
+			d.Approximate = d.Approximate || m.end.approx
+			d.Uncertain = d.Uncertain || m.end.uncert
+		}
+	}
+	if ms[0].kind&(openStart|unknownStart) != 0 {
+		d.Precision = ms[0].end.prec
+	} else {
+		d.Precision = ms[0].start.prec
+	}
+	d.Alternatives = alternatives(ms, nil)
+	d.edtf = p.canonical(ms, oneOf)
+	return d
+}
+
+// alternatives returns the sorted, merged intervals of ms, each widened by
+// the function w when it is not nil.
+func alternatives(ms []member, w func(m member) Interval) []Interval {
+	out := make([]Interval, 0, len(ms))
+	for _, m := range ms {
+		if w != nil {
+			out = append(out, w(m))
+		} else {
+			out = append(out, m.interval())
+		}
+	}
+	if len(out) == 1 {
+		return out
+	}
+	slices.SortFunc(out, func(a, b Interval) int {
+		switch {
+		case a.OpenStart && b.OpenStart:
+			return 0
+		case a.OpenStart:
+			return -1
+		case b.OpenStart:
+			return 1
+		case a.First < b.First:
+			return -1
+		case a.First > b.First:
+			return 1
+		}
+		return 0
+	})
+	k := 0
+	for _, iv := range out[1:] {
+		cur := &out[k]
+		if cur.OpenEnd || iv.OpenStart || iv.First <= cur.Last+1 {
+			if iv.OpenEnd {
+				cur.OpenEnd, cur.Last = true, 0
+			} else if !cur.OpenEnd && iv.Last > cur.Last {
+				cur.Last = iv.Last
+			}
+			continue
+		}
+		k++
+		out[k] = iv
+	}
+	return out[:k+1]
+}

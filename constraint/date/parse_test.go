@@ -1,0 +1,68 @@
+package date
+
+import "testing"
+
+// iso writes the alternatives of d as "first→last" pairs, ".." for open.
+func iso(d Date) []string {
+	var out []string
+	for _, a := range d.Alternatives {
+		f, l := "..", ".."
+		if !a.OpenStart {
+			f = a.First.ISO()
+		}
+		if !a.OpenEnd {
+			l = a.Last.ISO()
+		}
+		out = append(out, f+"→"+l)
+	}
+	return out
+}
+
+func sameStrings(a, b []string) bool {
+	if len(a) != len(b) {
+		return false
+	}
+	for i := range a {
+		if a[i] != b[i] {
+			return false
+		}
+	}
+	return true
+}
+
+func TestParseBasics(t *testing.T) {
+	tests := []struct {
+		in, edtf string
+		alts     []string
+		prec     Precision
+	}{
+		{"1874", "1874", []string{"1874-01-01→1874-12-31"}, PrecisionYear},
+		{"1874-05", "1874-05", []string{"1874-05-01→1874-05-31"}, PrecisionMonth},
+		{"1874-05-21", "1874-05-21", []string{"1874-05-21→1874-05-21"}, PrecisionDay},
+		{"-1199", "-1199", []string{"-1199-01-01→-1199-12-31"}, PrecisionYear},
+		{"187X", "187X", []string{"1870-01-01→1879-12-31"}, PrecisionDecade},
+		{"18XX", "18XX", []string{"1800-01-01→1899-12-31"}, PrecisionCentury},
+		{"1870/1879", "1870/1879", []string{"1870-01-01→1879-12-31"}, PrecisionYear},
+		{"../1900", "../1900", []string{"..→1900-12-31"}, PrecisionYear},
+		{"1850/..", "1850/..", []string{"1850-01-01→.."}, PrecisionYear},
+		{"[1667, 1668, 1670..1672]", "[1667,1668,1670..1672]",
+			[]string{"1667-01-01→1668-12-31", "1670-01-01→1672-12-31"}, PrecisionYear},
+	}
+	for _, tt := range tests {
+		t.Run(tt.in, func(t *testing.T) {
+			d, err := Parse(tt.in)
+			if err != nil {
+				t.Fatalf("Parse(%q): %v", tt.in, err)
+			}
+			if d.EDTF() != tt.edtf {
+				t.Errorf("EDTF() = %q, want %q", d.EDTF(), tt.edtf)
+			}
+			if got := iso(d); !sameStrings(got, tt.alts) {
+				t.Errorf("alternatives = %v, want %v", got, tt.alts)
+			}
+			if d.Precision != tt.prec {
+				t.Errorf("precision = %v, want %v", d.Precision, tt.prec)
+			}
+		})
+	}
+}
