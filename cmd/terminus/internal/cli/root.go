@@ -70,21 +70,30 @@ func printError(w io.Writer, err error) {
 
 // NewRootCmd builds the whole command tree.
 func NewRootCmd(s IO) *cobra.Command {
+	var showVersion bool
 	root := &cobra.Command{
 		Use:           "terminus",
 		Short:         "Date objects and documents from the materials found in them",
 		SilenceUsage:  true,
 		SilenceErrors: true,
-		Version:       versionString(),
+		Args:          cobra.NoArgs,
+		RunE: func(cmd *cobra.Command, args []string) error {
+			if showVersion {
+				return printVersion(s)
+			}
+			return cmd.Help()
+		},
 	}
+	root.Flags().BoolVarP(&showVersion, "version", "v", false, "print the tool and dataset versions")
 	root.SetIn(s.In)
 	root.SetOut(s.Out)
 	root.SetErr(s.Err)
-	root.SetVersionTemplate("{{.Version}}\n")
 	root.SetFlagErrorFunc(func(c *cobra.Command, err error) error {
 		return usageError(fmt.Errorf("%w (see '%s --help')", err, c.CommandPath()))
 	})
 	root.AddCommand(
+		NewCheckCmd(s),
+		NewInitCmd(s),
 		NewDateCmd(s),
 		NewMaterialsCmd(s),
 	)

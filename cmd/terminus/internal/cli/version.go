@@ -1,6 +1,11 @@
 package cli
 
-import "runtime/debug"
+import (
+	"fmt"
+	"runtime/debug"
+
+	"terminus/materials"
+)
 
 // version is set at link time with -ldflags "-X ...cli.version=v1.2.3".
 var version = ""
@@ -15,4 +20,16 @@ func toolVersion() string {
 	return "devel"
 }
 
-func versionString() string { return "terminus " + toolVersion() }
+// printVersion prints the tool's version and the built-in dataset's.
+func printVersion(s IO) error {
+	ds, err := materials.Builtin()
+	if err != nil {
+		return fmt.Errorf("the built-in dataset does not load: %w", err)
+	}
+	sha := ds.SHA256
+	if len(sha) > 16 {
+		sha = sha[:16]
+	}
+	_, err = fmt.Fprintf(s.Out, "terminus %s\ndataset %s (%d materials, sha256 %s)\n", toolVersion(), ds.Version, len(ds.Materials), sha)
+	return err
+}

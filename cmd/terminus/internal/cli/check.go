@@ -1,0 +1,151 @@
+package cli
+
+import (
+	"bytes"
+	"fmt"
+	"io"
+	"strings"
+
+	"github.com/spf13/cobra"
+
+	"terminus/cmd/terminus/internal/report"
+	"terminus/constraint"
+	"terminus/constraint/network"
+	"terminus/materials"
+)
+
+// writerFor returns the report writer for a --format value.
+func writerFor(format string) (func(io.Writer, *constraint.Result) error, error) {
+	switch format {
+	case "text", "":
+		return report.Text, nil
+	case "md", "markdown":
+		return report.Markdown, nil
+	case "json":
+		return report.JSON, nil
+	}
+	return nil, fmt.Errorf("unknown --format %q: expected text, md or json", format)
+}
+
+// parseTier reads a --fail-on value.
+func parseTier(s string) (network.Tier, error) {
+	switch strings.ToLower(s) {
+	case "hard":
+		return network.Hard, nil
+	case "firm":
+		return network.Firm, nil
+	case "soft":
+		return network.Soft, nil
+	}
+	return 0, fmt.Errorf("unknown --fail-on %q: expected hard, firm or soft", s)
+}
+
+// datasetWith is the built-in dataset with the user's files laid over it,
+// and the notes that say which entries they replaced.
+func datasetWith(files []string) (*materials.Dataset, []string, error) {
+	ds, err := materials.Builtin()
+	if err != nil {
+		return nil, nil, fmt.Errorf("the built-in dataset does not load: %w", err)
+	}
+	return ds.Extend(files...)
+}
+
+// Fails reports whether a result should give exit status 1 when failing
+// at tier failOn: a claim that is not consistent at that tier or a
+// stronger one, or evidence that conflicts there.
+func Fails(r *constraint.Result, failOn network.Tier) bool {
+	for t := network.Hard; t <= failOn; t++ {
+		if !r.Consistent[t] {
+			return true
+		}
+	}
+	worst := map[constraint.Verdict]network.Tier{
+		constraint.Excluded: network.Hard, constraint.Undetermined: network.Hard,
+		constraint.Improbable: network.Firm, constraint.Doubtful: network.Soft,
+	}
+	for _, c := range r.Claims {
+		if t, bad := worst[c.Verdict]; bad && t <= failOn {
+			return true
+		}
+	}
+	return false
+}
+
+// NewCheckCmd builds "terminus check".
+func NewCheckCmd(s IO) *cobra.Command {
+	var (
+		format       string
+		matFiles     []string
+		failOn       string
+		maxConflicts int
+	)
+	cmd := &cobra.Command{
+		Use:   "check CASE...",
+		Short: "Date an object from its case file: windows, verdicts, conflicts",
+		Long: `Check reads a case file (YAML, JSON or TOML) describing an object's events,
+the materials found in it, its documented dates and the dates claimed for it,
+and prints for every event the earliest and latest plausible date at each
+strength tier (hard, firm, soft) with the evidence behind every bound, the
+verdict on each claim, and any conflicts with their cheapest correction.
+
+Exit status: 0 when the evidence agrees and every claim is consistent; 1 when
+a claim is not consistent or the evidence conflicts at the --fail-on tier or a
+stronger one; 2 for bad input.`,
+		Example: `  terminus check examples/retouched-panel/case.yaml
+  terminus check --format md case.yaml > dating-section.md
+  terminus check --fail-on firm --materials my-pigments.yaml case.toml`,
+		Args: cobra.MinimumNArgs(1),
+		RunE: func(cmd *cobra.Command, args []string) error {
+			write, err := writerFor(format)
+			if err != nil {
+				return usageError(err)
+			}
+			tier, err := parseTier(failOn)
+			if err != nil {
+				return usageError(err)
+			}
+			ds, dsNotes, err := datasetWith(matFiles)
+			if err != nil {
+				return usageError(err)
+			}
+			// Everything is computed before anything is written, so that bad
+			// input leaves stdout empty.
+			var out bytes.Buffer
+			fail := false
+			for i, path := range args {
+				c, err := constraint.ReadCaseFile(path)
+				if err != nil {
+					return usageError(err)
+				}
+				res, err := constraint.Analyze(cmd.Context(), c, ds, constraint.Options{MaxConflicts: maxConflicts})
+				if err != nil {
+					if _, ok := err.(*constraint.Error); ok {
+						return usageError(err)
+					}
+					return &ExitError{Code: 2, Err: fmt.Errorf("%s: %w", path, err)}
+				}
+				res.Notes = append(append([]string{}, dsNotes...), res.Notes...)
+				if i > 0 && format != "json" {
+					out.WriteString("\n")
+				}
+				if err := write(&out, res); err != nil {
+					return err
+				}
+				fail = fail || Fails(res, tier)
+			}
+			if _, err := s.Out.Write(out.Bytes()); err != nil {
+				return err
+			}
+			if fail {
+				return &ExitError{Code: 1}
+			}
+			return nil
+		},
+	}
+	f := cmd.Flags()
+	f.StringVarP(&format, "format", "f", "text", "output format: text, md or json")
+	f.StringArrayVar(&matFiles, "materials", nil, "a materials file (YAML or TOML) to add over the built-in dataset; repeatable")
+	f.StringVar(&failOn, "fail-on", "soft", "exit 1 when a claim fails or the evidence conflicts at this tier or a stronger one: hard, firm or soft")
+	f.IntVar(&maxConflicts, "max-conflicts", 10, "the most minimal conflicts to list per tier")
+	return cmd
+}

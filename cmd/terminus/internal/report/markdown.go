@@ -1,0 +1,263 @@
+package report
+
+import (
+	"fmt"
+	"io"
+	"strings"
+
+	"terminus/constraint"
+	"terminus/constraint/network"
+)
+
+// Markdown writes r as a section to paste into an examination or condition
+// report: a dating paragraph in graded words, the windows, the evidence
+// table, conflicts, notes, cautions and references.
+func Markdown(w io.Writer, r *constraint.Result) error {
+	ew := &errWriter{w: w}
+	title := r.Title
+	if title == "" {
+		title = "untitled case"
+	}
+	fmt.Fprintf(ew, "## Dating from materials: %s\n\n", mdEscape(title))
+	fmt.Fprintf(ew, "Case file `%s`", r.File)
+	if r.Place != "" {
+		fmt.Fprintf(ew, "; place of making %s", r.Place)
+	}
+	fmt.Fprintf(ew, "; materials %s.\n\n", datasetLine(r))
+
+	fmt.Fprintln(ew, "### Summary")
+	fmt.Fprintln(ew)
+	for _, e := range r.Events {
+		fmt.Fprintln(ew, eventParagraph(e))
+		fmt.Fprintln(ew)
+	}
+	for _, c := range r.Claims {
+		fmt.Fprintln(ew, claimParagraph(c))
+		fmt.Fprintln(ew)
+	}
+	fmt.Fprintln(ew, consistencyLine(r))
+	fmt.Fprintln(ew)
+
+	fmt.Fprintln(ew, "### Windows")
+	fmt.Fprintln(ew)
+	fmt.Fprintln(ew, "| Event | Tier | Earliest | Latest | Earliest set by | Latest set by |")
+	fmt.Fprintln(ew, "|---|---|---|---|---|---|")
+	for _, e := range r.Events {
+		for t, win := range e.Windows {
+			if win == nil {
+				fmt.Fprintf(ew, "| %s | %s | — | — | conflict | conflict |\n", mdEscape(e.ID), tierNames[t])
+				continue
+			}
+			lo, hi := "open", "open"
+			if win.Earliest.Bounded {
+				lo = constraint.FormatBound(win.Earliest.Day, false)
+			}
+			if win.Latest.Bounded {
+				hi = constraint.FormatBound(win.Latest.Day, true)
+			}
+			if len(win.Intervals) > 1 {
+				hi += " (gaps: " + spansText(win.Intervals) + ")"
+			}
+			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), tierNames[t], lo, mdEscape(hi),
+				mdEscape(strings.Join(win.Earliest.Because, " → ")), mdEscape(strings.Join(win.Latest.Because, " → ")))
+		}
+	}
+	fmt.Fprintln(ew)
+
+	if len(r.Claims) > 0 {
+		fmt.Fprintln(ew, "### Claims")
+		fmt.Fprintln(ew)
+		fmt.Fprintln(ew, "| Claim | Event | Date | Verdict | Survives (hard) | Survives (firm) | Survives (soft) | Deciding evidence |")
+		fmt.Fprintln(ew, "|---|---|---|---|---|---|---|---|")
+		for _, c := range r.Claims {
+			var surv [3]string
+			for t := range surv {
+				if c.Verdict == constraint.Undetermined || network.Tier(t) > c.JudgedAt {
+					surv[t] = "not judged"
+				} else {
+					surv[t] = spansText(c.Surviving[t])
+				}
+			}
+			fmt.Fprintf(ew, "| %s | %s | %s | **%s** | %s | %s | %s | %s |\n", mdEscape(c.ID), mdEscape(c.Event), mdEscape(c.Date),
+				c.Verdict, surv[0], surv[1], surv[2], mdEscape(strings.Join(c.Deciding, ", ")))
+		}
+		fmt.Fprintln(ew)
+	}
+
+	fmt.Fprintln(ew, "### Evidence")
+	fmt.Fprintln(ew)
+	fmt.Fprintln(ew, "| Evidence | Event | Material or record | Method (sample) | Confidence | Bound | Tier | Source |")
+	fmt.Fprintln(ew, "|---|---|---|---|---|---|---|---|")
+	for _, e := range r.Evidence {
+		method := e.Method
+		if e.Sample != "" {
+			method += " (" + e.Sample + ")"
+		}
+		if len(e.Bounds) == 0 {
+			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | none | | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(e.What),
+				mdEscape(method), e.Confidence, mdEscape(e.Source))
+			continue
+		}
+		for _, b := range e.Bounds {
+			what := e.What
+			bnd := b.Side + " " + b.Date
+			src := e.Source
+			if b.Milestone != "" {
+				what = b.Material
+				bnd = fmt.Sprintf("%s %s (%s)", b.Side, b.Date, b.Milestone)
+				src = b.Source
+			}
+			if e.Kind == "order" {
+				bnd = "after " + b.Date
+			}
+			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(what),
+				mdEscape(method), e.Confidence, mdEscape(bnd), tierNames[b.Tier], mdEscape(src))
+		}
+	}
+	fmt.Fprintln(ew)
+
+	if len(r.Conflicts) > 0 {
+		fmt.Fprintln(ew, "### Conflicts")
+		fmt.Fprintln(ew)
+		for i, c := range r.Conflicts {
+			fmt.Fprintf(ew, "%d. At the %s tier, these cannot all hold: %s.\n", i+1, tierNames[c.Tier], mdEscape(strings.Join(c.Evidence, ", ")))
+			for _, s := range c.Steps {
+				fmt.Fprintf(ew, "   - %s\n", mdEscape(s.Text))
+			}
+		}
+		fmt.Fprintln(ew)
+		for t, complete := range r.ConflictsComplete {
+			if !complete {
+				fmt.Fprintf(ew, "More conflicts exist at the %s tier than are listed.\n\n", tierNames[t])
+			}
+		}
+		for _, c := range r.Corrections {
+			fmt.Fprintf(ew, "- The smallest, weakest change that restores agreement at the %s tier is to set aside %s.\n", tierNames[c.Tier], mdEscape(strings.Join(c.Evidence, ", ")))
+		}
+		fmt.Fprintln(ew)
+	}
+	if len(r.Disagreements) > 0 {
+		fmt.Fprintln(ew, "### Where sources disagree")
+		fmt.Fprintln(ew)
+		for _, d := range r.Disagreements {
+			fmt.Fprintf(ew, "- %s\n", mdEscape(d.Text))
+		}
+		fmt.Fprintln(ew)
+	}
+	if len(r.Notes) > 0 {
+		fmt.Fprintln(ew, "### Notes")
+		fmt.Fprintln(ew)
+		for _, n := range r.Notes {
+			fmt.Fprintf(ew, "- %s\n", mdEscape(n))
+		}
+		fmt.Fprintln(ew)
+	}
+	fmt.Fprintln(ew, "### Cautions")
+	fmt.Fprintln(ew)
+	for _, c := range r.Cautions {
+		fmt.Fprintf(ew, "- %s\n", mdEscape(c))
+	}
+	fmt.Fprintln(ew)
+	if len(r.Sources) > 0 {
+		fmt.Fprintln(ew, "### References")
+		fmt.Fprintln(ew)
+		for _, s := range r.Sources {
+			cite := s.Cite
+			if cite == "" {
+				cite = "(not in the bibliography)"
+			}
+			if s.URL != "" {
+				cite += ", <" + s.URL + ">"
+			}
+			fmt.Fprintf(ew, "- [%s] %s\n", s.Key, mdEscape(cite))
+		}
+		fmt.Fprintln(ew)
+	}
+	return ew.err
+}
+
+var mdReplacer = strings.NewReplacer("|", `\|`, "*", `\*`, "_", `\_`, "<", "&lt;", ">", "&gt;")
+
+func mdEscape(s string) string { return mdReplacer.Replace(s) }
+
+// eventParagraph puts an event's windows in graded words: "cannot" for the
+// hard tier, "unlikely" for firm, "unusual" for soft; a tier is named only
+// where it narrows the one before.
+func eventParagraph(e constraint.EventResult) string {
+	name := e.ID
+	if e.Label != "" {
+		name = e.Label + " (" + e.ID + ")"
+	}
+	var lows, highs []string
+	var prevLo, prevHi *constraint.Bound
+	lowWords := [3]string{"cannot be earlier than", "is unlikely to be earlier than", "would be unusual before"}
+	highWords := [3]string{"cannot be later than", "is unlikely to be later than", "would be unusual after"}
+	for t, w := range e.Windows {
+		if w == nil {
+			continue
+		}
+		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
+			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", lowWords[t], constraint.FormatBound(w.Earliest.Day, false), tierNames[t], strings.Join(w.Earliest.Because, " → ")))
+		}
+		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
+			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", highWords[t], constraint.FormatBound(w.Latest.Day, true), tierNames[t], strings.Join(w.Latest.Because, " → ")))
+		}
+		if w.Earliest.Bounded {
+			b := w.Earliest
+			prevLo = &b
+		}
+		if w.Latest.Bounded {
+			b := w.Latest
+			prevHi = &b
+		}
+	}
+	if e.Windows[0] == nil {
+		return fmt.Sprintf("**%s.** Even the hard evidence for this event contradicts itself; no window can be given until the conflicts below are resolved.", mdEscape(name))
+	}
+	var b strings.Builder
+	fmt.Fprintf(&b, "**%s.** ", mdEscape(name))
+	if len(lows) == 0 && len(highs) == 0 {
+		b.WriteString("The evidence considered sets no bound on this event.")
+		return b.String()
+	}
+	b.WriteString("On the evidence considered, it ")
+	all := append(lows, highs...)
+	b.WriteString(mdEscape(joinAnd(all)))
+	b.WriteString(".")
+	if e.Windows[1] == nil || e.Windows[2] == nil {
+		b.WriteString(" The weaker evidence conflicts (see Conflicts), so only the stronger tiers are stated.")
+	}
+	return b.String()
+}
+
+func joinAnd(list []string) string {
+	switch len(list) {
+	case 0:
+		return ""
+	case 1:
+		return list[0]
+	}
+	return strings.Join(list[:len(list)-1], "; it ") + "; and it " + list[len(list)-1]
+}
+
+func claimParagraph(c constraint.ClaimResult) string {
+	by := ""
+	if c.By != "" {
+		by = " by " + c.By
+	}
+	head := fmt.Sprintf("The date claimed%s for %s, %s, is **%s**", mdEscape(by), mdEscape(c.Event), mdEscape(c.Date), c.Verdict)
+	switch c.Verdict {
+	case constraint.Consistent:
+		return head + ": it meets the window of all the evidence. This does not prove the date; it only fails to rule it out."
+	case constraint.Doubtful:
+		return head + fmt.Sprintf(": it contradicts only soft evidence (%s), which makes it unusual rather than unlikely. Of the claim, %s remains within the firm window.",
+			mdEscape(strings.Join(c.Deciding, ", ")), spansText(c.Surviving[network.Firm]))
+	case constraint.Improbable:
+		return head + fmt.Sprintf(": it contradicts firm evidence (%s) and needs an explanation to stand. Of the claim, %s remains possible on the hard evidence alone.",
+			mdEscape(strings.Join(c.Deciding, ", ")), spansText(c.Surviving[network.Hard]))
+	case constraint.Excluded:
+		return head + fmt.Sprintf(": it contradicts hard evidence (%s). If the findings belong to this event, the object cannot date from then.",
+			mdEscape(strings.Join(c.Deciding, ", ")))
+	}
+	return head + ": " + mdEscape(c.Note) + "."
+}

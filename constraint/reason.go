@@ -1,0 +1,1067 @@
+package constraint
+
+import (
+	"context"
+	"errors"
+	"fmt"
+	"sort"
+	"strings"
+
+	"terminus/constraint/date"
+	"terminus/constraint/network"
+	"terminus/materials"
+)
+
+// Options tune an analysis.
+type Options struct {
+	// MaxConflicts caps the minimal conflicts listed per tier (0: 10).
+	MaxConflicts int
+	// NoSensitivity skips re-solving under the other claims of disagreeing
+	// sources.
+	NoSensitivity bool
+}
+
+// Analyze checks a case against a materials dataset and returns the
+// windows, verdicts, conflicts and the evidence behind them. A problem with
+// the case (an unknown material, event or place) is an [*Error] with the
+// position in the case file; no partial result is returned.
+func Analyze(ctx context.Context, c *Case, ds *materials.Dataset, opt Options) (*Result, error) {
+	a, err := prepare(c, ds)
+	if err != nil {
+		return nil, err
+	}
+	res, err := a.run(ctx, opt, nil)
+	if err != nil {
+		return nil, err
+	}
+	if !opt.NoSensitivity {
+		if err := a.sensitivity(ctx, opt, res); err != nil {
+			return nil, err
+		}
+	}
+	res.Notes = append(a.notes, res.Notes...)
+	res.Cautions = Cautions()
+	return res, nil
+}
+
+// Cautions are the limits every report states.
+func Cautions() []string {
+	return []string{
+		"Material evidence can rule dates out; it never proves a date, nor that an object is authentic.",
+		"A bound from a material holds only if the finding belongs to that event: not to a later retouching, a consolidant, a fill or a contamination.",
+		"Absence proves nothing: a material not detected may be below the detection limit, or not sampled.",
+		"Dataset dates are only as good as their sources and may be revised; a first date of making, sale or arrival is the earliest known, not a rule of nature.",
+		"This is no authentication certificate and no legal opinion: defer to qualified conservators, accredited laboratories and the laws on cultural property that apply.",
+	}
+}
+
+// analysis is a case resolved against a dataset, ready to build networks.
+type analysis struct {
+	c         *Case
+	ds        *materials.Dataset
+	events    []Event
+	eventIdx  map[string]int
+	findings  []resolvedFinding
+	circa     date.Circa
+	allowance date.Duration
+	notes     []string
+}
+
+type resolvedFinding struct {
+	Finding
+	mats []*materials.Material
+}
+
+func (a *analysis) errAt(p Pos, suggest, format string, args ...any) *Error {
+	return &Error{File: a.c.File, Line: p.Line, Column: p.Column, Msg: fmt.Sprintf(format, args...), Suggest: suggest}
+}
+
+func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
+	if ds == nil {
+		return nil, errors.New("no materials dataset")
+	}
+	a := &analysis{c: c, ds: ds, eventIdx: map[string]int{}, circa: date.DefaultCirca(), allowance: DefaultStockAllowance}
+	for k, v := range c.Circa {
+		a.circa[k] = v
+	}
+	if c.StockAllowance != nil {
+		a.allowance = *c.StockAllowance
+	}
+	a.events = c.Events
+	if len(a.events) == 0 {
+		a.events = []Event{{ID: "making", Label: "making of the object"}}
+	}
+	for i, e := range a.events {
+		if _, dup := a.eventIdx[e.ID]; dup {
+			return nil, a.errAt(e.Pos, "give each event its own id", "event %q is defined twice", e.ID)
+		}
+		a.eventIdx[e.ID] = i
+	}
+	ids := make([]string, len(a.events))
+	for i, e := range a.events {
+		ids[i] = e.ID
+	}
+	if err := a.checkPlace(c.Place, c.PlacePos); err != nil {
+		return nil, err
+	}
+	for _, e := range a.events {
+		if err := a.checkPlace(e.Place, e.PlacePos); err != nil {
+			return nil, err
+		}
+		for _, o := range e.After {
+			if _, ok := a.eventIdx[o.Event]; !ok {
+				return nil, a.errAt(o.Pos, didYouMean(o.Event, ids), "event %s: 'after' names an unknown event %q (events: %s)", e.ID, o.Event, strings.Join(ids, ", "))
+			}
+			if o.Event == e.ID {
+				return nil, a.errAt(o.Pos, "", "event %s cannot come after itself", e.ID)
+			}
+			if o.AtLeast != nil && o.AtMost != nil && o.AtLeast.MinDays() > o.AtMost.MaxDays() {
+				return nil, a.errAt(o.Pos, "swap at_least and at_most", "event %s: at_least is longer than at_most", e.ID)
+			}
+		}
+	}
+	first := a.events[0].ID
+	evidenceIDs := map[string]Pos{}
+	claimIDs := map[string]bool{}
+	useID := func(id string, p Pos) error {
+		if prev, dup := evidenceIDs[id]; dup {
+			return a.errAt(p, "give each finding, record and order its own id", "id %q is used twice (first at line %d)", id, prev.Line)
+		}
+		evidenceIDs[id] = p
+		return nil
+	}
+	for _, e := range a.events {
+		for _, o := range e.After {
+			if err := useID(o.ID, o.Pos); err != nil {
+				return nil, err
+			}
+		}
+	}
+	for _, f := range c.Findings {
+		if err := useID(f.ID, f.Pos); err != nil {
+			return nil, err
+		}
+		if f.Event == "" {
+			f.Event = first
+		} else if _, ok := a.eventIdx[f.Event]; !ok {
+			return nil, a.errAt(f.EventPos, didYouMean(f.Event, ids), "finding %s: unknown event %q (events: %s)", f.ID, f.Event, strings.Join(ids, ", "))
+		}
+		rf := resolvedFinding{Finding: f}
+		seen := map[string]bool{}
+		for i, name := range f.Materials {
+			m, err := ds.Lookup(name)
+			if err != nil {
+				var hint string
+				var h interface{ Hint() string }
+				if errors.As(err, &h) {
+					hint = h.Hint()
+				}
+				if hint == "" {
+					hint = "'terminus materials list' shows the materials; --materials FILE adds your own"
+				}
+				return nil, a.errAt(f.MatPos[i], hint, "finding %s: unknown material %q", f.ID, name)
+			}
+			if seen[m.ID] {
+				continue
+			}
+			seen[m.ID] = true
+			rf.mats = append(rf.mats, m)
+		}
+		a.findings = append(a.findings, rf)
+	}
+	for i := range c.Records {
+		r := &c.Records[i]
+		if err := useID(r.ID, r.Pos); err != nil {
+			return nil, err
+		}
+		if r.Event == "" {
+			r.Event = first
+		} else if _, ok := a.eventIdx[r.Event]; !ok {
+			return nil, a.errAt(r.EventPos, didYouMean(r.Event, ids), "record %s: unknown event %q (events: %s)", r.ID, r.Event, strings.Join(ids, ", "))
+		}
+	}
+	for i := range c.Claims {
+		cl := &c.Claims[i]
+		if claimIDs[cl.ID] {
+			return nil, a.errAt(cl.Pos, "", "claim id %q is used twice", cl.ID)
+		}
+		claimIDs[cl.ID] = true
+		if cl.Event == "" {
+			cl.Event = first
+		} else if _, ok := a.eventIdx[cl.Event]; !ok {
+			return nil, a.errAt(cl.EventPos, didYouMean(cl.Event, ids), "claim %s: unknown event %q (events: %s)", cl.ID, cl.Event, strings.Join(ids, ", "))
+		}
+	}
+	if err := a.checkCycles(); err != nil {
+		return nil, err
+	}
+	return a, nil
+}
+
+func (a *analysis) checkPlace(place string, p Pos) error {
+	if place == "" {
+		return nil
+	}
+	if a.ds.Regions == nil || a.ds.Regions.Valid(place) {
+		return nil
+	}
+	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP) or a UN M49 area code (\"155\" Western Europe)"
+	if s := a.ds.Regions.Suggest(place); len(s) > 0 {
+		hint = "did you mean " + quoteJoin(s) + "?"
+	}
+	return a.errAt(p, hint, "unknown place %q", place)
+}
+
+// checkCycles rejects 'after' orders that go round in a loop with no gap
+// allowed, which no dating can satisfy; the network would report it as a
+// conflict, but it is a mistake in the case file.
+func (a *analysis) checkCycles() error {
+	state := make([]int, len(a.events))
+	var visit func(i int) error
+	visit = func(i int) error {
+		state[i] = 1
+		for _, o := range a.events[i].After {
+			j := a.eventIdx[o.Event]
+			if state[j] == 1 {
+				return a.errAt(o.Pos, "check the 'after' entries of these events", "the events %s and %s are each after the other", a.events[i].ID, o.Event)
+			}
+			if state[j] == 0 {
+				if err := visit(j); err != nil {
+					return err
+				}
+			}
+		}
+		state[i] = 2
+		return nil
+	}
+	for i := range a.events {
+		if state[i] == 0 {
+			if err := visit(i); err != nil {
+				return err
+			}
+		}
+	}
+	return nil
+}
+
+func (a *analysis) placeOf(e Event) string {
+	if e.Place != "" {
+		return e.Place
+	}
+	return a.c.Place
+}
+
+// A link ties a network constraint to the evidence it came from.
+type link struct {
+	evidence string
+	lower    string // what it says as a lower bound
+	upper    string // what it says as an upper bound
+	general  string // what it says in a conflict
+}
+
+// built is one network built from the case, and how to read it back.
+type built struct {
+	net   *network.Network
+	vars  []network.Var
+	links map[string]link
+	// evidence rows, in case order
+	evidence []Evidence
+	// disagreements found while building
+	disagreements []Disagreement
+	notes         []string
+}
+
+// override picks, for a milestone on which sources disagree, a claim other
+// than the most conservative one. Key: material id, kind, area.
+type override map[string]int
+
+func overrideKey(mat string, kind materials.Kind, area string) string {
+	return mat + "\x00" + string(kind) + "\x00" + area
+}
+
+func lower(t network.Tier) network.Tier {
+	if t < network.Soft {
+		return t + 1
+	}
+	return t
+}
+
+func maxTier(a, b network.Tier) network.Tier {
+	if a > b {
+		return a
+	}
+	return b
+}
+
+// boundItem is one bound a milestone gives a material's availability.
+type boundItem struct {
+	upper bool
+	day   date.Day
+	tier  network.Tier
+	ms    materials.Milestone
+	text  string
+}
+
+func (a *analysis) confidenceCap(c Confidence) network.Tier {
+	switch c {
+	case Probable:
+		return network.Firm
+	case Possible:
+		return network.Soft
+	}
+	return network.Hard
+}
+
+func dayText(d date.Day, upper bool) string { return FormatBound(d, upper) }
+
+// FormatBound shows a day as people write a bound: the year alone when the
+// bound is the first (lower) or last (upper) day of a year, the month when
+// it is the first or last of a month.
+func FormatBound(d date.Day, upper bool) string {
+	y, m, dd := d.Civil()
+	yearText := date.FormatYear(y)
+	if y < 1 {
+		yearText = fmt.Sprintf("%d BCE", 1-y)
+	} else if y < 1000 {
+		yearText = fmt.Sprintf("%d", y)
+	}
+	if !upper && m == 1 && dd == 1 || upper && m == 12 && dd == 31 {
+		return yearText
+	}
+	if !upper && dd == 1 || upper && dd == date.DaysInMonth(y, m) {
+		if y < 1000 {
+			return fmt.Sprintf("%s %s", monthName(m), yearText)
+		}
+		return fmt.Sprintf("%s-%02d", date.FormatYear(y), m)
+	}
+	return d.ISO()
+}
+
+func monthName(m int) string {
+	return [...]string{"", "Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"}[m]
+}
+
+// materialBounds returns the bounds a material's milestones give an event
+// made at place, and notes about fallbacks and disagreements.
+func (a *analysis) materialBounds(m *materials.Material, place string, cap network.Tier, ov override, b *built) []boundItem {
+	var items []boundItem
+	name := displayName(m)
+	group := func(kind materials.Kind, claims []materials.Milestone, area string, base network.Tier, upper bool) {
+		if len(claims) == 0 {
+			return
+		}
+		type cand struct {
+			day date.Day
+			ms  materials.Milestone
+		}
+		var cands []cand
+		for _, ms := range claims {
+			d := ms.Date
+			if d.Approximate {
+				d = d.Widen(a.circa)
+			}
+			var day date.Day
+			var ok bool
+			if upper {
+				day, ok = d.Latest()
+				if ok {
+					allow := a.allowance
+					if ms.Allowance != nil {
+						allow = *ms.Allowance
+					}
+					day += date.Day(allow.MaxDays())
+				}
+			} else {
+				day, ok = d.Earliest()
+			}
+			if ok {
+				cands = append(cands, cand{day, ms})
+			}
+		}
+		if len(cands) == 0 {
+			return
+		}
+		// Most conservative first: the earliest lower bound, the latest upper.
+		sort.SliceStable(cands, func(i, j int) bool {
+			if upper {
+				return cands[i].day > cands[j].day
+			}
+			return cands[i].day < cands[j].day
+		})
+		pick := 0
+		key := overrideKey(m.ID, kind, area)
+		if i, ok := ov[key]; ok && i < len(cands) {
+			pick = i
+		}
+		if b != nil && len(cands) > 1 && cands[0].day != cands[len(cands)-1].day {
+			var cl []string
+			for _, c := range cands {
+				cl = append(cl, fmt.Sprintf("%s (%s)", c.ms.Date.String(), c.ms.Source))
+			}
+			b.disagreements = append(b.disagreements, Disagreement{
+				Material: m.ID, Kind: string(kind), Place: area, Claims: cl,
+				Used: fmt.Sprintf("%s (%s)", cands[pick].ms.Date.String(), cands[pick].ms.Source),
+			})
+		}
+		c := cands[pick]
+		t := base
+		if c.ms.Date.Uncertain {
+			t = lower(t)
+		}
+		t = maxTier(t, cap)
+		what := string(kind)
+		if kind == materials.KindArrived {
+			what = "arrived in " + a.placeName(area)
+		}
+		text := fmt.Sprintf("%s: %s %s [%s, %s]", name, what, c.ms.Date.String(), c.ms.Source, c.ms.Basis)
+		if upper {
+			allow := a.allowance
+			if c.ms.Allowance != nil {
+				allow = *c.ms.Allowance
+			}
+			text += fmt.Sprintf(", plus a stock allowance of %s", durationText(allow))
+		}
+		items = append(items, boundItem{upper: upper, day: c.day, tier: t, ms: c.ms, text: text})
+	}
+	var made, sold, withdrawn []materials.Milestone
+	for _, ms := range m.Milestones {
+		switch ms.Kind {
+		case materials.KindMade:
+			made = append(made, ms)
+		case materials.KindSold:
+			sold = append(sold, ms)
+		case materials.KindWithdrawn:
+			withdrawn = append(withdrawn, ms)
+		}
+	}
+	group(materials.KindMade, made, "", network.Hard, false)
+	group(materials.KindSold, sold, "", network.Firm, false)
+	if place != "" {
+		arr, area := a.ds.Arrival(m, place)
+		if len(arr) == 0 {
+			if b != nil {
+				b.notes = append(b.notes, fmt.Sprintf("No arrival data for %s in %s: its soft bound falls back to its firm bound.", name, a.placeName(place)))
+			}
+		} else {
+			group(materials.KindArrived, arr, area, network.Soft, false)
+		}
+	}
+	group(materials.KindWithdrawn, withdrawn, "", network.Soft, true)
+	return items
+}
+
+func (a *analysis) placeName(code string) string {
+	if a.ds.Regions != nil {
+		if n := a.ds.Regions.Name(code); n != "" && n != code {
+			return fmt.Sprintf("%s (%s)", n, code)
+		}
+	}
+	return code
+}
+
+func displayName(m *materials.Material) string {
+	if len(m.Names) > 0 {
+		return m.Names[0]
+	}
+	return m.ID
+}
+
+func durationText(d date.Duration) string {
+	var parts []string
+	add := func(n int64, unit string) {
+		if n == 0 {
+			return
+		}
+		if n == 1 {
+			parts = append(parts, "1 "+unit)
+		} else {
+			parts = append(parts, fmt.Sprintf("%d %ss", n, unit))
+		}
+	}
+	add(d.Years, "year")
+	add(d.Months, "month")
+	add(d.Weeks, "week")
+	add(d.Days, "day")
+	if len(parts) == 0 {
+		return "0 days"
+	}
+	return strings.Join(parts, " ")
+}
+
+// window is a material's availability at one tier: [lo, hi], either side
+// possibly open, with the items that set each side.
+type window struct {
+	lo, hi     date.Day
+	hasLo      bool
+	hasHi      bool
+	loBy, hiBy *boundItem
+}
+
+func windowAt(items []boundItem, t network.Tier) window {
+	var w window
+	for i := range items {
+		it := &items[i]
+		if it.tier > t {
+			continue
+		}
+		if it.upper {
+			if !w.hasHi || it.day < w.hi {
+				w.hi, w.hasHi, w.hiBy = it.day, true, it
+			}
+		} else if !w.hasLo || it.day > w.lo {
+			w.lo, w.hasLo, w.loBy = it.day, true, it
+		}
+	}
+	return w
+}
+
+func (w window) alt(v network.Var) network.Alt {
+	alt := network.Alt{From: network.Zero, To: v, Lo: -network.Inf, Hi: network.Inf}
+	if w.hasLo {
+		alt.Lo = int64(w.lo)
+	}
+	if w.hasHi {
+		alt.Hi = int64(w.hi)
+	}
+	return alt
+}
+
+func (w window) same(o window) bool {
+	return w.hasLo == o.hasLo && w.hasHi == o.hasHi && (!w.hasLo || w.lo == o.lo) && (!w.hasHi || w.hi == o.hi)
+}
+
+// build translates the case into a network: findings into availability
+// bounds (a disjunction for alternatives), records into bounds, orders into
+// differences.
+func (a *analysis) build(ov override) (*built, error) {
+	b := &built{net: network.New(), links: map[string]link{}}
+	for _, e := range a.events {
+		b.vars = append(b.vars, b.net.AddVar(e.ID))
+	}
+	add := func(c network.Constraint, l link) error {
+		if err := b.net.Add(c); err != nil {
+			return fmt.Errorf("building the network for %s: %w", l.evidence, err)
+		}
+		b.links[c.ID] = l
+		return nil
+	}
+	// Orders.
+	for i, e := range a.events {
+		for _, o := range e.After {
+			lo, hi := int64(0), network.Inf
+			gap := ""
+			if o.AtLeast != nil {
+				lo = o.AtLeast.MinDays()
+				gap += " at least " + durationText(*o.AtLeast)
+			}
+			if o.AtMost != nil {
+				hi = o.AtMost.MaxDays()
+				if gap != "" {
+					gap += " and"
+				}
+				gap += " at most " + durationText(*o.AtMost)
+			}
+			text := fmt.Sprintf("%s comes after %s", e.ID, o.Event)
+			if gap != "" {
+				text += "," + gap + " later"
+			}
+			text += fmt.Sprintf(" [%s]", o.Strength)
+			if o.Note != "" {
+				text += " (" + o.Note + ")"
+			}
+			c := network.Constraint{ID: o.ID, Tier: o.Strength, Alts: []network.Alt{{From: b.vars[a.eventIdx[o.Event]], To: b.vars[i], Lo: lo, Hi: hi}}}
+			if err := add(c, link{evidence: o.ID, lower: text, upper: text, general: text}); err != nil {
+				return nil, err
+			}
+			row := Evidence{ID: o.ID, Kind: "order", Event: e.ID, What: text}
+			side := "after"
+			row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Date: o.Event + gap, Tier: o.Strength})
+			b.evidence = append(b.evidence, row)
+		}
+	}
+	// Findings.
+	for _, f := range a.findings {
+		ev := a.events[a.eventIdx[f.Event]]
+		v := b.vars[a.eventIdx[f.Event]]
+		cap := a.confidenceCap(f.Confidence)
+		place := a.placeOf(ev)
+		perMat := make([][]boundItem, len(f.mats))
+		var names []string
+		for i, m := range f.mats {
+			perMat[i] = a.materialBounds(m, place, cap, ov, b)
+			names = append(names, displayName(m))
+		}
+		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: strings.Join(names, " or "),
+			Method: f.Method, Sample: f.Sample, Confidence: string(f.Confidence)}
+		for i, items := range perMat {
+			for _, it := range items {
+				side := "not before"
+				if it.upper {
+					side = "not after"
+				}
+				row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Date: it.day.ISO(), Tier: it.tier,
+					Milestone: string(it.ms.Kind), Material: f.mats[i].ID, Source: it.ms.Source})
+			}
+		}
+		b.evidence = append(b.evidence, row)
+		if len(f.mats) == 1 {
+			// One material: its lower and upper sides are separate constraints,
+			// so that a conflict names the side that fails.
+			var prevLo, prevHi *boundItem
+			for _, t := range tiers() {
+				w := windowAt(perMat[0], t)
+				if w.hasLo && w.loBy != prevLo {
+					prevLo = w.loBy
+					id := fmt.Sprintf("%s/after@%s", f.ID, t)
+					text := fmt.Sprintf("%s found (%s): not before %s, from %s", f.ID, f.Confidence, dayText(w.lo, false), w.loBy.text)
+					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: int64(w.lo), Hi: network.Inf}}}
+					if err := add(c, link{evidence: f.ID, lower: text, upper: text, general: text}); err != nil {
+						return nil, err
+					}
+				}
+				if w.hasHi && w.hiBy != prevHi {
+					prevHi = w.hiBy
+					id := fmt.Sprintf("%s/before@%s", f.ID, t)
+					text := fmt.Sprintf("%s found (%s): not after %s, from %s", f.ID, f.Confidence, dayText(w.hi, true), w.hiBy.text)
+					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: -network.Inf, Hi: int64(w.hi)}}}
+					if err := add(c, link{evidence: f.ID, lower: text, upper: text, general: text}); err != nil {
+						return nil, err
+					}
+				}
+			}
+			continue
+		}
+		// Alternatives: the event lies in the union of their windows.
+		var prev []window
+		for _, t := range tiers() {
+			ws := make([]window, len(perMat))
+			unbounded := false
+			for i := range perMat {
+				ws[i] = windowAt(perMat[i], t)
+				if !ws[i].hasLo && !ws[i].hasHi {
+					unbounded = true
+				}
+			}
+			if unbounded {
+				prev = ws
+				continue
+			}
+			if prev != nil && len(prev) == len(ws) {
+				same := true
+				for i := range ws {
+					if !ws[i].same(prev[i]) {
+						same = false
+					}
+				}
+				if same {
+					continue
+				}
+			}
+			prev = ws
+			var alts []network.Alt
+			var lowTexts, upTexts []string
+			for i, w := range ws {
+				if w.hasLo && w.hasHi && w.lo > w.hi {
+					b.notes = append(b.notes, fmt.Sprintf("%s: by the dataset, %s was withdrawn before it was available at the %s tier; that alternative is dropped there.", f.ID, names[i], t))
+					continue
+				}
+				alts = append(alts, w.alt(v))
+				if w.loBy != nil {
+					lowTexts = append(lowTexts, w.loBy.text)
+				} else {
+					lowTexts = append(lowTexts, names[i]+": no lower bound")
+				}
+				if w.hiBy != nil {
+					upTexts = append(upTexts, w.hiBy.text)
+				}
+			}
+			if len(alts) == 0 {
+				continue
+			}
+			id := fmt.Sprintf("%s@%s", f.ID, t)
+			lowText := fmt.Sprintf("%s found (%s), one of: %s", f.ID, f.Confidence, strings.Join(lowTexts, "; "))
+			upText := fmt.Sprintf("%s found (%s), one of: %s", f.ID, f.Confidence, strings.Join(upTexts, "; "))
+			if len(upTexts) == 0 {
+				upText = lowText
+			}
+			c := network.Constraint{ID: id, Tier: t, Alts: alts}
+			if err := add(c, link{evidence: f.ID, lower: lowText, upper: upText, general: lowText}); err != nil {
+				return nil, err
+			}
+		}
+	}
+	// Records.
+	for _, r := range a.c.Records {
+		v := b.vars[a.eventIdx[r.Event]]
+		d := r.Date
+		if d.Approximate {
+			d = d.Widen(a.circa)
+		}
+		t := r.Strength
+		if d.Uncertain {
+			t = lower(t)
+		}
+		var alts []network.Alt
+		var sides []EvidenceBound
+		switch r.Kind {
+		case RecordOn:
+			for _, iv := range d.Alternatives {
+				alt := network.Alt{From: network.Zero, To: v, Lo: -network.Inf, Hi: network.Inf}
+				if !iv.OpenStart {
+					alt.Lo = int64(iv.First)
+				}
+				if !iv.OpenEnd {
+					alt.Hi = int64(iv.Last)
+				}
+				alts = append(alts, alt)
+			}
+		case RecordNotBefore:
+			if first, ok := d.Earliest(); ok {
+				alts = append(alts, network.Alt{From: network.Zero, To: v, Lo: int64(first), Hi: network.Inf})
+			}
+		case RecordNotAfter:
+			if last, ok := d.Latest(); ok {
+				alts = append(alts, network.Alt{From: network.Zero, To: v, Lo: -network.Inf, Hi: int64(last)})
+			}
+		case RecordBetween:
+			alt := network.Alt{From: network.Zero, To: v, Lo: -network.Inf, Hi: network.Inf}
+			if first, ok := d.Earliest(); ok {
+				alt.Lo = int64(first)
+			}
+			if last, ok := d.Latest(); ok {
+				alt.Hi = int64(last)
+			}
+			alts = append(alts, alt)
+		}
+		if len(alts) == 0 {
+			b.notes = append(b.notes, fmt.Sprintf("Record %s (%s %s) is open on the side it bounds and adds nothing.", r.ID, r.Kind, r.DateText))
+			continue
+		}
+		lo, hi := alts[0].Lo, alts[len(alts)-1].Hi
+		if lo > -network.Inf {
+			sides = append(sides, EvidenceBound{Side: "not before", Date: date.Day(lo).ISO(), Tier: t, Source: r.Source})
+		}
+		if hi < network.Inf {
+			sides = append(sides, EvidenceBound{Side: "not after", Date: date.Day(hi).ISO(), Tier: t, Source: r.Source})
+		}
+		what := fmt.Sprintf("%s %s", strings.ReplaceAll(string(r.Kind), "_", " "), d.String())
+		src := ""
+		if r.Source != "" {
+			src = " (" + r.Source + ")"
+		}
+		lowText := fmt.Sprintf("%s: %s%s, not before %s [%s]", r.ID, what, src, dayText(date.Day(lo), false), t)
+		upText := fmt.Sprintf("%s: %s%s, not after %s [%s]", r.ID, what, src, dayText(date.Day(hi), true), t)
+		general := fmt.Sprintf("%s: %s%s [%s]", r.ID, what, src, t)
+		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, link{evidence: r.ID, lower: lowText, upper: upText, general: general}); err != nil {
+			return nil, err
+		}
+		b.evidence = append(b.evidence, Evidence{ID: r.ID, Kind: "record", Event: r.Event, What: what, Bounds: sides, Source: r.Source})
+	}
+	return b, nil
+}
+
+// run builds and solves the network at every tier and reads the result.
+func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, error) {
+	b, err := a.build(ov)
+	if err != nil {
+		return nil, err
+	}
+	res := &Result{Title: a.c.Title, File: a.c.File, Place: a.c.Place, Evidence: b.evidence, Disagreements: b.disagreements}
+	res.Dataset = DatasetInfo{Version: a.ds.Version, SHA256: a.ds.SHA256}
+	res.Notes = append(res.Notes, dedupe(b.notes)...)
+	res.Events = make([]EventResult, len(a.events))
+	for i, e := range a.events {
+		res.Events[i] = EventResult{ID: e.ID, Label: e.Label, Place: a.placeOf(e)}
+	}
+	reported := map[string]bool{}
+	var sols [3]*network.Result
+	for _, t := range tiers() {
+		sol, err := b.net.Solve(ctx, t, network.Options{MaxConflicts: opt.MaxConflicts})
+		if err != nil {
+			return nil, fmt.Errorf("solving the %s tier: %w", t, err)
+		}
+		sols[t] = sol
+		res.Consistent[t] = sol.Consistent
+		res.ConflictsComplete[t] = true
+		if !sol.Consistent {
+			res.ConflictsComplete[t] = sol.ConflictsComplete
+			for _, cs := range sol.Conflicts {
+				evs, steps := b.explainSet(cs)
+				key := strings.Join(evs, "\x00")
+				if reported[key] {
+					continue
+				}
+				reported[key] = true
+				res.Conflicts = append(res.Conflicts, Conflict{Tier: t, Evidence: evs, Steps: steps})
+			}
+			evs, _ := b.explainSet(sol.Correction)
+			res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs})
+			continue
+		}
+		for i := range a.events {
+			v := b.vars[i]
+			w := &Window{}
+			for _, iv := range sol.Domain(v) {
+				w.Intervals = append(w.Intervals, spanOf(iv))
+			}
+			w.Earliest = b.bound(sol.Earliest(v), false)
+			w.Latest = b.bound(sol.Latest(v), true)
+			res.Events[i].Windows[t] = w
+		}
+	}
+	a.judge(res)
+	res.Sources = a.sources(res.Evidence)
+	res.Disagreements = dedupeDisagreements(res.Disagreements)
+	return res, nil
+}
+
+func (a *analysis) sources(rows []Evidence) []SourceRef {
+	seen := map[string]bool{}
+	var out []SourceRef
+	for _, r := range rows {
+		if r.Kind != "finding" {
+			continue
+		}
+		for _, b := range r.Bounds {
+			if b.Source == "" || seen[b.Source] {
+				continue
+			}
+			seen[b.Source] = true
+			ref := SourceRef{Key: b.Source}
+			if s, ok := a.ds.Source(b.Source); ok {
+				ref.Cite, ref.URL = s.Cite, s.URL
+			}
+			out = append(out, ref)
+		}
+	}
+	sort.Slice(out, func(i, j int) bool { return out[i].Key < out[j].Key })
+	return out
+}
+
+func dedupeDisagreements(list []Disagreement) []Disagreement {
+	seen := map[string]bool{}
+	var out []Disagreement
+	for _, d := range list {
+		k := overrideKey(d.Material, materials.Kind(d.Kind), d.Place)
+		if seen[k] {
+			continue
+		}
+		seen[k] = true
+		out = append(out, d)
+	}
+	return out
+}
+
+func spanOf(iv network.Interval) Span {
+	s := Span{First: date.Day(iv.Lo), Last: date.Day(iv.Hi)}
+	if iv.Lo <= -network.Inf {
+		s.OpenStart, s.First = true, 0
+	}
+	if iv.Hi >= network.Inf {
+		s.OpenEnd, s.Last = true, 0
+	}
+	return s
+}
+
+func (b *built) bound(nb network.Bound, upper bool) Bound {
+	out := Bound{}
+	if upper && nb.Value < network.Inf || !upper && nb.Value > -network.Inf {
+		out.Day, out.Bounded = date.Day(nb.Value), true
+	}
+	for _, id := range nb.Because {
+		l, ok := b.links[id]
+		if !ok {
+			continue
+		}
+		if len(out.Because) == 0 || out.Because[len(out.Because)-1] != l.evidence {
+			out.Because = append(out.Because, l.evidence)
+		}
+		text := l.lower
+		if upper {
+			text = l.upper
+		}
+		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text})
+	}
+	return out
+}
+
+// explainSet maps network constraint ids to evidence ids (sorted, without
+// repeats) and the steps that say what each contributes.
+func (b *built) explainSet(ids []string) ([]string, []Step) {
+	seen := map[string]bool{}
+	var evs []string
+	var steps []Step
+	for _, id := range ids {
+		l, ok := b.links[id]
+		if !ok {
+			continue
+		}
+		steps = append(steps, Step{Evidence: l.evidence, Text: l.general})
+		if !seen[l.evidence] {
+			seen[l.evidence] = true
+			evs = append(evs, l.evidence)
+		}
+	}
+	sort.Strings(evs)
+	return evs, steps
+}
+
+func dedupe(list []string) []string {
+	seen := map[string]bool{}
+	var out []string
+	for _, s := range list {
+		if !seen[s] {
+			seen[s] = true
+			out = append(out, s)
+		}
+	}
+	return out
+}
+
+// judge gives each claim its verdict from the windows.
+func (a *analysis) judge(res *Result) {
+	strongest := -1 // the weakest tier that is still consistent
+	for _, t := range tiers() {
+		if !res.Consistent[t] {
+			break
+		}
+		strongest = int(t)
+	}
+	if strongest < int(network.Soft) && strongest >= 0 {
+		res.Notes = append(res.Notes, fmt.Sprintf("The evidence of the %s tier conflicts, so verdicts are judged at the %s tier, the weakest that agrees.", network.Tier(strongest+1), network.Tier(strongest)))
+	}
+	for _, c := range a.c.Claims {
+		cr := ClaimResult{ID: c.ID, Event: c.Event, Date: c.Date.EDTF(), By: c.By}
+		d := c.Date
+		if d.Approximate {
+			d = d.Widen(a.circa)
+		}
+		ev := res.Events[a.eventIdx[c.Event]]
+		var claim []Span
+		for _, iv := range d.Alternatives {
+			claim = append(claim, Span{First: iv.First, Last: iv.Last, OpenStart: iv.OpenStart, OpenEnd: iv.OpenEnd})
+		}
+		if strongest < 0 {
+			cr.Verdict = Undetermined
+			cr.Note = "the hard evidence contradicts itself; resolve the conflicts first"
+			res.Claims = append(res.Claims, cr)
+			continue
+		}
+		cr.Verdict = Consistent
+		cr.JudgedAt = network.Tier(strongest)
+		failed := -1
+		for _, t := range tiers() {
+			if int(t) > strongest {
+				break
+			}
+			w := ev.Windows[t]
+			cr.Surviving[t] = intersect(claim, w.Intervals)
+			if len(cr.Surviving[t]) == 0 && failed < 0 {
+				failed = int(t)
+			}
+		}
+		if failed >= 0 {
+			cr.Verdict = [...]Verdict{Excluded, Improbable, Doubtful}[failed]
+			w := ev.Windows[failed]
+			cr.Deciding = deciding(claim, w)
+		}
+		res.Claims = append(res.Claims, cr)
+	}
+}
+
+// deciding names the evidence behind the bound a claim falls outside.
+func deciding(claim []Span, w *Window) []string {
+	if len(claim) == 0 {
+		return nil
+	}
+	last := claim[len(claim)-1]
+	first := claim[0]
+	var out []string
+	if w.Earliest.Bounded && !last.OpenEnd && last.Last < w.Earliest.Day {
+		return append(out, w.Earliest.Because...)
+	}
+	if w.Latest.Bounded && !first.OpenStart && first.First > w.Latest.Day {
+		return append(out, w.Latest.Because...)
+	}
+	// The claim falls in a gap of the window: both sides count.
+	out = append(out, w.Earliest.Because...)
+	for _, id := range w.Latest.Because {
+		if !contains(out, id) {
+			out = append(out, id)
+		}
+	}
+	return out
+}
+
+// intersect returns the days in both a and b, as spans.
+func intersect(a, b []Span) []Span {
+	var out []Span
+	for _, x := range a {
+		for _, y := range b {
+			s := Span{}
+			switch {
+			case x.OpenStart && y.OpenStart:
+				s.OpenStart = true
+			case x.OpenStart:
+				s.First = y.First
+			case y.OpenStart:
+				s.First = x.First
+			default:
+				s.First = max(x.First, y.First)
+			}
+			switch {
+			case x.OpenEnd && y.OpenEnd:
+				s.OpenEnd = true
+			case x.OpenEnd:
+				s.Last = y.Last
+			case y.OpenEnd:
+				s.Last = x.Last
+			default:
+				s.Last = min(x.Last, y.Last)
+			}
+			if !s.OpenStart && !s.OpenEnd && s.First > s.Last {
+				continue
+			}
+			out = append(out, s)
+		}
+	}
+	return out
+}
+
+// sensitivity re-solves the case under the other claim of every
+// disagreement (the least conservative one) and says whether a verdict or
+// the consistency of a tier would change.
+func (a *analysis) sensitivity(ctx context.Context, opt Options, res *Result) error {
+	for i := range res.Disagreements {
+		d := &res.Disagreements[i]
+		ov := override{overrideKey(d.Material, materials.Kind(d.Kind), d.Place): len(d.Claims) - 1}
+		alt, err := a.run(ctx, opt, ov)
+		if err != nil {
+			return err
+		}
+		var changes []string
+		for t := range res.Consistent {
+			if res.Consistent[t] != alt.Consistent[t] {
+				changes = append(changes, fmt.Sprintf("the %s tier would %s", network.Tier(t), map[bool]string{true: "agree", false: "conflict"}[alt.Consistent[t]]))
+			}
+		}
+		for j := range res.Claims {
+			if res.Claims[j].Verdict != alt.Claims[j].Verdict {
+				changes = append(changes, fmt.Sprintf("claim %s would be %s", res.Claims[j].ID, alt.Claims[j].Verdict))
+			}
+		}
+		latest := d.Claims[len(d.Claims)-1]
+		kind := d.Kind
+		if d.Place != "" {
+			kind += " in " + a.placeName(d.Place)
+		}
+		d.Text = fmt.Sprintf("Sources disagree on when %s was %s: %s. The bound uses %s, the most conservative.", d.Material, kind, strings.Join(d.Claims, ", "), d.Used)
+		if len(changes) == 0 {
+			d.Text += fmt.Sprintf(" Under %s no verdict would change.", latest)
+		} else {
+			d.ChangesVerdict = true
+			d.Text += fmt.Sprintf(" Under %s %s.", latest, strings.Join(changes, "; "))
+		}
+	}
+	return nil
+}

@@ -1,0 +1,161 @@
+package constraint
+
+import (
+	"terminus/constraint/date"
+	"terminus/constraint/network"
+)
+
+// tiers returns the three strength tiers, strongest first; windows nest:
+// soft ⊆ firm ⊆ hard.
+func tiers() [3]network.Tier { return [3]network.Tier{network.Hard, network.Firm, network.Soft} }
+
+// Verdict is the judgement on a claimed date.
+type Verdict string
+
+// The verdicts, from best to worst. Undetermined is used only when even the
+// hard evidence contradicts itself, so that no tier can judge.
+const (
+	Consistent   Verdict = "consistent"
+	Doubtful     Verdict = "doubtful"
+	Improbable   Verdict = "improbable"
+	Excluded     Verdict = "excluded"
+	Undetermined Verdict = "undetermined"
+)
+
+// Result is everything terminus concludes about one case.
+type Result struct {
+	Title   string
+	File    string
+	Place   string
+	Dataset DatasetInfo
+	// Consistent tells, per tier (indexed by network.Tier), whether the
+	// evidence of that tier agrees.
+	Consistent [3]bool
+	Events     []EventResult
+	Claims     []ClaimResult
+	// Conflicts are minimal sets of evidence that cannot all hold, per
+	// inconsistent tier; Corrections the cheapest removal per tier.
+	Conflicts   []Conflict
+	Corrections []Correction
+	// ConflictsComplete is false where more conflicts exist than were listed.
+	ConflictsComplete [3]bool
+	Evidence          []Evidence
+	Disagreements     []Disagreement
+	// Sources are the dataset sources the evidence cites, by key.
+	Sources  []SourceRef
+	Notes    []string
+	Cautions []string
+}
+
+// DatasetInfo names the materials dataset a result was computed with.
+type DatasetInfo struct {
+	Version string
+	SHA256  string
+}
+
+// EventResult holds an event's window at each tier; nil where the tier is
+// inconsistent.
+type EventResult struct {
+	ID, Label string
+	Place     string
+	Windows   [3]*Window
+}
+
+// Window is the exact set of days an event can fall on at one tier.
+type Window struct {
+	Earliest, Latest Bound
+	// Intervals is the exact feasible set (a union of intervals), ascending.
+	Intervals []Span
+}
+
+// Span is a run of days; an open side is unbounded.
+type Span struct {
+	First, Last        date.Day
+	OpenStart, OpenEnd bool
+}
+
+// Bound is one end of a window and the evidence that sets it.
+type Bound struct {
+	Day     date.Day
+	Bounded bool
+	// Because lists evidence ids in order from the dated evidence to the
+	// event.
+	Because []string
+	// Chain says, step by step, why: each step an evidence item and what it
+	// contributes.
+	Chain []Step
+}
+
+// Step is one link of a chain of evidence.
+type Step struct {
+	Evidence string
+	Text     string
+}
+
+// ClaimResult is the verdict on one claim.
+type ClaimResult struct {
+	ID, Event, Date, By string
+	Verdict             Verdict
+	// JudgedAt is the tier whose window decided the verdict's level, the
+	// strongest consistent one.
+	JudgedAt network.Tier
+	// Surviving is, per tier, the part of the claim that the evidence of
+	// that tier allows (nil: none, or the tier is inconsistent).
+	Surviving [3][]Span
+	// Deciding lists the evidence that rules the claim out at the weakest
+	// tier where it fails (empty when consistent).
+	Deciding []string
+	Note     string
+}
+
+// Conflict is a minimal set of evidence that cannot all be true at a tier.
+type Conflict struct {
+	Tier     network.Tier
+	Evidence []string
+	Steps    []Step
+}
+
+// Correction is a smallest, weakest set of evidence whose removal restores
+// consistency at a tier.
+type Correction struct {
+	Tier     network.Tier
+	Evidence []string
+}
+
+// Evidence is one row of the evidence table.
+type Evidence struct {
+	ID         string
+	Kind       string // finding, record, order
+	Event      string
+	What       string // the material(s), the record, the order
+	Method     string
+	Sample     string
+	Confidence string
+	Bounds     []EvidenceBound
+	Source     string
+}
+
+// EvidenceBound is one bound that an evidence item puts on its event.
+type EvidenceBound struct {
+	Side      string // "not before", "not after", "within", "after"
+	Date      string // the day, ISO 8601, or a gap for an order
+	Tier      network.Tier
+	Milestone string // made, sold, arrived, withdrawn; empty for records and orders
+	Material  string
+	Source    string // a dataset source key, or the record's source
+}
+
+// Disagreement is a milestone on which sources disagree, and whether using
+// another claim would change a verdict.
+type Disagreement struct {
+	Material, Kind, Place string
+	Claims                []string // "1704 (source)", …
+	Used                  string
+	ChangesVerdict        bool
+	Text                  string
+}
+
+// SourceRef is a dataset source cited by the evidence.
+type SourceRef struct {
+	Key, Cite, URL string
+}
