@@ -1,0 +1,200 @@
+package materials_test
+
+import (
+	"strings"
+	"testing"
+
+	"terminus/constraint/date"
+	"terminus/materials"
+)
+
+// antiquityFile is the family file these checks cover.
+const antiquityFile = "antiquity-natural.yaml"
+
+// TestAntiquityAgainstSources checks that the embedded dataset holds dates
+// as the named published sources give them. One row per value; the source
+// and the place in it stand beside the value. Dates are EDTF in
+// astronomical years (2000 BCE = -1999).
+func TestAntiquityAgainstSources(t *testing.T) {
+	d := builtinForAntiquity(t)
+	rows := []struct {
+		id    string
+		kind  materials.Kind
+		place string
+		want  string
+		src   string
+	}{
+		// Wikipedia, "Rubia tinctorum", section History: madder-dyed cotton from Mohenjo-daro, 3rd millennium BCE.
+		{"madder", materials.KindMade, "", "-2999/-2000", "Wikipedia, Rubia tinctorum, History"},
+		// Cesaratto, Luo, Smith and Leona, Heritage Science 6 (2018), abstract: imported carmine replaced safflower early in 1869.
+		{"cochineal-carmine", materials.KindArrived, "JP", "1869", "Cesaratto et al. 2018, abstract"},
+		// Wikipedia, "Lead-tin yellow", section History: no paintings with it after 1750.
+		{"lead-tin-yellow-i", materials.KindWithdrawn, "", "1750", "Wikipedia, Lead-tin yellow, History"},
+		// Gettens and Stout, Painting Materials (1942), entry Smalt, p. 158: invention about 1540-1560.
+		{"smalt", materials.KindMade, "", "1540/1560", "Gettens and Stout 1942, p. 158"},
+		// From memory, not read here: Artists' Pigments vol. 2, smalt chapter, 15th-century European paintings.
+		{"smalt", materials.KindMade, "", "14XX", "Artists' Pigments vol. 2 (from memory)"},
+		// Wikipedia, "Han purple and Han blue", lead section: from the Western Zhou period, 1045-771 BCE.
+		{"han-blue", materials.KindMade, "", "-1044/-0770", "Wikipedia, Han purple and Han blue, lead"},
+		// Gettens and Stout, Painting Materials (1942), p. 140: Egyptian blue manufactured by 2000 BCE.
+		{"egyptian-blue", materials.KindMade, "", "-1999", "Gettens and Stout 1942, p. 140"},
+		// Wikipedia, "Indian yellow", lead section: commercially unavailable about 1921.
+		{"indian-yellow", materials.KindWithdrawn, "", "1921~", "Wikipedia, Indian yellow, lead"},
+		// The Cyclopaedia of India, vol. 1, entry Gamboge: piece brought from China by van Neck in 1603.
+		{"gamboge", materials.KindArrived, "150", "1603", "Cyclopaedia of India, Gamboge"},
+		// Wikipedia, "Tyrian purple", section Background: made until the fall of Constantinople, 1453.
+		{"tyrian-purple", materials.KindWithdrawn, "", "1453", "Wikipedia, Tyrian purple, Background"},
+		// Stieglitz, The Biblical Archaeologist 57 (1994), abstract: Minoan sea purple before 1750 BCE.
+		{"tyrian-purple", materials.KindMade, "", "-1749~", "Stieglitz 1994, abstract"},
+		// Report on the Cave of Skulls textile: radiocarbon 1954-1767 BCE, dyed with Kermes vermilio.
+		{"kermes", materials.KindMade, "", "-1953/-1766", "Cave of Skulls report"},
+		// MFA Boston, CAMEO, entry Sepia: watercolour introduced by Seydelmann about 1780.
+		{"sepia", materials.KindSold, "", "1780~", "CAMEO, Sepia"},
+		// Gettens and Stout, Painting Materials (1942), entry Ultramarine, p. 165: Marco Polo at the mines, 1271.
+		{"natural-ultramarine", materials.KindArrived, "150", "1271", "Gettens and Stout 1942, p. 165"},
+		// Getty AAT, vermilion (pigment), scope note: the dry process reached Europe about the 8th century.
+		{"vermilion", materials.KindArrived, "150", "07XX~", "Getty AAT, vermilion"},
+		// Wikipedia, "Lead white", History: the Chinese method reached Japan in the 7th century.
+		{"lead-white", materials.KindArrived, "JP", "06XX", "Wikipedia, Lead white, History"},
+		// Wikipedia, "Indian yellow", History: Rajput and Mughal miniatures from the 16th century.
+		{"indian-yellow", materials.KindMade, "", "15XX", "Wikipedia, Indian yellow, History"},
+	}
+	for _, r := range rows {
+		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
+			want, err := date.Parse(r.want)
+			if err != nil {
+				t.Fatalf("bad expected date %q: %v", r.want, err)
+			}
+			m, err := d.Lookup(r.id)
+			if err != nil {
+				t.Fatalf("Lookup(%q): %v", r.id, err)
+			}
+			var got []string
+			for _, ms := range m.Claims(r.kind, r.place) {
+				got = append(got, ms.Date.EDTF())
+				if ms.Date.EDTF() == want.EDTF() {
+					return
+				}
+			}
+			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
+		})
+	}
+}
+
+// TestAntiquityTradeFacts checks facts of the trade (common practice) that
+// the family must carry.
+func TestAntiquityTradeFacts(t *testing.T) {
+	d := builtinForAntiquity(t)
+	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
+
+	t.Run("madder dyed by about 2000 BCE", func(t *testing.T) {
+		// Common practice: madder was used to dye leather and cloth by about 2000 BCE.
+		m := lookup(t, d, "madder")
+		first, ok := earliestClaim(m.Claims(materials.KindMade, ""))
+		if !ok {
+			t.Fatal("madder has no bounded made claim")
+		}
+		if first > year(-1949) {
+			t.Errorf("madder earliest made %s, want no later than about 2000 BCE", first.ISO())
+		}
+	})
+	t.Run("cochineal carmine in Japan about 1870", func(t *testing.T) {
+		// Common practice: cochineal carmine reached Japan by about 1870.
+		m := lookup(t, d, "cochineal carmine")
+		claims, area := d.Arrival(m, "JP")
+		if area != "JP" || len(claims) == 0 {
+			t.Fatalf("no arrival in JP (area %q)", area)
+		}
+		for _, c := range claims {
+			lo, ok1 := c.Date.Earliest()
+			hi, ok2 := c.Date.Latest()
+			if !ok1 || !ok2 || lo < year(1860) || hi >= year(1881) {
+				t.Errorf("JP arrival %s, want about 1870", c.Date.EDTF())
+			}
+		}
+	})
+	t.Run("lead-tin yellow ends about 1750", func(t *testing.T) {
+		// Common practice: lead-tin yellow vanished about 1750 and was rediscovered in the 20th century.
+		m := lookup(t, d, "lead-tin yellow")
+		ws := m.Claims(materials.KindWithdrawn, "")
+		if len(ws) == 0 {
+			t.Fatal("no withdrawn claim")
+		}
+		found := false
+		for _, w := range ws {
+			lo, ok1 := w.Date.Earliest()
+			hi, ok2 := w.Date.Latest()
+			if ok1 && ok2 && lo >= year(1700) && hi < year(1800) {
+				found = true
+			}
+		}
+		if !found {
+			t.Errorf("no withdrawn claim in the 18th century near 1750")
+		}
+		if !strings.Contains(m.Note, "1941") {
+			t.Errorf("note should name the 20th-century rediscovery (1941): %q", m.Note)
+		}
+	})
+}
+
+// TestAntiquityFileLintsClean runs the dataset lint and reports the
+// problems that fall in this family's file, and checks that each of its
+// materials resolves by every one of its names.
+func TestAntiquityFileLintsClean(t *testing.T) {
+	d := builtinForAntiquity(t)
+	for _, p := range materials.Lint(d) {
+		if strings.HasSuffix(p.File, antiquityFile) {
+			t.Errorf("lint: %s", p)
+		}
+	}
+	n := 0
+	for _, m := range d.Materials {
+		if !strings.HasSuffix(m.File, antiquityFile) {
+			continue
+		}
+		n++
+		for _, name := range m.Names {
+			got, err := d.Lookup(name)
+			if err != nil {
+				t.Errorf("Lookup(%q): %v", name, err)
+				continue
+			}
+			if got.ID != m.ID {
+				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
+			}
+		}
+	}
+	if n < 12 {
+		t.Errorf("only %d materials come from %s", n, antiquityFile)
+	}
+}
+
+func builtinForAntiquity(t *testing.T) *materials.Dataset {
+	t.Helper()
+	d, err := materials.Builtin()
+	if err != nil {
+		t.Fatalf("Builtin: %v", err)
+	}
+	return d
+}
+
+func lookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
+	t.Helper()
+	m, err := d.Lookup(name)
+	if err != nil {
+		t.Fatalf("Lookup(%q): %v", name, err)
+	}
+	return m
+}
+
+// earliestClaim is the earliest bounded start among claims.
+func earliestClaim(claims []materials.Milestone) (date.Day, bool) {
+	var best date.Day
+	ok := false
+	for _, c := range claims {
+		if e, bounded := c.Date.Earliest(); bounded && (!ok || e < best) {
+			best, ok = e, true
+		}
+	}
+	return best, ok
+}
