@@ -3,167 +3,649 @@ package network
 import (
 	"context"
 	"fmt"
-	"sort"
+	"slices"
+	"strings"
 )
 
 // Solve solves the network with every constraint whose tier is at most
-// tier. It fails only when ctx is done or a search exceeds opt.MaxNodes.
+// tier. It fails only when ctx is done or a search exceeds
+// [Options.MaxNodes]; an inconsistent network is a Result, not an error.
 func (n *Network) Solve(ctx context.Context, tier Tier, opt Options) (*Result, error) {
-	var active []int
+	s := n.newSolver(ctx, opt)
+	var active []int32
 	for i, c := range n.cons {
 		if c.Tier <= tier {
-			active = append(active, i)
+			active = append(active, int32(i))
 		}
 	}
 	r := &Result{Tier: tier}
-	ok, err := n.naiveDomains(ctx, active, r)
+	ok, seed, err := s.domains(active, r)
 	if err != nil {
 		return nil, err
 	}
+	r.Nodes = s.nodes
 	r.Consistent = ok
-	if !ok {
-		r.domains, r.earliest, r.latest = nil, nil, nil
-		n.naiveConflicts(ctx, active, r, opt)
+	if ok {
+		return r, nil
+	}
+	r.domains, r.earliest, r.latest = nil, nil, nil
+	if err := s.explain(active, seed, r); err != nil {
+		return nil, err
 	}
 	return r, nil
 }
 
-// naiveDomains enumerates every scenario (one alternative per constraint)
-// and solves each with Bellman–Ford. A first, slow, exact solver.
-func (n *Network) naiveDomains(ctx context.Context, active []int, r *Result) (bool, error) {
-	nv := len(n.names)
-	choice := make([]int, len(active))
-	r.domains = make([]Set, nv)
-	r.earliest = make([]Bound, nv)
-	r.latest = make([]Bound, nv)
-	for v := range r.earliest {
-		r.earliest[v] = Bound{Value: Inf}
-		r.latest[v] = Bound{Value: -Inf}
-	}
-	any := false
-	for {
-		if err := ctx.Err(); err != nil {
-			return false, fmt.Errorf("solve: %w", err)
-		}
-		var es []edge
-		for k, ci := range active {
-			a := n.cons[ci].Alts[choice[k]]
-			if a.Hi < Inf {
-				es = append(es, edge{int32(a.From), int32(a.To), a.Hi, int32(ci)})
-			}
-			if a.Lo > -Inf {
-				es = append(es, edge{int32(a.To), int32(a.From), -a.Lo, int32(ci)})
-			}
-		}
-		if up, upWhy, ok := bellmanFord(nv, es, false); ok {
-			lo, loWhy, _ := bellmanFord(nv, es, true)
-			any = true
-			for v := 0; v < nv; v++ {
-				l, h := -lo[v], up[v]
-				r.domains[v] = union(r.domains[v], Interval{l, h})
-				if l < r.earliest[v].Value {
-					r.earliest[v] = Bound{Value: l, Because: n.idsOf(loWhy[v], true)}
-				}
-				if h > r.latest[v].Value {
-					r.latest[v] = Bound{Value: h, Because: n.idsOf(upWhy[v], true)}
-				}
-			}
-		}
-		k := 0
-		for ; k < len(active); k++ {
-			choice[k]++
-			if choice[k] < len(n.cons[active[k]].Alts) {
-				break
-			}
-			choice[k] = 0
-		}
-		if k == len(active) {
-			break
-		}
-	}
-	return any, nil
+// solver holds what one call of Solve shares between its searches.
+type solver struct {
+	n     *Network
+	ctx   context.Context
+	opt   Options
+	rank  []int32 // constraint index → rank of its id
+	nodes int
+	g     stn
 }
 
-func (n *Network) idsOf(path []int32, reverse bool) []string {
-	out := make([]string, 0, len(path))
-	for _, c := range path {
-		out = append(out, n.cons[c].ID)
+func (n *Network) newSolver(ctx context.Context, opt Options) *solver {
+	order := make([]int32, len(n.cons))
+	for i := range order {
+		order[i] = int32(i)
 	}
-	if reverse {
-		for i, j := 0, len(out)-1; i < j; i, j = i+1, j-1 {
-			out[i], out[j] = out[j], out[i]
+	slices.SortFunc(order, func(a, b int32) int { return strings.Compare(n.cons[a].ID, n.cons[b].ID) })
+	rank := make([]int32, len(n.cons))
+	for r, i := range order {
+		rank[i] = int32(r)
+	}
+	s := &solver{n: n, ctx: ctx, opt: opt, rank: rank}
+	s.g.rank = rank
+	return s
+}
+
+// piece is a run of a unary interval set with the constraints that set
+// its ends (-1 for an unbounded end).
+type piece struct {
+	lo, hi       int64
+	loTag, hiTag int32
+}
+
+// calt is an alternative in solver form over local nodes: lo <= to − from
+// <= hi, with the constraints that set each side.
+type calt struct {
+	from, to     int32
+	lo, hi       int64
+	loTag, hiTag int32
+}
+
+func (a calt) arcs(out []arc) []arc {
+	if a.hi < Inf {
+		out = append(out, arc{a.from, a.to, a.hi, a.hiTag})
+	}
+	if a.lo > -Inf {
+		out = append(out, arc{a.to, a.from, -a.lo, a.loTag})
+	}
+	return out
+}
+
+// problem is one component: local node 0 is the reference point and
+// vars[i] the variable of local node i.
+type problem struct {
+	vars    []Var
+	base    []arc
+	choices [][]calt
+}
+
+// prepared is the active constraints in solver form.
+type prepared struct {
+	sets     [][]piece // per variable; nil when unconstrained
+	empty    int       // a variable whose set is empty, or -1
+	problems []*problem
+	isolated []Var // variables solved by their set alone
+}
+
+// unaryOf reports whether every alternative of c bounds one and the same
+// variable, and returns it.
+func unaryOf(c *Constraint) (Var, bool) {
+	v := Var(-1)
+	for _, a := range c.Alts {
+		var w Var
+		switch {
+		case a.From == Zero:
+			w = a.To
+		case a.To == Zero:
+			w = a.From
+		default:
+			return 0, false
+		}
+		if v >= 0 && w != v {
+			return 0, false
+		}
+		v = w
+	}
+	return v, true
+}
+
+// unarySet is the union of the alternatives of a unary constraint on v.
+func unarySet(c *Constraint, ci int32) []piece {
+	ps := make([]piece, 0, len(c.Alts))
+	for _, a := range c.Alts {
+		lo, hi := a.Lo, a.Hi
+		if a.To == Zero { // lo <= 0 − v <= hi
+			lo, hi = neg(a.Hi), neg(a.Lo)
+		}
+		ps = append(ps, piece{lo, hi, ci, ci})
+	}
+	slices.SortFunc(ps, func(a, b piece) int { return cmp64(a.lo, b.lo) })
+	out := ps[:0]
+	for _, p := range ps {
+		if k := len(out) - 1; k >= 0 && (out[k].hi >= Inf || p.lo <= out[k].hi+1) {
+			out[k].hi = max(out[k].hi, p.hi)
+			continue
+		}
+		out = append(out, p)
+	}
+	for i := range out {
+		if out[i].lo <= -Inf {
+			out[i].loTag = -1
+		}
+		if out[i].hi >= Inf {
+			out[i].hiTag = -1
 		}
 	}
 	return out
 }
 
-type edge struct {
-	from, to int32
-	w        int64
-	tag      int32
+func neg(x int64) int64 {
+	switch {
+	case x >= Inf:
+		return -Inf
+	case x <= -Inf:
+		return Inf
+	}
+	return -x
 }
 
-// bellmanFord returns shortest distances from Zero (or to Zero when rev),
-// saturated at ±Inf, the constraint indexes along each path (from the
-// variable back to Zero), and false on a negative cycle.
-func bellmanFord(nv int, es []edge, rev bool) ([]int64, [][]int32, bool) {
-	d := make([]int64, nv)
-	pred := make([]int, nv)
-	for i := range d {
-		d[i] = Inf
-		pred[i] = -1
+func cmp64(a, b int64) int {
+	switch {
+	case a < b:
+		return -1
+	case a > b:
+		return 1
 	}
-	d[0] = 0
-	for it := 0; it <= nv; it++ {
-		changed := false
-		for i, e := range es {
-			u, v := e.from, e.to
-			if rev {
-				u, v = v, u
-			}
-			if d[u] < Inf && d[u]+e.w < d[v] {
-				d[v] = d[u] + e.w
-				pred[v] = i
-				changed = true
-			}
-		}
-		if !changed {
-			break
-		}
-		if it == nv {
-			return nil, nil, false
-		}
+	return 0
+}
+
+// intersect intersects two sets, keeping for each end the constraint that
+// sets it (the smaller id on a tie).
+func (s *solver) intersect(a, b []piece) []piece {
+	if a == nil {
+		return b
 	}
-	// negative cycles not reachable from Zero
-	p := make([]int64, nv)
-	for it := 0; it <= nv; it++ {
-		changed := false
-		for _, e := range es {
-			if p[e.from]+e.w < p[e.to] {
-				p[e.to] = p[e.from] + e.w
-				changed = true
-			}
+	out := []piece{}
+	i, j := 0, 0
+	for i < len(a) && j < len(b) {
+		p, q := a[i], b[j]
+		lo, loTag := p.lo, p.loTag
+		if q.lo > lo || (q.lo == lo && s.less(q.loTag, loTag)) {
+			lo, loTag = q.lo, q.loTag
 		}
-		if !changed {
-			break
+		hi, hiTag := p.hi, p.hiTag
+		if q.hi < hi || (q.hi == hi && s.less(q.hiTag, hiTag)) {
+			hi, hiTag = q.hi, q.hiTag
 		}
-		if it == nv {
-			return nil, nil, false
+		if lo <= hi {
+			out = append(out, piece{lo, hi, loTag, hiTag})
+		}
+		if p.hi < q.hi {
+			i++
+		} else {
+			j++
 		}
 	}
-	why := make([][]int32, nv)
-	for v := 0; v < nv; v++ {
-		for x := v; pred[x] >= 0; {
-			e := es[pred[x]]
-			why[v] = append(why[v], e.tag)
-			if rev {
-				x = int(e.to)
+	return out
+}
+
+// less orders constraint tags by id; -1 (no constraint) sorts last.
+func (s *solver) less(a, b int32) bool {
+	if a < 0 || b < 0 {
+		return b < 0 && a >= 0
+	}
+	return s.rank[a] < s.rank[b]
+}
+
+// prepare turns the active constraints into interval sets and components.
+func (s *solver) prepare(active []int32) *prepared {
+	n := s.n
+	nv := len(n.names)
+	p := &prepared{sets: make([][]piece, nv), empty: -1}
+	parent := make([]int32, nv)
+	for i := range parent {
+		parent[i] = int32(i)
+	}
+	find := func(x int32) int32 {
+		for parent[x] != x {
+			parent[x] = parent[parent[x]]
+			x = parent[x]
+		}
+		return x
+	}
+	join := func(a, b Var) {
+		if a == Zero || b == Zero {
+			return
+		}
+		ra, rb := find(int32(a)), find(int32(b))
+		if ra != rb {
+			parent[max(ra, rb)] = min(ra, rb)
+		}
+	}
+	var links []int32
+	for _, ci := range active {
+		c := &n.cons[ci]
+		if v, ok := unaryOf(c); ok {
+			p.sets[v] = s.intersect(p.sets[v], unarySet(c, ci))
+			if len(p.sets[v]) == 0 && p.empty < 0 {
+				p.empty = int(v)
+			}
+			continue
+		}
+		links = append(links, ci)
+		first := Var(-1)
+		for _, a := range c.Alts {
+			for _, v := range [2]Var{a.From, a.To} {
+				if v == Zero {
+					continue
+				}
+				if first < 0 {
+					first = v
+				}
+				join(first, v)
+			}
+		}
+	}
+	if p.empty >= 0 {
+		return p
+	}
+	linked := make([]bool, nv)
+	for _, ci := range links {
+		for _, a := range n.cons[ci].Alts {
+			linked[a.From], linked[a.To] = true, true
+		}
+	}
+	// Number the components by their smallest variable.
+	byRoot := map[int32]*problem{}
+	local := make([]int32, nv)
+	for v := 1; v < nv; v++ {
+		if !linked[v] {
+			p.isolated = append(p.isolated, Var(v))
+			continue
+		}
+		r := find(int32(v))
+		pr := byRoot[r]
+		if pr == nil {
+			pr = &problem{vars: []Var{Zero}}
+			byRoot[r] = pr
+			p.problems = append(p.problems, pr)
+		}
+		local[v] = int32(len(pr.vars))
+		pr.vars = append(pr.vars, Var(v))
+		set := p.sets[v]
+		if len(set) == 0 {
+			continue
+		}
+		lv := local[v]
+		first, last := set[0], set[len(set)-1]
+		hull := calt{0, lv, first.lo, last.hi, first.loTag, last.hiTag}
+		pr.base = hull.arcs(pr.base)
+		if len(set) > 1 {
+			alts := make([]calt, len(set))
+			for i, q := range set {
+				alts[i] = calt{0, lv, q.lo, q.hi, q.loTag, q.hiTag}
+			}
+			pr.choices = append(pr.choices, alts)
+		}
+	}
+	for _, ci := range links {
+		c := &n.cons[ci]
+		var v Var
+		for _, a := range c.Alts {
+			if a.From != Zero {
+				v = a.From
 			} else {
-				x = int(e.from)
+				v = a.To
 			}
+			break
+		}
+		pr := byRoot[find(int32(v))]
+		alts := make([]calt, len(c.Alts))
+		for i, a := range c.Alts {
+			alts[i] = calt{local[a.From], local[a.To], a.Lo, a.Hi, ci, ci}
+		}
+		if len(alts) == 1 {
+			pr.base = alts[0].arcs(pr.base)
+		} else {
+			pr.choices = append(pr.choices, alts)
 		}
 	}
-	return d, why, true
+	return p
+}
+
+// domains solves the active constraints into r. It returns false (and
+// perhaps the constraints of a negative cycle) when they are inconsistent.
+func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
+	n := s.n
+	nv := len(n.names)
+	p := s.prepare(active)
+	if p.empty >= 0 {
+		return false, nil, nil
+	}
+	r.domains = make([]Set, nv)
+	r.earliest = make([]Bound, nv)
+	r.latest = make([]Bound, nv)
+	r.domains[0] = Set{{0, 0}}
+	for _, v := range p.isolated {
+		set := p.sets[v]
+		if set == nil {
+			r.domains[v] = Set{{-Inf, Inf}}
+			r.earliest[v] = Bound{Value: -Inf}
+			r.latest[v] = Bound{Value: Inf}
+			continue
+		}
+		d := make(Set, len(set))
+		for i, q := range set {
+			d[i] = Interval{q.lo, q.hi}
+		}
+		r.domains[v] = d
+		r.earliest[v] = Bound{Value: set[0].lo, Because: s.ids(set[0].loTag)}
+		r.latest[v] = Bound{Value: set[len(set)-1].hi, Because: s.ids(set[len(set)-1].hiTag)}
+	}
+	for _, pr := range p.problems {
+		sr := &search{solver: s, p: pr, record: true}
+		sr.init()
+		if err := sr.node(nil, pr.choices); err != nil {
+			return false, nil, err
+		}
+		if !sr.found {
+			return false, sr.seed, nil
+		}
+		for i, v := range pr.vars {
+			if i == 0 {
+				continue
+			}
+			r.domains[v] = sr.dom[i]
+			r.earliest[v] = sr.early[i]
+			r.latest[v] = sr.late[i]
+		}
+	}
+	return true, nil, nil
+}
+
+// consistent reports whether the given constraints are consistent, and on
+// an inconsistent simple network the constraints of a negative cycle.
+func (s *solver) consistent(active []int32) (bool, []int32, error) {
+	p := s.prepare(active)
+	if p.empty >= 0 {
+		return false, nil, nil
+	}
+	for _, pr := range p.problems {
+		sr := &search{solver: s, p: pr}
+		if err := sr.node(nil, pr.choices); err != nil {
+			return false, nil, err
+		}
+		if !sr.found {
+			return false, sr.seed, nil
+		}
+	}
+	return true, nil, nil
+}
+
+func (s *solver) ids(tag int32) []string {
+	if tag < 0 {
+		return nil
+	}
+	return []string{s.n.cons[tag].ID}
+}
+
+// search is the depth-first search over the choices of one component.
+type search struct {
+	*solver
+	p      *problem
+	record bool // collect domains (else stop at the first solution)
+	found  bool
+	seed   []int32
+	arcs   []arc
+
+	dom         []Set
+	early, late []Bound
+	memo        [][]string
+	extended    []bool
+}
+
+func (sr *search) init() {
+	k := len(sr.p.vars)
+	sr.dom = make([]Set, k)
+	sr.early = make([]Bound, k)
+	sr.late = make([]Bound, k)
+	for i := range sr.early {
+		sr.early[i].Value = Inf
+		sr.late[i].Value = -Inf
+	}
+}
+
+// node solves the network of the base arcs and the fixed alternatives,
+// propagates the open choices and branches on the narrowest one.
+func (sr *search) node(fixed []calt, open [][]calt) error {
+	sr.nodes++
+	if sr.nodes > sr.opt.maxNodes() {
+		return fmt.Errorf("solve: %d nodes: %w", sr.nodes, ErrLimit)
+	}
+	if sr.nodes&1023 == 0 {
+		if err := sr.ctx.Err(); err != nil {
+			return fmt.Errorf("solve: %w", err)
+		}
+	}
+	g := &sr.g
+	root := fixed == nil
+	for {
+		sr.arcs = append(sr.arcs[:0], sr.p.base...)
+		for _, a := range fixed {
+			sr.arcs = a.arcs(sr.arcs)
+		}
+		g.build(len(sr.p.vars), sr.arcs)
+		ok, cyc := g.potential()
+		if !ok {
+			if root && len(open) == len(sr.p.choices) {
+				for _, k := range cyc {
+					sr.seed = append(sr.seed, g.arcs[k].tag)
+				}
+			}
+			return nil
+		}
+		g.bounds()
+		changed := false
+		var next [][]calt
+		for _, alts := range open {
+			var kept []calt
+			entailed := false
+			for _, a := range alts {
+				lo, hi := diffRange(g, a.from, a.to)
+				if a.lo > hi || a.hi < lo {
+					continue
+				}
+				if a.lo <= lo && hi <= a.hi {
+					entailed = true
+					break
+				}
+				kept = append(kept, a)
+			}
+			switch {
+			case entailed:
+			case len(kept) == 0:
+				return nil
+			case len(kept) == 1:
+				fixed = append(fixed[:len(fixed):len(fixed)], kept[0])
+				changed = true
+			default:
+				next = append(next, kept)
+			}
+		}
+		open = next
+		if !changed {
+			break
+		}
+	}
+	if len(open) == 0 {
+		sr.found = true
+		if sr.record {
+			sr.leaf()
+		}
+		return nil
+	}
+	if !sr.record && sr.found {
+		return nil
+	}
+	if sr.record && sr.dominated() {
+		return nil
+	}
+	best := 0
+	for i, alts := range open {
+		if len(alts) < len(open[best]) {
+			best = i
+		}
+	}
+	rest := make([][]calt, 0, len(open)-1)
+	rest = append(rest, open[:best]...)
+	rest = append(rest, open[best+1:]...)
+	for _, a := range open[best] {
+		if err := sr.node(append(fixed[:len(fixed):len(fixed)], a), rest); err != nil {
+			return err
+		}
+		if !sr.record && sr.found {
+			return nil
+		}
+	}
+	return nil
+}
+
+// diffRange bounds to − from by the current bounds of both nodes.
+func diffRange(g *stn, from, to int32) (int64, int64) {
+	lo, hi := int64(-Inf), int64(Inf)
+	if g.lo[to] > -Inf && g.up[from] < Inf {
+		lo = g.lo[to] - g.up[from]
+	}
+	if g.up[to] < Inf && g.lo[from] > -Inf {
+		hi = g.up[to] - g.lo[from]
+	}
+	return lo, hi
+}
+
+// dominated reports whether every current window lies inside the union
+// found so far; deeper choices could only narrow them.
+func (sr *search) dominated() bool {
+	g := &sr.g
+	for i := 1; i < len(sr.p.vars); i++ {
+		if !inside(sr.dom[i], g.lo[i], g.up[i]) {
+			return false
+		}
+	}
+	return true
+}
+
+func inside(s Set, lo, hi int64) bool {
+	for _, iv := range s {
+		if iv.Lo <= lo && hi <= iv.Hi {
+			return true
+		}
+	}
+	return false
+}
+
+// leaf adds the windows of a solved scenario to the domains.
+func (sr *search) leaf() {
+	g := &sr.g
+	k := len(sr.p.vars)
+	for pass := 0; pass < 2; pass++ {
+		sr.memo = sr.memo[:0]
+		for range k {
+			sr.memo = append(sr.memo, nil)
+		}
+		if cap(sr.extended) < k {
+			sr.extended = make([]bool, k)
+		}
+		sr.extended = sr.extended[:k]
+		clear(sr.extended)
+		sr.memo[0] = []string{}
+		for v := 1; v < k; v++ {
+			var val, old int64
+			var b *Bound
+			if pass == 0 {
+				val, b = g.lo[v], &sr.early[v]
+				old = b.Value
+				if val > old {
+					continue
+				}
+			} else {
+				val, b = g.up[v], &sr.late[v]
+				old = b.Value
+				if val < old {
+					continue
+				}
+			}
+			why := sr.path(int32(v), pass == 0)
+			if val == old && !betterWhy(why, b.Because) {
+				continue
+			}
+			*b = Bound{Value: val, Because: why[:len(why):len(why)]}
+		}
+	}
+	for v := 1; v < k; v++ {
+		sr.dom[v] = union(sr.dom[v], Interval{g.lo[v], g.up[v]})
+	}
+}
+
+// path returns the constraint ids on the tree path from the reference
+// point to v, sharing storage with the paths of v's ancestors.
+func (sr *search) path(v int32, lower bool) []string {
+	g := &sr.g
+	via := g.upArc
+	if lower {
+		via = g.loArc
+	}
+	if via[v] < 0 {
+		return nil
+	}
+	var stack []int32
+	x := v
+	for sr.memo[x] == nil {
+		stack = append(stack, x)
+		a := &g.arcs[via[x]]
+		if lower {
+			x = a.to
+		} else {
+			x = a.from
+		}
+	}
+	for i := len(stack) - 1; i >= 0; i-- {
+		y := stack[i]
+		id := sr.n.cons[g.arcs[via[y]].tag].ID
+		pp := sr.memo[x]
+		if !sr.extended[x] {
+			sr.extended[x] = true
+			sr.memo[y] = append(pp, id)
+		} else {
+			q := make([]string, len(pp)+1)
+			copy(q, pp)
+			q[len(pp)] = id
+			sr.memo[y] = q
+		}
+		x = y
+	}
+	return sr.memo[v]
+}
+
+// betterWhy prefers the shorter explanation, then the smaller ids.
+func betterWhy(a, b []string) bool {
+	if len(a) != len(b) {
+		return len(a) < len(b)
+	}
+	return slices.Compare(a, b) < 0
 }
 
 // union adds iv to the sorted set s, merging overlapping and adjacent runs.
@@ -189,37 +671,4 @@ func appendMerge(s Set, iv Interval) Set {
 		return s
 	}
 	return append(s, iv)
-}
-
-// naiveConflicts finds one minimal conflict by deletion.
-func (n *Network) naiveConflicts(ctx context.Context, active []int, r *Result, opt Options) {
-	cur := append([]int(nil), active...)
-	for i := 0; i < len(cur); {
-		try := append(append([]int(nil), cur[:i]...), cur[i+1:]...)
-		var tmp Result
-		ok, _ := n.naiveDomains(ctx, try, &tmp)
-		if !ok {
-			cur = try
-		} else {
-			i++
-		}
-	}
-	ids := n.idsOf(toInt32(cur), false)
-	sort.Strings(ids)
-	r.Conflicts = [][]string{ids}
-	best := ""
-	for _, c := range cur {
-		if best == "" || cost(n.cons[c].Tier) < cost(n.cons[n.ids[best]].Tier) {
-			best = n.cons[c].ID
-		}
-	}
-	r.Correction = []string{best}
-}
-
-func toInt32(xs []int) []int32 {
-	out := make([]int32, len(xs))
-	for i, x := range xs {
-		out[i] = int32(x)
-	}
-	return out
 }
