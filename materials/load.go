@@ -305,7 +305,7 @@ func crossCheck(d *Dataset, base *Dataset) ErrorList {
 		}
 		for _, n := range append([]string{m.ID}, m.Names...) {
 			k := fold(n)
-			if other, dup := names[k]; dup && other != m {
+			if other, dup := names[k]; dup && other != m && other.ID != m.ID {
 				errs = append(errs, &Error{File: m.File, Line: m.Line,
 					Msg:        fmt.Sprintf("name %q of %q is also a name of %q (%s)", n, m.ID, other.ID, nameWhere[k]),
 					Suggestion: "a name may belong to one material only; keep it on the one it describes best"})

@@ -95,6 +95,10 @@ func (p *parser) errAt(n *yaml.Node, msg, hint string) {
 // field is one key of a mapping.
 type field struct {
 	key, val *yaml.Node
+	// typo marks an unknown key that stands in for this one (already
+	// reported with a "did you mean"), so that its absence is not reported
+	// a second time.
+	typo bool
 }
 
 // fields returns the keys of mapping n, reporting keys not in allowed
@@ -117,17 +121,26 @@ func (p *parser) fields(n *yaml.Node, what string, allowed []string) map[string]
 			hint := "the keys of a " + what + " are " + strings.Join(allowed, ", ")
 			if s := nearestWords(k.Value, allowed, 1); len(s) == 1 {
 				hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
+				if _, given := out[s[0]]; !given {
+					out[s[0]] = field{key: k, typo: true}
+				}
 			}
 			p.errAt(k, fmt.Sprintf("unknown key %q in a %s", k.Value, what), hint)
 			continue
 		}
-		if prev, dup := out[k.Value]; dup {
+		if prev, dup := out[k.Value]; dup && !prev.typo {
 			p.errAt(k, fmt.Sprintf("key %q is given twice in this %s (first on line %d)", k.Value, what, prev.key.Line), "keep one of them")
 			continue
 		}
-		out[k.Value] = field{k, v}
+		out[k.Value] = field{key: k, val: v}
 	}
 	return out
+}
+
+// given returns the field key when it was written (not a typo of it).
+func given(fs map[string]field, key string) (field, bool) {
+	f, ok := fs[key]
+	return f, ok && !f.typo
 }
 
 func deref(n *yaml.Node) *yaml.Node {
@@ -157,7 +170,7 @@ func nodeKind(n *yaml.Node) string {
 
 // str reads a scalar as text; a null is "".
 func (p *parser) str(f field, what string) string {
-	if f.val == nil {
+	if f.val == nil || f.typo {
 		return ""
 	}
 	if f.val.Kind != yaml.ScalarNode {
@@ -178,7 +191,7 @@ func (p *parser) required(fs map[string]field, key, what string, at *yaml.Node) 
 		return ""
 	}
 	s := strings.TrimSpace(p.str(f, key))
-	if s == "" {
+	if s == "" && !f.typo {
 		p.errAt(f.val, fmt.Sprintf("%q of %s is empty", key, what), "")
 	}
 	return s
@@ -192,14 +205,14 @@ func (p *parser) top(root *yaml.Node) ([]Source, []*Material) {
 	fs := p.fields(root, "materials file", []string{"sources", "materials"})
 	var sources []Source
 	var mats []*Material
-	if f, ok := fs["sources"]; ok {
+	if f, ok := given(fs, "sources"); ok {
 		for _, n := range p.list(f.val, "sources") {
 			if s, ok := p.source(n); ok {
 				sources = append(sources, s)
 			}
 		}
 	}
-	if f, ok := fs["materials"]; ok {
+	if f, ok := given(fs, "materials"); ok {
 		for _, n := range p.list(f.val, "materials") {
 			if m := p.material(n); m != nil {
 				mats = append(mats, m)
@@ -232,7 +245,7 @@ func (p *parser) source(n *yaml.Node) (Source, bool) {
 	s := Source{File: p.file, Line: n.Line}
 	s.Key = p.required(fs, "key", "a source", n)
 	s.Cite = p.required(fs, "cite", fmt.Sprintf("source %q", s.Key), n)
-	if f, ok := fs["url"]; ok {
+	if f, ok := given(fs, "url"); ok {
 		s.URL = strings.TrimSpace(p.str(f, "url"))
 		if s.URL != "" && !strings.HasPrefix(s.URL, "https://") && !strings.HasPrefix(s.URL, "http://") {
 			p.errAt(f.val, fmt.Sprintf("url %q of source %q is not a web address", s.URL, s.Key), "write it in full, starting with https://")
@@ -260,7 +273,7 @@ func (p *parser) material(n *yaml.Node) *Material {
 			"write it like "+quote(suggestID(m.ID)))
 	}
 	what := fmt.Sprintf("material %q", m.ID)
-	if f, ok := fs["names"]; ok {
+	if f, ok := given(fs, "names"); ok {
 		for _, nn := range p.list(f.val, "names") {
 			nn = deref(nn)
 			s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
@@ -276,10 +289,10 @@ func (p *parser) material(n *yaml.Node) *Material {
 	}
 	m.Class = p.oneOf(fs, "class", what, n, Classes())
 	m.Origin = p.oneOf(fs, "origin", what, n, Origins())
-	if f, ok := fs["colour_index"]; ok {
+	if f, ok := given(fs, "colour_index"); ok {
 		m.ColourIndex = p.colourIndex(f, what)
 	}
-	if f, ok := fs["cas"]; ok {
+	if f, ok := given(fs, "cas"); ok {
 		m.CAS = strings.TrimSpace(p.str(f, "cas"))
 		if m.CAS != "" {
 			if msg, hint := checkCAS(m.CAS); msg != "" {
@@ -287,13 +300,13 @@ func (p *parser) material(n *yaml.Node) *Material {
 			}
 		}
 	}
-	if f, ok := fs["formula"]; ok {
+	if f, ok := given(fs, "formula"); ok {
 		m.Formula = strings.TrimSpace(p.str(f, "formula"))
 	}
-	if f, ok := fs["note"]; ok {
+	if f, ok := given(fs, "note"); ok {
 		m.Note = strings.TrimSpace(p.str(f, "note"))
 	}
-	if f, ok := fs["milestones"]; ok {
+	if f, ok := given(fs, "milestones"); ok {
 		for _, mn := range p.list(f.val, "milestones") {
 			if ms, ok := p.milestone(mn, what); ok {
 				m.Milestones = append(m.Milestones, ms)
@@ -324,10 +337,10 @@ func (p *parser) colourIndex(f field, what string) *ColourIndex {
 		return nil
 	}
 	ci := &ColourIndex{}
-	if g, ok := fs["name"]; ok {
+	if g, ok := given(fs, "name"); ok {
 		ci.Name = strings.TrimSpace(p.str(g, "the Colour Index name"))
 	}
-	if g, ok := fs["number"]; ok {
+	if g, ok := given(fs, "number"); ok {
 		ci.Number = strings.TrimSpace(p.str(g, "the Colour Index number"))
 		if ci.Number != "" && !ciNumber.MatchString(ci.Number) {
 			p.errAt(g.val, fmt.Sprintf("Colour Index number %q of %s is not five digits with an optional ':n' suffix", ci.Number, what),
@@ -366,22 +379,28 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 		p.errAt(fs["kind"].val, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
 		ok = false
 	}
-	if f, has := fs["date"]; has {
+	if f, has := fs["date"]; has && f.typo {
+		ok = false
+	} else if has {
 		text := strings.TrimSpace(p.str(f, "a date"))
 		if text == "" {
 			p.errAt(f.val, "empty date in "+where, `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
 			ok = false
 		} else if d, err := date.Parse(text); err != nil {
 			col := f.val.Column
+			msg := err.Error()
 			var pe *date.ParseError
-			if errors.As(err, &pe) && f.val.Value == text {
-				if f.val.Style&(yaml.DoubleQuotedStyle|yaml.SingleQuotedStyle) != 0 {
-					col++
+			if errors.As(err, &pe) {
+				msg = pe.Msg
+				if f.val.Value == text {
+					if f.val.Style&(yaml.DoubleQuotedStyle|yaml.SingleQuotedStyle) != 0 {
+						col++
+					}
+					col += pe.Pos
 				}
-				col += pe.Pos
 			}
 			p.errs = append(p.errs, &Error{File: p.file, Line: f.val.Line, Column: col,
-				Msg: fmt.Sprintf("bad date in %s: %v", where, err), Err: err,
+				Msg: fmt.Sprintf("bad date %q in %s: %s", text, where, msg), Err: err,
 				Suggestion: `write an EDTF date such as "1856", "1830~", "18XX" or "1704/1706", quoted`})
 			ok = false
 		} else {
@@ -391,7 +410,7 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 		p.errAt(n, where+" has no \"date\"", "")
 		ok = false
 	}
-	if f, has := fs["place"]; has {
+	if f, has := given(fs, "place"); has {
 		ms.Place = strings.TrimSpace(p.str(f, "a place"))
 		if ms.Place != "" && !p.regions.Valid(ms.Place) {
 			hint := "a place is an ISO 3166-1 alpha-2 code (\"NL\") or a UN M49 area code (\"155\", quoted)"
@@ -406,14 +425,14 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 			ok = false
 		}
 	}
-	if ms.Kind == KindArrived && ms.Place == "" && fs["place"].val == nil {
+	if ms.Kind == KindArrived && ms.Place == "" && !fs["place"].typo {
 		p.errAt(n, "an arrived milestone of "+what+" has no place", "add place: with the country or area code where it arrived")
 		ok = false
 	}
-	if f, has := fs["source"]; has {
+	if f, has := given(fs, "source"); has {
 		ms.Source = strings.TrimSpace(p.str(f, "a source key"))
 	}
-	if ms.Source == "" {
+	if ms.Source == "" && !fs["source"].typo {
 		p.errAt(n, where+" cites no source", "every milestone names a source key from the bibliography; write 'from-memory' as its basis if you could not check it")
 		ok = false
 	}
@@ -428,10 +447,10 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 			"basis is 'documented' (you read the claim in the source) or 'from-memory'")
 		ok = false
 	}
-	if f, has := fs["note"]; has {
+	if f, has := given(fs, "note"); has {
 		ms.Note = strings.TrimSpace(p.str(f, "a note"))
 	}
-	if f, has := fs["allowance"]; has {
+	if f, has := given(fs, "allowance"); has {
 		text := strings.TrimSpace(p.str(f, "an allowance"))
 		switch {
 		case ms.Kind != "" && ms.Kind != KindWithdrawn:
@@ -442,8 +461,13 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 		default:
 			u, err := date.ParseDuration(text)
 			if err != nil {
+				msg := err.Error()
+				var pe *date.ParseError
+				if errors.As(err, &pe) {
+					msg = pe.Msg
+				}
 				p.errs = append(p.errs, &Error{File: p.file, Line: f.val.Line, Column: f.val.Column,
-					Msg: fmt.Sprintf("bad allowance in %s: %v", where, err), Err: err,
+					Msg: fmt.Sprintf("bad allowance %q in %s: %s", text, where, msg), Err: err,
 					Suggestion: "write an ISO 8601 duration such as P10Y or P6M"})
 				ok = false
 			} else {

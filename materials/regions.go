@@ -134,7 +134,10 @@ func (r *Regions) Region(code string) string {
 	case 1:
 		return a[0]
 	}
-	return a[len(a)-2]
+	if top := a[len(a)-2]; r.IsArea(top) {
+		return top
+	}
+	return "001"
 }
 
 // Codes returns every code in table order: areas before what they hold.

@@ -17,11 +17,12 @@ import (
 // that one schema check serves both. The TOML decoder keeps no positions,
 // so each node's line is found in the text: a [[materials]] or
 // [[materials.milestones]] header, or the line where a key is set under it.
-// Strictness does not depend on the decoder: every key, known or not, is in
-// the tree, and the schema check rejects unknown ones with their line.
+// Strictness does not depend on the decoder's list of undecoded keys:
+// decoding into a map keeps every key, known or not, in the tree, and the
+// schema check rejects unknown ones with their line.
 func (p *parser) tomlTree(data []byte) *yaml.Node {
 	var m map[string]any
-	md, err := toml.Decode(string(data), &m)
+	_, err := toml.Decode(string(data), &m)
 	if err != nil {
 		line, col := 1, 0
 		var pe toml.ParseError
@@ -35,11 +36,6 @@ func (p *parser) tomlTree(data []byte) *yaml.Node {
 		p.errs = append(p.errs, &Error{File: p.file, Line: max(line, 1), Column: col, Msg: "TOML syntax: " + msg, Err: err,
 			Suggestion: "check the quoting and brackets on this line"})
 		return nil
-	}
-	if u := md.Undecoded(); len(u) > 0 {
-		// Decoding into a map keeps every key, so nothing is left over; this
-		// guards the promise should the decoding change.
-		p.errs = append(p.errs, &Error{File: p.file, Line: 1, Msg: fmt.Sprintf("TOML keys not read: %v", u)})
 	}
 	lines := strings.Split(string(data), "\n")
 	t := &tomlLines{lines: lines}
