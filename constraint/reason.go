@@ -369,7 +369,7 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 					if ms.Allowance != nil {
 						allow = *ms.Allowance
 					}
-					day += date.Day(allow.MaxDays())
+					day = allow.AddTo(day)
 				}
 			} else {
 				day, ok = d.Earliest()
