@@ -1,0 +1,285 @@
+package materials_test
+
+import (
+	"strings"
+	"testing"
+
+	"terminus/constraint/date"
+	"terminus/materials"
+)
+
+// inorganicFile is the family file these checks cover: the inorganic and
+// early synthetic pigments of the 18th and 19th centuries.
+const inorganicFile = "inorganic-1700-1900.yaml"
+
+// TestInorganicAgainstSources checks that the embedded dataset holds dates
+// as the named published sources give them. One row per value; the source
+// and the place in it stand beside the value, and rows taken from memory
+// say so.
+func TestInorganicAgainstSources(t *testing.T) {
+	d := inorganicBuiltin(t)
+	rows := []struct {
+		id    string
+		kind  materials.Kind
+		place string
+		want  string
+		src   string
+	}{
+		// Kraft, "The history of Prussian blue", Taylor & Francis chapter, abstract: invented in Berlin in 1706.
+		{"prussian-blue", materials.KindMade, "", "1706", "Kraft, History of Prussian blue, abstract"},
+		// From memory, not read here: Gettens and Stout, Painting Materials (1942), Prussian blue: Diesbach, 1704.
+		{"prussian-blue", materials.KindMade, "", "1704", "Gettens and Stout 1942 (from memory)"},
+		// AMICO catalogue record, Hokusai, The Kirifuri Waterfall: Prussian blue introduced into Japan in 1825.
+		{"prussian-blue", materials.KindArrived, "JP", "1825", "AMICO, Hokusai, Kirifuri Waterfall"},
+		// Bailey, Studies in Conservation 57 (2012), abstract: on Canton watercolours sent 1817-1830.
+		{"prussian-blue", materials.KindArrived, "CN", "1817/1830", "Bailey 2012, abstract"},
+		// Wikipedia, "Scheele's green", lead section: invented by Scheele in 1775.
+		{"scheeles-green", materials.KindMade, "", "1775", "Wikipedia, Scheele's green, lead"},
+		// Gettens and Stout, Painting Materials (1942), p. 113, Emerald green: first made at Schweinfurt in 1814.
+		{"emerald-green", materials.KindMade, "", "1814", "Gettens and Stout 1942, p. 113"},
+		// Winsor & Newton, "Spotlight on colour: Emerald Green" (2013): available to artists until the 1960s.
+		{"emerald-green", materials.KindWithdrawn, "", "196X", "Winsor & Newton, Emerald Green (2013)"},
+		// Wikipedia, "Cobalt blue", Historical uses: Thénard 1802; production in France from 1807.
+		{"cobalt-blue", materials.KindMade, "", "1802", "Wikipedia, Cobalt blue"},
+		{"cobalt-blue", materials.KindSold, "", "1807", "Wikipedia, Cobalt blue"},
+		// Wikipedia, "Cerulean", recent revision: Höpfner first synthesized cobalt stannate in 1789.
+		{"cerulean-blue", materials.KindMade, "", "1789", "Wikipedia, Cerulean"},
+		// MFA Boston, CAMEO, Cerulean blue: Höpfner 1805; sold as coeruleum by Rowney in 1860.
+		{"cerulean-blue", materials.KindMade, "", "1805", "CAMEO, Cerulean blue"},
+		{"cerulean-blue", materials.KindSold, "", "1860", "CAMEO, Cerulean blue"},
+		// Gettens and Stout, Painting Materials (1942), p. 109, Cobalt green: discovered by Rinmann in 1780.
+		{"cobalt-green", materials.KindMade, "", "1780", "Gettens and Stout 1942, p. 109"},
+		// KIK-IRPA glossary, violet de cobalt: Salvétat, 1859.
+		{"cobalt-violet-phosphate", materials.KindMade, "", "1859", "KIK-IRPA, violet de cobalt"},
+		// Gettens and Stout, Painting Materials (1942), p. 110, Cobalt yellow: Fischer 1848; artists' pigment 1861.
+		{"aureolin", materials.KindMade, "", "1848", "Gettens and Stout 1942, p. 110"},
+		{"aureolin", materials.KindSold, "", "1861", "Gettens and Stout 1942, p. 110"},
+		// KIK-IRPA glossary, vert de chrome: viridian first prepared by Pannetier in 1838.
+		{"viridian", materials.KindMade, "", "1838", "KIK-IRPA, vert de chrome"},
+		// Palazzo Spinelli, ArgoMed glossary, record 2644: invented by Pannetier in 1835.
+		{"viridian", materials.KindMade, "", "1835", "Palazzo Spinelli, ArgoMed 2644"},
+		// Wikipedia, "Viridian", History: Guignet's patented process of 1859.
+		{"viridian", materials.KindSold, "", "1859", "Wikipedia, Viridian, History"},
+		// KIK-IRPA glossary, vert de chrome: opaque chromium oxide published by Vauquelin in 1809.
+		{"chromium-oxide-green", materials.KindMade, "", "1809", "KIK-IRPA, vert de chrome"},
+		// Chipstone, American Furniture 2003, fig. 7 caption (Gilmor 1814): chrome yellow on Baltimore carriages.
+		{"chrome-yellow", materials.KindArrived, "US", "1814", "Chipstone, American Furniture 2003, fig. 7"},
+		// Wikipedia, "Jean-Baptiste Guimet": a synthetic route to ultramarine found in 1826.
+		{"synthetic-ultramarine", materials.KindMade, "", "1826", "Wikipedia, Jean-Baptiste Guimet"},
+		// Collier's New Encyclopedia, Ultramarine: Société d'Encouragement prize awarded to Guimet in 1828.
+		{"synthetic-ultramarine", materials.KindMade, "", "1828", "Collier's New Encyclopedia, Ultramarine"},
+		// Scientific American, 24 April 1852: imported into the United States from Germany and France.
+		{"synthetic-ultramarine", materials.KindArrived, "US", "1852", "Scientific American, 24 April 1852"},
+		// Gettens and Stout, Painting Materials (1942), p. 102: cadmium yellow commercially available about 1846.
+		{"cadmium-yellow", materials.KindSold, "", "1846~", "Gettens and Stout 1942, p. 102"},
+		// Gettens and Stout, Painting Materials (1942), p. 102: first shown at the 1851 Exhibition (after Laurie).
+		{"cadmium-yellow", materials.KindArrived, "GB", "1851", "Gettens and Stout 1942, p. 102"},
+		// Gettens and Stout, Painting Materials (1942), p. 101: cadmium red commercial about 1910.
+		{"cadmium-red", materials.KindSold, "", "1910~", "Gettens and Stout 1942, p. 101"},
+		// From memory, not read here: Artists' Pigments vol. 1, cadmium chapter: cadmium red introduced 1919.
+		{"cadmium-red", materials.KindSold, "", "1919", "Artists' Pigments vol. 1 (from memory)"},
+		// Gettens and Stout, Painting Materials (1942), p. 177, Zinc white: Winsor & Newton's Chinese white, 1834.
+		{"zinc-white", materials.KindSold, "", "1834", "Gettens and Stout 1942, p. 177"},
+		// Gettens and Stout, Painting Materials (1942), p. 177: first trial orders from Hafkenscheid, Amsterdam, 1854.
+		{"zinc-white", materials.KindArrived, "NL", "1854", "Gettens and Stout 1942, p. 177"},
+		// Gettens and Stout, Painting Materials (1942), p. 93: antimony oxide as Timonox in 1920.
+		{"antimony-white", materials.KindSold, "", "1920", "Gettens and Stout 1942, p. 93"},
+		// Gettens and Stout, Painting Materials (1942), p. 167: ultramarine green by Köttig, Meissen, 1828.
+		{"ultramarine-green", materials.KindMade, "", "1828", "Gettens and Stout 1942, p. 167"},
+		// MFA Boston, CAMEO, Lead oxychloride: Turner's patent of 1781; advertised in Boston in 1784.
+		{"turners-yellow", materials.KindSold, "", "1781", "CAMEO, Lead oxychloride"},
+		{"turners-yellow", materials.KindArrived, "US", "1784", "CAMEO, Lead oxychloride"},
+		// Wikipedia, "Manganese violet", History: first documented production by Winsor & Newton in 1890.
+		{"manganese-violet", materials.KindSold, "", "1890", "Wikipedia, Manganese violet, History"},
+	}
+	for _, r := range rows {
+		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
+			want, err := date.Parse(r.want)
+			if err != nil {
+				t.Fatalf("bad expected date %q: %v", r.want, err)
+			}
+			m := inorganicLookup(t, d, r.id)
+			var got []string
+			for _, ms := range m.Claims(r.kind, r.place) {
+				got = append(got, ms.Date.EDTF())
+				if ms.Date.EDTF() == want.EDTF() {
+					return
+				}
+			}
+			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
+		})
+	}
+}
+
+// TestInorganicTradeFacts checks facts of the trade (common practice) that
+// this family must carry, and that the dates practitioners quarrel over are
+// kept as separate claims.
+func TestInorganicTradeFacts(t *testing.T) {
+	d := inorganicBuiltin(t)
+	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
+
+	t.Run("Prussian blue in Japan by about 1830", func(t *testing.T) {
+		// Common practice: Prussian blue was in use in Japan by about 1830.
+		m := inorganicLookup(t, d, "Berlin blue")
+		claims, area := d.Arrival(m, "JP")
+		if area != "JP" || len(claims) == 0 {
+			t.Fatalf("no arrival in JP (area %q)", area)
+		}
+		ok := false
+		for _, c := range claims {
+			if lo, bounded := c.Date.Earliest(); bounded && lo < year(1836) {
+				ok = true
+			}
+		}
+		if !ok {
+			t.Errorf("no JP arrival at or before about 1830")
+		}
+	})
+	disputes := []struct {
+		name  string
+		kind  materials.Kind
+		years []string
+	}{
+		// Common practice: the disputed years of the field (each claim with its own source).
+		{"Prussian blue", materials.KindMade, []string{"1704", "1706"}},
+		{"cerulean blue", materials.KindMade, []string{"1789", "1805"}},
+		{"viridian", materials.KindMade, []string{"1835", "1838"}},
+		{"synthetic ultramarine", materials.KindMade, []string{"1826", "1828"}},
+		{"cadmium red", materials.KindSold, []string{"1910~", "1919"}},
+	}
+	for _, c := range disputes {
+		t.Run(c.name+" keeps both claims", func(t *testing.T) {
+			m := inorganicLookup(t, d, c.name)
+			have := map[string]string{}
+			for _, ms := range m.Claims(c.kind, "") {
+				have[ms.Date.EDTF()] = ms.Source
+			}
+			sources := map[string]bool{}
+			for _, y := range c.years {
+				src, ok := have[y]
+				if !ok {
+					t.Errorf("%s: no %s claim dated %s; have %v", c.name, c.kind, y, have)
+					continue
+				}
+				sources[src] = true
+			}
+			if len(sources) < 2 && len(have) > 0 {
+				t.Errorf("%s: the disputed claims should come from different sources, got %v", c.name, have)
+			}
+		})
+	}
+	t.Run("sale follows invention", func(t *testing.T) {
+		// Common practice: invention is not availability; a colour is sold no
+		// earlier than it is first made.
+		for _, m := range d.Materials {
+			if !strings.HasSuffix(m.File, inorganicFile) {
+				continue
+			}
+			made, ok := inorganicEarliest(m.Claims(materials.KindMade, ""))
+			if !ok {
+				continue
+			}
+			for _, s := range m.Claims(materials.KindSold, "") {
+				if hi, bounded := s.Date.Latest(); bounded && hi < made {
+					t.Errorf("%s: sold %s lies wholly before the earliest made claim", m.ID, s.Date.EDTF())
+				}
+			}
+		}
+	})
+	t.Run("arsenic greens have an end", func(t *testing.T) {
+		// Common practice: the copper-arsenic greens went out of manufacture.
+		for _, name := range []string{"emerald green", "Scheele's green"} {
+			m := inorganicLookup(t, d, name)
+			ws := m.Claims(materials.KindWithdrawn, "")
+			if len(ws) == 0 {
+				t.Errorf("%s: no withdrawn claim", name)
+			}
+			for _, w := range ws {
+				if w.Allowance == nil {
+					t.Errorf("%s: withdrawn %s has no allowance for lingering stocks", name, w.Date.EDTF())
+				}
+			}
+		}
+	})
+	t.Run("variants stay apart", func(t *testing.T) {
+		// Common practice: hydrated and anhydrous chromium oxide greens, and the
+		// two cobalt violets, are different pigments with different dates.
+		pairs := [][2]string{
+			{"viridian", "chromium oxide green"},
+			{"cobalt violet", "cobalt violet light"},
+			{"cadmium red", "cadmium red lithopone"},
+			{"ultramarine violet", "ultramarine red"},
+		}
+		for _, p := range pairs {
+			a, b := inorganicLookup(t, d, p[0]), inorganicLookup(t, d, p[1])
+			if a.ID == b.ID {
+				t.Errorf("%q and %q resolve to the same material %s", p[0], p[1], a.ID)
+			}
+		}
+	})
+}
+
+// TestInorganicFileLintsClean runs the dataset lint and reports the
+// problems that fall in this family's file, and checks that each of its
+// materials resolves by every one of its names.
+func TestInorganicFileLintsClean(t *testing.T) {
+	d := inorganicBuiltin(t)
+	for _, p := range materials.Lint(d) {
+		if strings.HasSuffix(p.File, inorganicFile) {
+			t.Errorf("lint: %s", p)
+		}
+	}
+	n := 0
+	for _, m := range d.Materials {
+		if !strings.HasSuffix(m.File, inorganicFile) {
+			continue
+		}
+		n++
+		for _, name := range m.Names {
+			got, err := d.Lookup(name)
+			if err != nil {
+				t.Errorf("Lookup(%q): %v", name, err)
+				continue
+			}
+			if got.ID != m.ID {
+				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
+			}
+		}
+	}
+	if n < 30 {
+		t.Errorf("only %d materials come from %s", n, inorganicFile)
+	}
+}
+
+func inorganicBuiltin(t *testing.T) *materials.Dataset {
+	t.Helper()
+	d, err := materials.Builtin()
+	if err != nil {
+		for _, p := range materials.Problems(err) {
+			t.Log(p)
+		}
+		t.Fatalf("Builtin: %v", err)
+	}
+	return d
+}
+
+func inorganicLookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
+	t.Helper()
+	m, err := d.Lookup(name)
+	if err != nil {
+		t.Fatalf("Lookup(%q): %v", name, err)
+	}
+	return m
+}
+
+// inorganicEarliest is the earliest bounded start among claims.
+func inorganicEarliest(claims []materials.Milestone) (date.Day, bool) {
+	var best date.Day
+	ok := false
+	for _, c := range claims {
+		if e, bounded := c.Date.Earliest(); bounded && (!ok || e < best) {
+			best, ok = e, true
+		}
+	}
+	return best, ok
+}
