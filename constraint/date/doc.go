@@ -3,20 +3,129 @@
 // # The model
 //
 // A time point is a calendar day, a [Day]: its Julian Day Number, an
-// integer. Years are astronomical (ISO 8601): year 0 is 1 BCE, year -1 is
-// 2 BCE, year -1199 is 1200 BCE. Calendar dates are on the proleptic
-// Gregorian calendar unless the input says Julian. There is no time of
-// day and no time zone; time.Time is not used (it stops at year 9999 and
-// carries nanoseconds).
+// integer (2000-01-01 is Day 2451545). Years are astronomical, as in ISO
+// 8601: year 0 is 1 BCE, year -1 is 2 BCE, year -1199 is 1200 BCE. Dates
+// are on the proleptic Gregorian calendar unless the input says Julian.
+// There is no time of day and no time zone, and time.Time is not used (it
+// stops at year 9999 and carries nanoseconds). Years up to ±999999999999
+// are read.
 //
-// A written [Date] is read as the run of days it names: "1874" is
-// 1874-01-01 to 1874-12-31. An interval runs from the first day of its
-// start to the last day of its end. A one-of set is a disjunction, kept as
-// sorted, disjoint [Interval]s, never as its hull. The qualifiers are kept
-// per end of a date: "~" (approximate) widens by a [Circa] policy when
-// asked ([Date.Widen]); "?" (uncertain) is only a flag, for the reasoner to
-// weaken the evidence that carries it.
+// A written [Date] is the run of days it names: "1874" is 1874-01-01 to
+// 1874-12-31. An interval runs from the first day of its start to the last
+// day of its end. A one-of set is a disjunction, kept as sorted, disjoint
+// [Interval]s (members that overlap or touch are merged), never as its
+// hull. An open ("..") or unknown (empty) end is unbounded.
 //
-// (The sections on EDTF support, the friendly forms, durations and
-// calendars are written below as each part is finished.)
+// The qualifiers are kept per end: in "1870~/1879" only the start is
+// approximate. "~" (approximate) moves an end out only when asked, by a
+// [Circa] policy ([Date.Widen], [DefaultCirca]); EDTF itself gives no
+// width. "?" (uncertain) never moves anything: it is a flag for the
+// reasoner, which lowers the strength of the evidence that carries it.
+//
+// [Date.Precision] is the unit of the run of days the first date names:
+// day, month, season, year, decade, century or millennium. For X digits it
+// is the unit the X digits leave: 187X is a decade, 18XX a century,
+// 1985-XX a year, 1985-04-XX a month (EDTF's own wording calls 201X "year
+// precision"; here the decade is meant, so that "c. 1870s" widens by the
+// decade policy).
+//
+// # EDTF
+//
+// The Extended Date/Time Format (Library of Congress, 2019; ISO 8601-2).
+// Level 0 is supported: 1985-04-12, 1985-04, 1985; date and time
+// 1985-04-12T23:20:30 with Z, ±hh or ±hh:mm (the time is kept in the
+// canonical form and otherwise ignored: the day is the calendar date as
+// written); intervals 1964/2008, 2004-02-01/2005-02.
+//
+// Level 1 is supported: Y170000002 and Y-170000002; seasons 2001-21 to
+// 2001-24; the qualifiers ? ~ % at the end of a date; X digits from the
+// right (201X, 20XX, 2004-XX, 1985-04-XX, 1985-XX-XX, and also 1XXX,
+// 1985-1X, 1985-04-1X); open (..) and unknown (empty) interval ends,
+// qualified ends (1984?/2004-06~); negative years -1985.
+//
+// Of level 2: one-of sets [1667,1668,1670..1672], [..1760-12-03],
+// [1760-12..] (a disjunction; spaces after the commas are accepted);
+// exponential years Y-17E7; significant digits 1950S2 (some year from 1900
+// to 1999); the divisions of the year 25–41 (hemisphere seasons, quarters,
+// quadrimesters, semesters); X digits in interval ends that leave one run
+// of days (2004-06-XX/2004-07-03). Not supported, with an error that says
+// so: all-of sets {…} (a single event is not on several dates at once),
+// qualifiers on single components (2004-06~-11, ?2004-06-~11), and X
+// digits that leave scattered days (156X-12-25, 1985-XX-12).
+//
+// Seasons are read as meteorological seasons of the northern hemisphere:
+// spring (21, 25) March–May, summer (22, 26) June–August, autumn (23, 27)
+// September–November, winter (24, 28) December of the year written to the
+// end of February of the next; the southern seasons 29–32 are shifted by
+// six months (southern summer, 30, runs December to February). Quarters
+// (33–36), quadrimesters (37–39) and semesters (40, 41) divide the
+// calendar year from January.
+//
+// [Date.EDTF] gives the canonical form: four-digit years with a sign
+// below 0, the Y prefix above four digits, "%" for "?" with "~", sets
+// without spaces. Parsing the canonical form gives the same days again.
+//
+// # Friendly forms
+//
+// Parse also reads the forms people write, and EDTF() shows how they
+// were read (case does not matter):
+//
+//	c. 1870, c.1870, ca 1870, ca. 1870, circa 1870,
+//	about 1870, around 1870, approx. 1870       1870~
+//	c. 1870?                                    1870%
+//	1870s, 1870's                               187X (1870–1879)
+//	1800s                                       18XX (1800–1899): a year ending
+//	                                            in 00 reads as the wider century
+//	1870s?                                      187X?
+//	early 1870s, mid 1870s, mid-1870s, late 1870s
+//	                                            1870/1873, 1873/1876, 1876/1879
+//	early 1800s, mid 1800s, late 1800s          1800/1833, 1833/1866, 1866/1899
+//	1200 BCE, 1200 BC, 1200 B.C., 1200 B.C.E.   -1199 (no year 0 BCE)
+//	AD 79, A.D. 79, 79 AD, 79 CE                0079
+//	1870-1875, 1870 - 1875, 1870–1875,
+//	1870 to 1875, between 1870 and 1875         1870/1875
+//	before 1900                                 ../1899  (strictly before)
+//	after 1850                                  1851/..  (strictly after)
+//	not after 1900, no later than 1900, by 1900,
+//	until 1900                                  ../1900  (inclusive)
+//	not before 1850, no earlier than 1850,
+//	from 1850, since 1850                       1850/..  (inclusive)
+//
+// "Early", "mid" and "late" are thirds of the decade or century that
+// overlap by one year at the seams, so a year at a seam belongs to both.
+// "Before" and "after" are strict at the precision written: before
+// 1900-05 is ../1900-04, after 1881-24 (winter) is 1882-03/..; a date
+// with a time of day keeps its own day ("before 1985-04-12T10:00:00" is
+// ../1985-04-12). The qualifiers of the date carry over: before c. 1900
+// is ../1899~.
+//
+// # Calendars
+//
+// Dates are Gregorian unless marked Julian. A text that ends with
+// "(Julian)", "Julian", "O.S." or "(O.S.)" is read on the Julian calendar
+// (every date in it); [ParseIn] with [CalendarJulian] reads unmarked text
+// so, and "(Gregorian)" or "N.S." at the end then overrides it. A Julian
+// date becomes the Gregorian days it names, and its canonical EDTF writes
+// those days: "1582-10-04 (Julian)" is 1582-10-14, "1582 (Julian)" is
+// 1582-01-11/1583-01-10. The Julian year is taken to begin on 1 January
+// (documents that began the year on 25 March must be converted first).
+// [Julian] and [Day.JulianCivil] convert single days; [JDFromGregorian],
+// [JDFromJulian] and [FromJD] work with fractional Julian Dates.
+//
+// # Durations
+//
+// [ParseDuration] reads ISO 8601 durations in years, months, weeks and
+// days. [Duration.AddTo] adds one to a day on the calendar (a day of the
+// month that the target month lacks becomes its last day). A duration
+// spans a different number of days from different start days (P1M spans
+// 28 to 31), so [Duration.MinDays] and [Duration.MaxDays] give the exact
+// fewest and most over every start day: an "at least" gap uses MinDays
+// and an "at most" gap MaxDays, which keeps both bounds conservative.
+//
+// # Errors
+//
+// Every parse error is a *[ParseError] with the input, the byte position
+// of the problem, a message that says what was expected and, where one
+// fits, a hint. Parse never panics; input longer than 1024 bytes is an
+// error.
 package date

@@ -119,6 +119,10 @@ func appendPoint(b []byte, pt point, role int, sep string) []byte {
 		return appendQual(b, pt.approx, pt.uncert)
 	}
 	b = appendYear(b, pt.year, pt.yx)
+	if pt.sig > 0 {
+		b = append(b, 'S')
+		b = appendInt(b, int64(pt.sig))
+	}
 	if pt.month != 0 || pt.mx != 0 {
 		b = append(b, '-')
 		switch pt.mx {
@@ -229,9 +233,9 @@ func (pt point) people(b *strings.Builder) {
 	if pt.approx {
 		b.WriteString("c. ")
 	}
-	if pt.yx > 0 {
+	if pt.yx > 0 || pt.sig > 0 {
 		switch {
-		case pt.year >= 1000 && pt.yx <= 2:
+		case pt.year >= 1000 && pt.yx > 0 && pt.yx <= 2:
 			b.Write(appendInt(nil, pt.year))
 			b.WriteByte('s')
 		default:

@@ -22,6 +22,7 @@ type point struct {
 	mx    uint8  // unspecified trailing digits of the month
 	day   uint8  // 0 none
 	dx    uint8  // unspecified trailing digits of the day
+	sig   uint8  // significant digits of the year (level 2 "1950S2"), 0 when not given
 	time  string // a time of day as written ("T23:20:30Z"); kept, never used
 	cal   Calendar
 	prec  Precision
@@ -503,7 +504,17 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 			return member{}, err
 		}
 		friendlyForm = true
+	case p.hasLetter(lo, hi):
+		if err := p.named(lo, hi, &pt); err != nil {
+			return member{}, err
+		}
 	default:
+		for k := lo; k < hi; k++ {
+			if c := s[k]; c == '?' || c == '~' || c == '%' {
+				return member{}, p.failHint(k, "qualifiers on a single part of a date (EDTF level 2: 2004-06~-11, ?2004-06-~11) are not read",
+					"qualify the whole date at its end: 2004-06-11~")
+			}
+		}
 		i, err := p.core(lo, hi, &pt)
 		if err != nil {
 			return member{}, err
@@ -664,6 +675,10 @@ func (p *parser) plural(lo, hi int, pt *point) error {
 // X digits, a time of day; no qualifiers) and returns where it stopped.
 func (p *parser) core(i, hi int, pt *point) (int, error) {
 	s := p.in
+	lo0 := i
+	if s[i] == '-' {
+		lo0++
+	}
 	if s[i] == 'Y' {
 		return p.longYear(i, hi, pt)
 	}
@@ -677,6 +692,10 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		i++
 	}
 	n := i - j
+	if n > 4 && j == lo0 {
+		return i, p.failHint(j, "a year of more than four digits takes the Y prefix",
+			"write Y"+s[j:i]+" for the year, or 1874-05-21 (with hyphens) for a day")
+	}
 	if n < 4 {
 		if n == 0 {
 			return i, p.failHint(j, "expected a year of four digits", "write 1874, 0079, -1199 (1200 BCE), 187X or c. 1870")
@@ -709,6 +728,12 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		v = -v
 	}
 	pt.year = v
+	if i < hi && s[i] == 'S' {
+		if seenX {
+			return i, p.fail(i, "a year with unspecified digits (X) has no significant digits")
+		}
+		return p.significant(i, hi, pt)
+	}
 	// Month or season.
 	if i < hi && s[i] == '-' {
 		i++
@@ -908,9 +933,38 @@ func (p *parser) longYear(i, hi int, pt *point) (int, error) {
 		v = -v
 	}
 	pt.year = v
+	if i < hi && s[i] == 'S' {
+		return p.significant(i, hi, pt)
+	}
 	if i < hi && s[i] == '-' {
 		return i, p.failHint(i, "a Y-prefixed year stands alone, without month or day", "write Y12000")
 	}
+	pt.span()
+	return i, nil
+}
+
+// significant reads the level-2 significant digits "S2" after a year:
+// 1950S2 is some year from 1900 to 1999, estimated to be 1950.
+func (p *parser) significant(i, hi int, pt *point) (int, error) {
+	s := p.in
+	i++
+	j := i
+	n := 0
+	for i < hi && isDigit(s[i]) && i-j < 2 {
+		n = n*10 + int(s[i]-'0')
+		i++
+	}
+	digits := len(appendInt(nil, max(pt.year, -pt.year)))
+	switch {
+	case i == j:
+		return i, p.fail(i, "expected the number of significant digits after S")
+	case n == 0 || n > digits:
+		return j, p.fail(j, "significant digits: "+itoa(n)+" is not between 1 and the "+itoa(digits)+" digits of the year")
+	}
+	if i < hi && s[i] == '-' {
+		return i, p.fail(i, "a year with significant digits stands alone, without month or day")
+	}
+	pt.sig = uint8(n)
 	pt.span()
 	return i, nil
 }
@@ -931,15 +985,28 @@ var divisions = [...][2]uint8{
 // span sets the precision and the run of days of pt.
 func (pt *point) span() {
 	ylo, yhi := pt.year, pt.year
+	unit := int64(1) // the run of years: 10^(unspecified or insignificant digits)
 	if pt.yx > 0 {
-		w := int64(1)
 		for k := uint8(0); k < pt.yx; k++ {
-			w *= 10
+			unit *= 10
 		}
+	}
+	if pt.sig > 0 {
+		a := max(pt.year, -pt.year)
+		for k := len(appendInt(nil, a)) - int(pt.sig); k > 0; k-- {
+			unit *= 10
+		}
+		ylo = a / unit * unit
 		if pt.year < 0 {
-			ylo = pt.year - (w - 1)
+			ylo = -ylo
+		}
+		yhi = ylo
+	}
+	if unit > 1 {
+		if ylo < 0 {
+			ylo -= unit - 1
 		} else {
-			yhi = pt.year + (w - 1)
+			yhi += unit - 1
 		}
 	}
 	mlo, mhi := 1, 12
@@ -982,11 +1049,11 @@ func (pt *point) span() {
 	pt.first = dayIn(ylo, mlo, dlo, pt.cal)
 	pt.last = dayIn(yEnd, mhi, dhi, pt.cal)
 	switch {
-	case pt.yx == 1:
+	case unit == 10:
 		pt.prec = PrecisionDecade
-	case pt.yx == 2:
+	case unit == 100:
 		pt.prec = PrecisionCentury
-	case pt.yx > 2:
+	case unit >= 1000:
 		pt.prec = PrecisionMillennium
 	case pt.month == 0 || pt.mx > 0:
 		pt.prec = PrecisionYear
@@ -1087,4 +1154,118 @@ func alternatives(ms []member, w func(m member) Interval) []Interval {
 		out[k] = iv
 	}
 	return out[:k+1]
+}
+
+func isLetter(c byte) bool { return (c|0x20) >= 'a' && (c|0x20) <= 'z' && c != 'X' && c != 'Y' && c != 'E' && c != 'S' && c != 'T' && c != 'Z' }
+
+// hasLetter reports whether s[lo:hi] holds a letter that EDTF does not use.
+func (p *parser) hasLetter(lo, hi int) bool {
+	for k := lo; k < hi; k++ {
+		if isLetter(p.in[k]) {
+			return true
+		}
+	}
+	return false
+}
+
+// named reads a date with an English month name: "May 1874",
+// "21 May 1874", "May 21, 1874"; the name may be cut to three letters
+// ("Sept." too).
+func (p *parser) named(lo, hi int, pt *point) error {
+	s := p.in
+	type tok struct{ lo, hi int }
+	var toks [4]tok
+	n := 0
+	for i := lo; i < hi; {
+		for i < hi && (isSpace(s[i]) || s[i] == ',') {
+			i++
+		}
+		if i == hi {
+			break
+		}
+		j := i
+		for j < hi && !isSpace(s[j]) && s[j] != ',' {
+			j++
+		}
+		if n == len(toks) {
+			return p.failHint(j, "expected a date such as 21 May 1874", "write 21 May 1874, May 1874 or 1874-05-21")
+		}
+		toks[n] = tok{i, j}
+		n++
+		i = j
+	}
+	month, mi := 0, -1
+	for k := 0; k < n; k++ {
+		if m := monthByName(s[toks[k].lo:toks[k].hi]); m > 0 {
+			month, mi = m, k
+			break
+		}
+	}
+	if month == 0 {
+		k := lo
+		for k < hi && !isLetter(s[k]) {
+			k++
+		}
+		return p.failHint(k, "unexpected word in a date: expected a month name or an EDTF date",
+			"write 21 May 1874, May 1874, 1874-05-21, c. 1870, 1870s or 1200 BCE")
+	}
+	num := func(t tok, what string, digits int) (int64, error) {
+		if t.hi-t.lo > digits || t.hi == t.lo {
+			return 0, p.fail(t.lo, "expected "+what)
+		}
+		var v int64
+		for k := t.lo; k < t.hi; k++ {
+			if !isDigit(s[k]) {
+				return 0, p.fail(k, "expected "+what)
+			}
+			v = v*10 + int64(s[k]-'0')
+		}
+		return v, nil
+	}
+	var dayTok, yearTok tok
+	switch {
+	case n == 2 && mi == 0: // May 1874
+		yearTok = toks[1]
+	case n == 3 && mi == 1: // 21 May 1874
+		dayTok, yearTok = toks[0], toks[2]
+	case n == 3 && mi == 0: // May 21, 1874
+		dayTok, yearTok = toks[1], toks[2]
+	default:
+		return p.failHint(toks[0].lo, "expected a date such as 21 May 1874", "write 21 May 1874, May 21, 1874 or May 1874")
+	}
+	if yearTok.hi-yearTok.lo != 4 {
+		return p.failHint(yearTok.lo, "expected a year of four digits after the month", "write May 1874; for other years use EDTF: 0079-05")
+	}
+	y, err := num(yearTok, "a year of four digits", 4)
+	if err != nil {
+		return err
+	}
+	pt.year, pt.month = y, uint8(month)
+	if dayTok.hi > 0 {
+		d, err := num(dayTok, "a day of the month", 2)
+		if err != nil {
+			return err
+		}
+		pt.day = uint8(d)
+		if err := p.checkDay(dayTok.lo, pt); err != nil {
+			return err
+		}
+	}
+	pt.span()
+	return nil
+}
+
+// monthByName returns 1–12 for an English month name or its first three
+// letters (with or without a full stop, and "Sept"), or 0.
+func monthByName(w string) int {
+	w = strings.TrimSuffix(w, ".")
+	if len(w) < 3 {
+		return 0
+	}
+	for i, name := range monthNames {
+		if strings.EqualFold(w, name) || strings.EqualFold(w, name[:3]) || (i == 8 && strings.EqualFold(w, "sept")) {
+			return i + 1
+		}
+	}
+	return 0
 }
