@@ -1156,7 +1156,9 @@ func alternatives(ms []member, w func(m member) Interval) []Interval {
 	return out[:k+1]
 }
 
-func isLetter(c byte) bool { return (c|0x20) >= 'a' && (c|0x20) <= 'z' && c != 'X' && c != 'Y' && c != 'E' && c != 'S' && c != 'T' && c != 'Z' }
+func isLetter(c byte) bool {
+	return (c|0x20) >= 'a' && (c|0x20) <= 'z' && c != 'X' && c != 'Y' && c != 'E' && c != 'S' && c != 'T' && c != 'Z'
+}
 
 // hasLetter reports whether s[lo:hi] holds a letter that EDTF does not use.
 func (p *parser) hasLetter(lo, hi int) bool {
