@@ -103,7 +103,7 @@ func TestLoadErrors(t *testing.T) {
 		{"unknown-key.yaml", "10:56", `unknown key "bassis" in a milestone`, "did you mean 'basis'"},
 		{"unknown-key.toml", "20:1", `unknown key "sorce" in a milestone`, "did you mean 'source'"},
 		{"unknown-top.yaml", "1:1", `unknown key "source" in a materials file`, "did you mean 'sources'"},
-		{"bad-date.yaml", "10:29", `bad date "17x6"`, "EDTF"},
+		{"bad-date.yaml", "10:31", `bad date "17x6"`, "EDTF"},
 		{"unknown-source.yaml", "10:9", `cites source "handbok-a", which is not in the bibliography`, "did you mean 'handbook-a'"},
 		{"unknown-place.yaml", "11:32", `unknown place "Japan"`, "did you mean 'JP'"},
 		{"place-number.yaml", "11:32", `unknown place "30"`, "did you mean '030'"},
@@ -178,7 +178,7 @@ materials:
 	}
 	want := []string{
 		"a.yaml:5:12: ", // the class
-		"a.yaml:8:29: ", // the date
+		"a.yaml:8:31: ", // the date, at the letter
 		"a.yaml:13:9: ", // the unknown source
 		"b.yaml:2:",     // the duplicate key
 	}

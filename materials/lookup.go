@@ -28,7 +28,8 @@ func buildIndex(ms []*Material) *index {
 		m[k] = append(m[k], mat)
 	}
 	for _, m := range ms {
-		for _, n := range append([]string{m.ID}, m.Names...) {
+		// Names before the id, so that a suggestion shows a name.
+		for _, n := range append(slices.Clone(m.Names), m.ID) {
 			k := fold(n)
 			if k == "" {
 				continue

@@ -1,0 +1,194 @@
+package materials
+
+import (
+	"errors"
+	"slices"
+	"strings"
+	"testing"
+	"testing/fstest"
+)
+
+func mapFS(files map[string]string) fstest.MapFS {
+	fsys := fstest.MapFS{}
+	for name, text := range files {
+		fsys[name] = &fstest.MapFile{Data: []byte(text)}
+	}
+	return fsys
+}
+
+func TestFold(t *testing.T) {
+	for _, tc := range []struct{ in, want string }{
+		{"Eosin Y", "eosiny"},
+		{"eosin-y", "eosiny"},
+		{"EOSIN  Y", "eosiny"},
+		{"Preußischblau", "preussischblau"},
+		{"Schwedisch Grün", "schwedischgrun"},
+		{"bleu de Prusse", "bleudeprusse"},
+		{"vert Véronèse", "vertveronese"},
+		{"Æther œuvre", "aetheroeuvre"},
+		{"żółcień", "zolcien"},
+		{"C.I. 77510", "ci77510"},
+		{"58000:1", "580001"},
+		{"14038-43-8", "14038438"},
+		{"Scheele's green", "scheelesgreen"},
+		{"藍", "藍"},
+		{"Ελληνικό", "ελληνικό"},
+		{"  -- ", ""},
+	} {
+		if got := fold(tc.in); got != tc.want {
+			t.Errorf("fold(%q): got %q, want %q", tc.in, got, tc.want)
+		}
+	}
+}
+
+func TestCIShort(t *testing.T) {
+	// The short forms are common practice among conservators.
+	for _, tc := range []struct{ in, want string }{
+		{"Pigment Blue 27", "PB27"},
+		{"Pigment Black 11", "PBk11"},
+		{"Pigment Brown 7", "PBr7"},
+		{"Natural Red 4", "NR4"},
+		{"Basic Violet 3", "BV3"},
+		{"Pigment Red 48:2", "PR48:2"},
+		{"Solvent Yellow", ""},
+		{"Pigment Mauve 1", ""},
+		{"", ""},
+	} {
+		if got := ciShort(tc.in); got != tc.want {
+			t.Errorf("ciShort(%q): got %q, want %q", tc.in, got, tc.want)
+		}
+	}
+}
+
+func TestLookup(t *testing.T) {
+	d, err := LoadFile("testdata/good.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, q := range []string{
+		"prussian-blue", "Prussian Blue", "PRUSSIAN BLUE", "prussianblue", "Berlin-Blue",
+		"Preussischblau", "preußischblau", "Bleu de Prusse",
+		"Pigment Blue 27", "PB27", "PB 27", "pb-27", "C.I. Pigment Blue 27",
+		"77510", "C.I. 77510", "CI 77510",
+		"14038-43-8", "14038438",
+	} {
+		t.Run(q, func(t *testing.T) {
+			m, err := d.Lookup(q)
+			if err != nil {
+				t.Fatalf("Lookup(%q): %v", q, err)
+			}
+			if m.ID != "prussian-blue" {
+				t.Errorf("Lookup(%q): got %q", q, m.ID)
+			}
+		})
+	}
+	if m, err := d.Lookup("scheeles green"); err != nil || m.ID != "scheeles-green" {
+		t.Errorf("Lookup(scheeles green): got %v, %v", m, err)
+	}
+}
+
+func TestLookupMiss(t *testing.T) {
+	d, err := LoadFile("testdata/good.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, tc := range []struct {
+		q    string
+		want []string // suggestions, nearest first
+	}{
+		{"prusian blue", []string{"Prussian blue"}},
+		{"Berlin bleu", []string{"Berlin blue"}},
+		{"scheele", []string{"Scheele's green"}},
+		{"quinacridone", nil},
+		{"", nil},
+	} {
+		t.Run(tc.q, func(t *testing.T) {
+			_, err := d.Lookup(tc.q)
+			var nf *NotFoundError
+			if !errors.As(err, &nf) {
+				t.Fatalf("Lookup(%q): got %v, want a *NotFoundError", tc.q, err)
+			}
+			if !slices.Equal(nf.Suggestions, tc.want) {
+				t.Errorf("suggestions: got %q, want %q", nf.Suggestions, tc.want)
+			}
+			if nf.Name != tc.q || !strings.Contains(nf.Error(), "no material named") {
+				t.Errorf("error: got %q", nf.Error())
+			}
+			if len(tc.want) > 0 && nf.Hint() != "did you mean '"+tc.want[0]+"'?" {
+				t.Errorf("hint: got %q", nf.Hint())
+			}
+		})
+	}
+}
+
+func TestLookupAmbiguous(t *testing.T) {
+	d, err := Load(mapFS(map[string]string{"a.yaml": `sources:
+  - {key: k, cite: "Laver, M., Titanium dioxide whites, in Artists' Pigments vol. 3, 1997, pp. 295-355"}
+materials:
+  - id: titanium-white-anatase
+    names: [anatase titanium white]
+    class: pigment
+    origin: synthetic
+    colour_index: {name: Pigment White 6, number: "77891"}
+    milestones:
+      - {kind: made, date: "1916", source: k, basis: from-memory}
+  - id: titanium-white-rutile
+    names: [rutile titanium white]
+    class: pigment
+    origin: synthetic
+    colour_index: {name: Pigment White 6, number: "77891"}
+    milestones:
+      - {kind: made, date: "1938", source: k, basis: from-memory}
+`}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, err = d.Lookup("PW6")
+	var amb *AmbiguousError
+	if !errors.As(err, &amb) {
+		t.Fatalf("Lookup(PW6): got %v, want an *AmbiguousError", err)
+	}
+	if want := []string{"titanium-white-anatase", "titanium-white-rutile"}; !slices.Equal(amb.Matches, want) {
+		t.Errorf("matches: got %q, want %q", amb.Matches, want)
+	}
+	if !strings.Contains(amb.Hint(), "titanium-white-anatase") {
+		t.Errorf("hint: got %q", amb.Hint())
+	}
+}
+
+func TestCheckCAS(t *testing.T) {
+	// Check digits as the CAS registry defines them. The registry numbers
+	// below are from memory (water, Prussian blue, litharge); each also
+	// passes the rule worked by hand.
+	for _, tc := range []struct {
+		in string
+		ok bool
+	}{
+		{"7732-18-5", true},  // water
+		{"14038-43-8", true}, // Prussian blue
+		{"1317-36-8", true},  // lead(II) oxide (litharge)
+		{"7732-18-4", false}, // check digit off by one
+		{"7732-185", false},  // groups
+		{"77a2-18-5", false}, // not digits
+		{"1-18-5", false},    // first group too short
+		{"12345678-18-5", false},
+	} {
+		msg, _ := checkCAS(tc.in)
+		if got := msg == ""; got != tc.ok {
+			t.Errorf("checkCAS(%q): got ok=%v (%q), want %v", tc.in, got, msg, tc.ok)
+		}
+	}
+}
+
+func TestLevenshtein(t *testing.T) {
+	for _, tc := range []struct {
+		a, b string
+		want int
+	}{
+		{"", "", 0}, {"a", "", 1}, {"kitten", "sitting", 3}, {"made", "maed", 2}, {"grün", "grun", 1},
+	} {
+		if got := levenshtein(tc.a, tc.b); got != tc.want {
+			t.Errorf("levenshtein(%q, %q): got %d, want %d", tc.a, tc.b, got, tc.want)
+		}
+	}
+}
