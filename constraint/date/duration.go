@@ -142,7 +142,7 @@ func (u Duration) MinDays() int64 {
 }
 
 // MaxDays is the most days u can span, over every start day: the greatest
-// AddTo(d) − d. P1M gives 31, P1Y 366, P1Y6M 549. An "at most" gap and the
+// AddTo(d) − d. P1M gives 31, P1Y 366, P1Y6M 550. An "at most" gap and the
 // circa widening use it.
 func (u Duration) MaxDays() int64 {
 	_, hi := u.spanRange()
@@ -153,7 +153,8 @@ func (u Duration) MaxDays() int64 {
 // repeats every 400 years (4800 months, 146097 days), so the start months
 // of one cycle cover every case. Within a start month the span is largest
 // from its first day (no day is cut at the end) and smallest from its last
-// day (the most is cut), so two start days per month suffice.
+// day (the most is cut), so two start days per month suffice; the month
+// starts are walked incrementally.
 func (u Duration) spanRange() (int64, int64) {
 	fixed := u.Weeks*7 + u.Days
 	n := u.Years*12 + u.Months
@@ -162,18 +163,22 @@ func (u Duration) spanRange() (int64, int64) {
 	}
 	cycles := n / 4800
 	r := n % 4800
+	ys, ms := int64(2000), 1 // the start month
+	yt, mt := ys+r/12, 1+int(r%12)
+	s := int64(Gregorian(ys, ms, 1))
+	t := int64(Gregorian(yt, mt, 1))
 	lo, hi := int64(1)<<62, int64(-1)<<62
-	month := Duration{Months: r}
-	for y := int64(2000); y < 2400; y++ {
-		for m := 1; m <= 12; m++ {
-			first := Gregorian(y, m, 1)
-			last := first + Day(DaysInMonth(y, m)-1)
-			if s := int64(month.AddTo(first) - first); s > hi {
-				hi = s
-			}
-			if s := int64(month.AddTo(last) - last); s < lo {
-				lo = s
-			}
+	for k := 0; k < 4800; k++ {
+		ds, dt := DaysInMonth(ys, ms), DaysInMonth(yt, mt)
+		hi = max(hi, t-s)
+		lo = min(lo, t-s+int64(min(ds, dt)-ds))
+		s += int64(ds)
+		t += int64(dt)
+		if ms++; ms == 13 {
+			ms, ys = 1, ys+1
+		}
+		if mt++; mt == 13 {
+			mt, yt = 1, yt+1
 		}
 	}
 	base := cycles*146097 + fixed

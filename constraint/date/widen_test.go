@@ -1,0 +1,122 @@
+package date
+
+import (
+	"errors"
+	"testing"
+)
+
+func TestDefaultCirca(t *testing.T) {
+	c := DefaultCirca()
+	want := "day P7D, month P1M, season P1M, year P5Y, decade P5Y, century P25Y, millennium P100Y"
+	if c.String() != want {
+		t.Errorf("DefaultCirca().String() = %q, want %q", c.String(), want)
+	}
+	c[PrecisionYear] = Duration{Years: 10}
+	if DefaultCirca()[PrecisionYear] != (Duration{Years: 5}) {
+		t.Error("changing one policy changed the default")
+	}
+	if got := (Circa{PrecisionYear: {Years: 2}}).For(PrecisionDecade); got != (Duration{Years: 5}) {
+		t.Errorf("missing precision falls back to %v, want P5Y", got)
+	}
+}
+
+func TestParseCircaKey(t *testing.T) {
+	for i, k := range []string{"day", "month", "season", "year", "decade", "century", "millennium"} {
+		p, err := ParseCircaKey(k)
+		if err != nil || p != Precision(i) {
+			t.Errorf("ParseCircaKey(%q) = %v, %v; want %v", k, p, err, Precision(i))
+		}
+		if p.String() != k {
+			t.Errorf("%v.String() = %q, want %q", p, p.String(), k)
+		}
+	}
+	if p, err := ParseCircaKey("Year"); err != nil || p != PrecisionYear {
+		t.Errorf("ParseCircaKey(Year) = %v, %v", p, err)
+	}
+	_, err := ParseCircaKey("years")
+	var pe *ParseError
+	if !errors.As(err, &pe) || pe.Input != "years" {
+		t.Errorf("ParseCircaKey(years) error = %v, want *ParseError", err)
+	}
+}
+
+func TestWiden(t *testing.T) {
+	c := DefaultCirca()
+	tests := []struct {
+		in     string
+		circa  Circa
+		widest []string
+	}{
+		// Year P5Y: the most days five years can span is 1827 (five years
+		// holding two 29 Februaries), at each side.
+		{"1870~", c, []string{"1864-12-31→1876-01-01"}},
+		{"1870~/1879", c, []string{"1864-12-31→1879-12-31"}},
+		{"1870/1879~", c, []string{"1870-01-01→1884-12-31"}},
+		{"1870?", c, []string{"1870-01-01→1870-12-31"}},
+		{"1870", c, []string{"1870-01-01→1870-12-31"}},
+		{"1874-05~", c, []string{"1874-03-31→1874-07-01"}},
+		{"1874-05-21~", c, []string{"1874-05-14→1874-05-28"}},
+		{"187X~", c, []string{"1864-12-31→1884-12-31"}},
+		{"../1900~", c, []string{"..→1906-01-01"}},
+		{"1870~", Circa{PrecisionYear: {Years: 1}}, []string{"1868-12-31→1872-01-01"}},
+		{"1870~", Circa{PrecisionYear: {}}, []string{"1870-01-01→1870-12-31"}},
+		// Members of a set widen on their own and merge when they meet.
+		{"[1870~,1880]", c, []string{"1864-12-31→1876-01-01", "1880-01-01→1880-12-31"}},
+		{"[1870~,1878~]", c, []string{"1864-12-31→1884-01-01"}},
+	}
+	for _, tt := range tests {
+		t.Run(tt.in, func(t *testing.T) {
+			d, err := Parse(tt.in)
+			if err != nil {
+				t.Fatal(err)
+			}
+			w := d.Widen(tt.circa)
+			if got := iso(w); !sameStrings(got, tt.widest) {
+				t.Errorf("Widen = %v, want %v", got, tt.widest)
+			}
+			if w.EDTF() != d.EDTF() {
+				t.Errorf("Widen changed EDTF() to %q", w.EDTF())
+			}
+			// Widening starts from the date as written: twice is once.
+			if got := iso(w.Widen(tt.circa)); !sameStrings(got, tt.widest) {
+				t.Errorf("Widen twice = %v, want %v", got, tt.widest)
+			}
+			if !sameStrings(iso(d), iso(mustParse(t, tt.in))) {
+				t.Error("Widen changed the receiver")
+			}
+		})
+	}
+	if got := (Duration{Years: 5}).MaxDays(); got != 1827 {
+		t.Errorf("P5Y MaxDays = %d, want 1827 (5 × 365 + 2)", got)
+	}
+}
+
+func mustParse(t *testing.T, s string) Date {
+	t.Helper()
+	d, err := Parse(s)
+	if err != nil {
+		t.Fatal(err)
+	}
+	return d
+}
+
+func TestQualifiedEnds(t *testing.T) {
+	for _, tt := range []struct {
+		in                     string
+		sa, su, ea, eu, da, du bool
+	}{
+		{"1870~/1879", true, false, false, false, true, false},
+		{"1870/1879?", false, false, false, true, false, true},
+		{"1870%", true, true, true, true, true, true},
+		{"../1900~", false, false, true, false, true, false},
+	} {
+		d := mustParse(t, tt.in)
+		sa, su, ea, eu := d.QualifiedEnds()
+		if sa != tt.sa || su != tt.su || ea != tt.ea || eu != tt.eu {
+			t.Errorf("%s: QualifiedEnds = %v %v %v %v", tt.in, sa, su, ea, eu)
+		}
+		if d.Approximate != tt.da || d.Uncertain != tt.du {
+			t.Errorf("%s: Approximate, Uncertain = %v, %v", tt.in, d.Approximate, d.Uncertain)
+		}
+	}
+}
