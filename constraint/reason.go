@@ -269,6 +269,30 @@ type built struct {
 	// disagreements found while building
 	disagreements []Disagreement
 	notes         []string
+	// noArrival lists, per place, the materials without arrival data there.
+	noArrival       map[string][]string
+	noArrivalPlaces []string
+}
+
+// arrivalNotes says, once per place, which materials have no arrival data.
+func (a *analysis) arrivalNotes(b *built) []string {
+	var out []string
+	for _, p := range b.noArrivalPlaces {
+		names := b.noArrival[p]
+		if len(names) == 1 {
+			out = append(out, fmt.Sprintf("No arrival data for %s in %s: its soft bound falls back to its firm bound.", names[0], a.placeName(p)))
+			continue
+		}
+		out = append(out, fmt.Sprintf("No arrival data for %s in %s: their soft bounds fall back to their firm bounds.", andList(names), a.placeName(p)))
+	}
+	return out
+}
+
+func andList(list []string) string {
+	if len(list) < 2 {
+		return strings.Join(list, "")
+	}
+	return strings.Join(list[:len(list)-1], ", ") + " and " + list[len(list)-1]
 }
 
 // override picks, for a milestone on which sources disagree, a claim other
@@ -333,6 +357,9 @@ func FormatBound(d date.Day, upper bool) string {
 			return fmt.Sprintf("%s %s", monthName(m), yearText)
 		}
 		return fmt.Sprintf("%s-%02d", date.FormatYear(y), m)
+	}
+	if y < 1000 {
+		return fmt.Sprintf("%d %s %s", dd, monthName(m), yearText)
 	}
 	return d.ISO()
 }
@@ -399,7 +426,7 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 				cl = append(cl, fmt.Sprintf("%s (%s)", c.ms.Date.String(), c.ms.Source))
 			}
 			b.disagreements = append(b.disagreements, Disagreement{
-				Material: m.ID, Kind: string(kind), Place: area, Claims: cl,
+				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl,
 				Used: fmt.Sprintf("%s (%s)", cands[pick].ms.Date.String(), cands[pick].ms.Source),
 			})
 		}
@@ -440,7 +467,15 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		arr, area := a.ds.Arrival(m, place)
 		if len(arr) == 0 {
 			if b != nil {
-				b.notes = append(b.notes, fmt.Sprintf("No arrival data for %s in %s: its soft bound falls back to its firm bound.", name, a.placeName(place)))
+				if b.noArrival == nil {
+					b.noArrival = map[string][]string{}
+				}
+				if !contains(b.noArrival[place], name) {
+					b.noArrival[place] = append(b.noArrival[place], name)
+					if !contains(b.noArrivalPlaces, place) {
+						b.noArrivalPlaces = append(b.noArrivalPlaces, place)
+					}
+				}
 			}
 		} else {
 			group(materials.KindArrived, arr, area, network.Soft, false)
@@ -599,8 +634,8 @@ func (a *analysis) build(ov override) (*built, error) {
 				if it.upper {
 					side = "not after"
 				}
-				row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Date: it.day.ISO(), Tier: it.tier,
-					Milestone: string(it.ms.Kind), Material: f.mats[i].ID, Source: it.ms.Source})
+				row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Day: it.day, Date: it.day.ISO(), Tier: it.tier,
+					Milestone: string(it.ms.Kind), Material: f.mats[i].ID, MaterialName: names[i], Source: it.ms.Source})
 			}
 		}
 		b.evidence = append(b.evidence, row)
@@ -739,20 +774,21 @@ func (a *analysis) build(ov override) (*built, error) {
 		}
 		lo, hi := alts[0].Lo, alts[len(alts)-1].Hi
 		if lo > -network.Inf {
-			sides = append(sides, EvidenceBound{Side: "not before", Date: date.Day(lo).ISO(), Tier: t, Source: r.Source})
+			sides = append(sides, EvidenceBound{Side: "not before", Day: date.Day(lo), Date: date.Day(lo).ISO(), Tier: t, Source: r.Source})
 		}
 		if hi < network.Inf {
-			sides = append(sides, EvidenceBound{Side: "not after", Date: date.Day(hi).ISO(), Tier: t, Source: r.Source})
+			sides = append(sides, EvidenceBound{Side: "not after", Day: date.Day(hi), Date: date.Day(hi).ISO(), Tier: t, Source: r.Source})
 		}
-		what := fmt.Sprintf("%s %s", strings.ReplaceAll(string(r.Kind), "_", " "), d.String())
+		what := recordText(r, alts)
 		src := ""
 		if r.Source != "" {
 			src = " (" + r.Source + ")"
 		}
-		lowText := fmt.Sprintf("%s: %s%s, not before %s [%s]", r.ID, what, src, dayText(date.Day(lo), false), t)
-		upText := fmt.Sprintf("%s: %s%s, not after %s [%s]", r.ID, what, src, dayText(date.Day(hi), true), t)
-		general := fmt.Sprintf("%s: %s%s [%s]", r.ID, what, src, t)
-		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, link{evidence: r.ID, lower: lowText, upper: upText, general: general}); err != nil {
+		general := fmt.Sprintf("%s: record, %s%s [%s]", r.ID, what, src, t)
+		if r.Note != "" {
+			general += " (" + r.Note + ")"
+		}
+		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, link{evidence: r.ID, lower: general, upper: general, general: general}); err != nil {
 			return nil, err
 		}
 		b.evidence = append(b.evidence, Evidence{ID: r.ID, Kind: "record", Event: r.Event, What: what, Bounds: sides, Source: r.Source})
@@ -768,6 +804,7 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 	}
 	res := &Result{Title: a.c.Title, File: a.c.File, Place: a.c.Place, Evidence: b.evidence, Disagreements: b.disagreements}
 	res.Dataset = DatasetInfo{Version: a.ds.Version, SHA256: a.ds.SHA256}
+	res.Notes = append(res.Notes, a.arrivalNotes(b)...)
 	res.Notes = append(res.Notes, dedupe(b.notes)...)
 	res.Events = make([]EventResult, len(a.events))
 	for i, e := range a.events {
@@ -931,7 +968,7 @@ func (a *analysis) judge(res *Result) {
 		res.Notes = append(res.Notes, fmt.Sprintf("The evidence of the %s tier conflicts, so verdicts are judged at the %s tier, the weakest that agrees.", network.Tier(strongest+1), network.Tier(strongest)))
 	}
 	for _, c := range a.c.Claims {
-		cr := ClaimResult{ID: c.ID, Event: c.Event, Date: c.Date.EDTF(), By: c.By}
+		cr := ClaimResult{ID: c.ID, Event: c.Event, Date: c.Date.EDTF(), DateText: c.Date.String(), By: c.By}
 		d := c.Date
 		if d.Approximate {
 			d = d.Widen(a.circa)
@@ -1055,7 +1092,7 @@ func (a *analysis) sensitivity(ctx context.Context, opt Options, res *Result) er
 		if d.Place != "" {
 			kind += " in " + a.placeName(d.Place)
 		}
-		d.Text = fmt.Sprintf("Sources disagree on when %s was %s: %s. The bound uses %s, the most conservative.", d.Material, kind, strings.Join(d.Claims, ", "), d.Used)
+		d.Text = fmt.Sprintf("Sources disagree on when %s was %s: %s. The bound uses %s, the most conservative.", d.Name, kind, strings.Join(d.Claims, ", "), d.Used)
 		if len(changes) == 0 {
 			d.Text += fmt.Sprintf(" Under %s no verdict would change.", latest)
 		} else {
@@ -1064,4 +1101,38 @@ func (a *analysis) sensitivity(ctx context.Context, opt Options, res *Result) er
 		}
 	}
 	return nil
+}
+
+// recordText says what a record states, in the words of its kind.
+func recordText(r Record, alts []network.Alt) string {
+	lo, hi := alts[0].Lo, alts[len(alts)-1].Hi
+	first, last := "open", "open"
+	if lo > -network.Inf {
+		first = FormatBound(date.Day(lo), false)
+	}
+	if hi < network.Inf {
+		last = FormatBound(date.Day(hi), true)
+	}
+	q := ""
+	if r.Date.Uncertain {
+		q = " (uncertain)"
+	}
+	if r.Date.Approximate {
+		q += " (approximate, widened)"
+	}
+	switch r.Kind {
+	case RecordOn:
+		if len(alts) > 1 {
+			return "dated one of " + r.Date.String() + q
+		}
+		if first == last {
+			return "dated " + first + q
+		}
+		return "dated " + r.Date.String() + q
+	case RecordNotBefore:
+		return "not before " + first + q
+	case RecordNotAfter:
+		return "not after " + last + q
+	}
+	return "between " + first + " and " + last + q
 }

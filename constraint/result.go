@@ -94,8 +94,9 @@ type Step struct {
 
 // ClaimResult is the verdict on one claim.
 type ClaimResult struct {
-	ID, Event, Date, By string
-	Verdict             Verdict
+	// Date is the claim in canonical EDTF, DateText as people write it.
+	ID, Event, Date, DateText, By string
+	Verdict                       Verdict
 	// JudgedAt is the tier whose window decided the verdict's level, the
 	// strongest consistent one.
 	JudgedAt network.Tier
@@ -137,22 +138,24 @@ type Evidence struct {
 
 // EvidenceBound is one bound that an evidence item puts on its event.
 type EvidenceBound struct {
-	Side      string // "not before", "not after", "within", "after"
-	Date      string // the day, ISO 8601, or a gap for an order
-	Tier      network.Tier
-	Milestone string // made, sold, arrived, withdrawn; empty for records and orders
-	Material  string
-	Source    string // a dataset source key, or the record's source
+	Side         string   // "not before", "not after", "within", "after"
+	Day          date.Day // the bound, for findings and records
+	Date         string   // the day, ISO 8601, or a gap for an order
+	Tier         network.Tier
+	Milestone    string // made, sold, arrived, withdrawn; empty for records and orders
+	Material     string // the material's id
+	MaterialName string // the name it is shown by
+	Source       string // a dataset source key, or the record's source
 }
 
 // Disagreement is a milestone on which sources disagree, and whether using
 // another claim would change a verdict.
 type Disagreement struct {
-	Material, Kind, Place string
-	Claims                []string // "1704 (source)", …
-	Used                  string
-	ChangesVerdict        bool
-	Text                  string
+	Material, Name, Kind, Place string
+	Claims                      []string // "1704 (source)", …
+	Used                        string
+	ChangesVerdict              bool
+	Text                        string
 }
 
 // SourceRef is a dataset source cited by the evidence.

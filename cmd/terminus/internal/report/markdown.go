@@ -32,7 +32,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		fmt.Fprintln(ew)
 	}
 	for _, c := range r.Claims {
-		fmt.Fprintln(ew, claimParagraph(c))
+		fmt.Fprintln(ew, claimParagraph(c, r.Events))
 		fmt.Fprintln(ew)
 	}
 	fmt.Fprintln(ew, consistencyLine(r))
@@ -78,7 +78,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 					surv[t] = spansText(c.Surviving[t])
 				}
 			}
-			fmt.Fprintf(ew, "| %s | %s | %s | **%s** | %s | %s | %s | %s |\n", mdEscape(c.ID), mdEscape(c.Event), mdEscape(c.Date),
+			fmt.Fprintf(ew, "| %s | %s | %s | **%s** | %s | %s | %s | %s |\n", mdEscape(c.ID), mdEscape(c.Event), mdEscape(c.DateText),
 				c.Verdict, surv[0], surv[1], surv[2], mdEscape(strings.Join(c.Deciding, ", ")))
 		}
 		fmt.Fprintln(ew)
@@ -100,11 +100,11 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		}
 		for _, b := range e.Bounds {
 			what := e.What
-			bnd := b.Side + " " + b.Date
+			bnd := b.Side + " " + constraint.FormatBound(b.Day, b.Side == "not after")
 			src := e.Source
 			if b.Milestone != "" {
-				what = b.Material
-				bnd = fmt.Sprintf("%s %s (%s)", b.Side, b.Date, b.Milestone)
+				what = b.MaterialName
+				bnd = fmt.Sprintf("%s %s (%s)", b.Side, constraint.FormatBound(b.Day, b.Side == "not after"), b.Milestone)
 				src = b.Source
 			}
 			if e.Kind == "order" {
@@ -176,7 +176,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 	return ew.err
 }
 
-var mdReplacer = strings.NewReplacer("|", `\|`, "*", `\*`, "_", `\_`, "<", "&lt;", ">", "&gt;")
+var mdReplacer = strings.NewReplacer("|", `\|`, "*", `\*`, "_", `\_`, "<", "&lt;")
 
 func mdEscape(s string) string { return mdReplacer.Replace(s) }
 
@@ -240,12 +240,18 @@ func joinAnd(list []string) string {
 	return strings.Join(list[:len(list)-1], "; it ") + "; and it " + list[len(list)-1]
 }
 
-func claimParagraph(c constraint.ClaimResult) string {
+func claimParagraph(c constraint.ClaimResult, events []constraint.EventResult) string {
+	eventName := c.Event
+	for _, e := range events {
+		if e.ID == c.Event && e.Label != "" {
+			eventName = "the " + e.Label + " (" + e.ID + ")"
+		}
+	}
 	by := ""
 	if c.By != "" {
 		by = " by " + c.By
 	}
-	head := fmt.Sprintf("The date claimed%s for %s, %s, is **%s**", mdEscape(by), mdEscape(c.Event), mdEscape(c.Date), c.Verdict)
+	head := fmt.Sprintf("The date claimed%s for %s, %s, is **%s**", mdEscape(by), mdEscape(eventName), mdEscape(c.DateText), c.Verdict)
 	switch c.Verdict {
 	case constraint.Consistent:
 		return head + ": it meets the window of all the evidence. This does not prove the date; it only fails to rule it out."

@@ -142,8 +142,20 @@ func Text(w io.Writer, r *constraint.Result) error {
 				wrap(ew, "        ", "(as "+tierNames[t-1]+")")
 				continue
 			}
-			writeChain(ew, "earliest", win.Earliest)
-			writeChain(ew, "latest", win.Latest)
+			var prev *constraint.Window
+			if t > 0 {
+				prev = e.Windows[t-1]
+			}
+			if prev != nil && sameBound(prev.Earliest, win.Earliest) {
+				wrap(ew, "        ", fmt.Sprintf("earliest %s: as %s", constraint.FormatBound(win.Earliest.Day, false), tierNames[t-1]))
+			} else {
+				writeChain(ew, "earliest", win.Earliest)
+			}
+			if prev != nil && sameBound(prev.Latest, win.Latest) {
+				wrap(ew, "        ", fmt.Sprintf("latest %s: as %s", constraint.FormatBound(win.Latest.Day, true), tierNames[t-1]))
+			} else {
+				writeChain(ew, "latest", win.Latest)
+			}
 		}
 	}
 
@@ -151,7 +163,7 @@ func Text(w io.Writer, r *constraint.Result) error {
 		fmt.Fprintln(ew)
 		fmt.Fprintln(ew, "CLAIMS")
 		for _, c := range r.Claims {
-			head := fmt.Sprintf("%s: %s %s", c.ID, c.Event, c.Date)
+			head := fmt.Sprintf("%s: %s %s", c.ID, c.Event, c.DateText)
 			if c.By != "" {
 				head += " (by " + c.By + ")"
 			}
@@ -221,6 +233,10 @@ func sameWindow(a, b *constraint.Window) bool {
 		}
 	}
 	return true
+}
+
+func sameBound(a, b constraint.Bound) bool {
+	return a.Bounded && b.Bounded && a.Day == b.Day && strings.Join(a.Because, ",") == strings.Join(b.Because, ",")
 }
 
 func writeChain(w io.Writer, which string, b constraint.Bound) {
