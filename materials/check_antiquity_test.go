@@ -58,6 +58,30 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"lead-white", materials.KindArrived, "JP", "06XX", "Wikipedia, Lead white, History"},
 		// Wikipedia, "Indian yellow", History: Rajput and Mughal miniatures from the 16th century.
 		{"indian-yellow", materials.KindMade, "", "15XX", "Wikipedia, Indian yellow, History"},
+		// Hansen, The quest for quercitron (MA thesis, Delaware, 2011), abstract: found by Bancroft in 1771.
+		{"quercitron", materials.KindMade, "", "1771", "Hansen 2011, abstract"},
+		// Hansen 2011, abstract: British patent of 1775.
+		{"quercitron", materials.KindSold, "", "1775", "Hansen 2011, abstract"},
+		// Hunt, Gold Bulletin 9 (1976), pp. 134-139: a method published by 1659, before Cassius.
+		{"purple-of-cassius", materials.KindMade, "", "1659", "Hunt 1976, p. 134"},
+		// Getty AAT, purple of Cassius, scope note: first made by Andreas Cassius in 1676.
+		{"purple-of-cassius", materials.KindMade, "", "1676", "Getty AAT, purple of Cassius"},
+		// Wallert, Hermens and Peek (eds.), Historical Painting Techniques (Getty, 1995), p. 74, table 2: Basohli miniatures 1660-70.
+		{"smalt", materials.KindArrived, "IN", "1660/1670", "Getty 1995 preprints, table 2"},
+		// MFA Boston, CAMEO, entry Turmeric: imported to Europe in 1612.
+		{"turmeric", materials.KindArrived, "150", "1612", "CAMEO, Turmeric"},
+		// Scott, Copper and Bronze in Art (Getty, 2002), p. 131: green verditer in a del Cossa of about 1472.
+		{"green-verditer", materials.KindMade, "", "1472~", "Scott 2002, p. 131"},
+		// Wikipedia, "Reseda luteola", History and usage: out of wide use by the end of the 19th century.
+		{"weld", materials.KindWithdrawn, "", "1899~", "Wikipedia, Reseda luteola"},
+		// University of Pennsylvania ACL, object RE-020-107, Historical Use: Egyptian New Kingdom tombs, 16th-11th century BCE.
+		{"orpiment", materials.KindMade, "", "-1549/-1069", "UPenn ACL, Orpiment"},
+		// Gettens and Stout, Painting Materials (1942), entry Verdigris, p. 169: described by Theophrastus, about 300 BCE.
+		{"verdigris", materials.KindMade, "", "-0299~", "Gettens and Stout 1942, p. 169"},
+		// Oxford Herbaria, Plants400, Carthamus: oldest safflower dyes outside Egypt on 8th-century Japanese textiles.
+		{"safflower", materials.KindArrived, "JP", "07XX", "Oxford Plants400, Carthamus"},
+		// From memory, not read here: Harley-era handbook date for Naples yellow as a painter's pigment (Artists' Pigments vol. 1).
+		{"naples-yellow", materials.KindSold, "", "16XX", "Artists' Pigments vol. 1 (from memory)"},
 	}
 	for _, r := range rows {
 		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
