@@ -1,0 +1,393 @@
+package materials_test
+
+import (
+	"strings"
+	"testing"
+
+	"terminus/constraint/date"
+	"terminus/materials"
+)
+
+// dyesFile is the family file these checks cover: synthetic organic dyes and
+// their lakes, from picric acid to the indigoid vat dyes.
+const dyesFile = "synthetic-dyes.yaml"
+
+// TestDyesAgainstSources checks that the embedded dataset holds dates as the
+// named published sources give them. One row per value; the source and the
+// place in it stand beside the value. Rows written from memory say so.
+func TestDyesAgainstSources(t *testing.T) {
+	d := dyesBuiltin(t)
+	rows := []struct {
+		id    string
+		kind  materials.Kind
+		place string
+		want  string
+		src   string
+	}{
+		// Wikipedia, "Picric acid", History: made from indigo by Peter Woulfe in 1771.
+		{"picric-acid", materials.KindMade, "", "1771", "Wikipedia, Picric acid, History"},
+		// Freemantle, Chemistry World podcast "Picric acid": Woulfe's report on dyeing yellow with indigo, 1771.
+		{"picric-acid", materials.KindMade, "", "1771", "Freemantle, Chemistry World, Picric acid"},
+		// Scientific American, 12 June 1852: Guinon of Lyons dyeing silk with picric acid.
+		{"picric-acid", materials.KindSold, "", "1852", "Scientific American 1852, A New Yellow Dye"},
+		// Wikipedia, "Mauveine", History: discovered by Perkin in 1856.
+		{"mauveine", materials.KindMade, "", "1856", "Wikipedia, Mauveine, History"},
+		// Same section: the Greenford dyeworks produced it the next year.
+		{"mauveine", materials.KindSold, "", "1857", "Wikipedia, Mauveine, History"},
+		// German Wikipedia, "Fuchsin", Geschichte: Hofmann and Verguin, 1858.
+		{"fuchsine", materials.KindMade, "", "1858", "de.wikipedia, Fuchsin, Geschichte"},
+		// Wikipedia, "Fuchsine", History: Natanson made it in 1856.
+		{"fuchsine", materials.KindMade, "", "1856", "Wikipedia, Fuchsine, History"},
+		// The Connexion, "The fuchsia: intense colour honours French victory": patent sold to the Renard brothers, 1859.
+		{"fuchsine", materials.KindSold, "", "1859", "The Connexion, The fuchsia"},
+		// Wikipedia, "Magenta", History: Nicholson and Maule began making roseine in London in 1860.
+		{"fuchsine", materials.KindArrived, "GB", "1860", "Wikipedia, Magenta, History"},
+		// ColorantsHistory.Org, The Brooklyn Dye Industry: the Hollidays made magenta on Newtown Creek around 1864.
+		{"fuchsine", materials.KindArrived, "US", "1864~", "ColorantsHistory.Org, Brooklyn Dye Industry"},
+		// Cesaratto et al., Heritage Science 6 (2018), abstract: rosaniline in nishiki-e from 1864.
+		{"fuchsine", materials.KindArrived, "JP", "1864", "Cesaratto et al. 2018, abstract"},
+		// KIK-IRPA glossary, "bleu d'aniline": Girard and de Laire, 1860.
+		{"aniline-blue", materials.KindMade, "", "1860", "KIK-IRPA glossary, bleu d'aniline"},
+		// Carvalho, Forty Centuries of Ink (1904), chronology of the anilines: Nicholson's soluble blue, 1862.
+		{"nicholson-blue", materials.KindMade, "", "1862", "Carvalho 1904, chronology of the anilines"},
+		// Meldola, Coal and What We Get from It (1891), end of ch. II: methyl violet discovered 1861, manufactured 1866.
+		{"methyl-violet", materials.KindMade, "", "1861", "Meldola 1891, ch. II list"},
+		{"methyl-violet", materials.KindSold, "", "1866", "Meldola 1891, ch. II list"},
+		// Cesaratto et al. 2018, abstract: methyl violet in nishiki-e from 1875.
+		{"methyl-violet", materials.KindArrived, "JP", "1875", "Cesaratto et al. 2018, abstract"},
+		// German Wikipedia, "Kristallviolett", lead: first made deliberately in 1883.
+		{"crystal-violet", materials.KindMade, "", "1883", "de.wikipedia, Kristallviolett"},
+		// Meldola 1891, ch. II list: aniline black introduced 1863.
+		{"aniline-black", materials.KindSold, "", "1863", "Meldola 1891, ch. II list"},
+		// French Wikipedia, "Brun de Bismarck": invented 1863.
+		{"bismarck-brown", materials.KindMade, "", "1863", "fr.wikipedia, Brun de Bismarck"},
+		// Meldola 1891, passage on the first azo colours: discovered by Martius in 1865, introduced 1866.
+		{"bismarck-brown", materials.KindMade, "", "1865", "Meldola 1891, first azo colours"},
+		{"bismarck-brown", materials.KindSold, "", "1866", "Meldola 1891, first azo colours"},
+		// Carvalho 1904, chronology of the anilines: induline made known 1864; nigrosine discovered 1868.
+		{"induline", materials.KindMade, "", "1864", "Carvalho 1904, chronology of the anilines"},
+		{"nigrosine", materials.KindMade, "", "1868", "Carvalho 1904, chronology of the anilines"},
+		// OED, "safranine", quoting Cain and Thorpe 1905: Duprey's French patents of 1865.
+		{"safranine", materials.KindMade, "", "1865", "OED, safranine"},
+		// University of Chicago Library, Origins of Color, Artificial Alizarin: Graebe and Liebermann, 1868.
+		{"synthetic-alizarin", materials.KindMade, "", "1868", "U. Chicago Library, Artificial Alizarin"},
+		// BJHS, "The British chemical industry and the indigo trade", abstract: the patents of June 1869.
+		{"synthetic-alizarin", materials.KindMade, "", "1869", "BJHS, British chemical industry and the indigo trade, abstract"},
+		// Darling, Encyclopedia of Science, "alizarin": made synthetically after 1871.
+		{"synthetic-alizarin", materials.KindSold, "", "1871", "Darling, alizarin"},
+		// Encyclopaedia Britannica, "dye", Xanthene and related dyes: Baeyer's fluorescein, 1871.
+		{"fluorescein", materials.KindMade, "", "1871", "Britannica, dye, Xanthene dyes"},
+		// Encyclopaedia Britannica 11th ed. (1911), "Fluorescein": discovered 1876.
+		{"fluorescein", materials.KindMade, "", "1876", "Britannica 1911, Fluorescein"},
+		// Meldola 1891, passage on the phthaleins: eosin introduced by Caro in 1874.
+		{"eosin", materials.KindSold, "", "1874", "Meldola 1891, phthaleins"},
+		// Carvalho 1904: eosin brought to the United States the year after 1874.
+		{"eosin", materials.KindArrived, "US", "1875", "Carvalho 1904, chronology of the anilines"},
+		// Cesaratto et al. 2018, abstract: eosine in nishiki-e from 1877.
+		{"eosin", materials.KindArrived, "JP", "1877", "Cesaratto et al. 2018, abstract"},
+		// German Wikipedia, "Methylenblau", Historisches: Caro, 1876.
+		{"methylene-blue", materials.KindMade, "", "1876", "de.wikipedia, Methylenblau"},
+		// German Wikipedia, "Malachitgrün": Otto Fischer, 1877.
+		{"malachite-green", materials.KindMade, "", "1877", "de.wikipedia, Malachitgrün"},
+		// Wikipedia, "Erythrosine", History: Kussmaul at Basel, 1876.
+		{"erythrosine", materials.KindMade, "", "1876", "Wikipedia, Erythrosine, History"},
+		// Wikipedia, "Rose bengal", lead: Gnehm, 1882.
+		{"rose-bengal", materials.KindMade, "", "1882", "Wikipedia, Rose bengal"},
+		// Meldola 1891, azo scarlets: Biebrich scarlet, Nietzki 1879.
+		{"biebrich-scarlet", materials.KindMade, "", "1879", "Meldola 1891, azo scarlets"},
+		// Meldola 1891, naphthol azo dyes: the Hoechst Ponceaux of 1878.
+		{"ponceau-2r", materials.KindSold, "", "1878", "Meldola 1891, naphthol azo dyes"},
+		// May, Molecule of the Month (Bristol, 2016), Congo Red: Böttiger, 1883.
+		{"congo-red", materials.KindMade, "", "1883", "May 2016, Congo Red"},
+		// German Wikipedia, "Paul Böttiger": patent of 27 February 1884.
+		{"congo-red", materials.KindMade, "", "1884", "de.wikipedia, Paul Böttiger"},
+		// Arch. Pathol. Lab. Med. 125 (2001), p. 250, abstract: introduced in Berlin in 1885.
+		{"congo-red", materials.KindSold, "", "1885", "APLM 2001, 'Congo' Red, abstract"},
+		// German Wikipedia, "Tartrazin", Geschichte: Ziegler 1884; patented and produced by BASF 1885.
+		{"tartrazine", materials.KindMade, "", "1884", "de.wikipedia, Tartrazin"},
+		{"tartrazine", materials.KindSold, "", "1885", "de.wikipedia, Tartrazin"},
+		// German Wikipedia, "Basic Blue 26", Geschichte: patented by BASF in 1883.
+		{"victoria-blue-b", materials.KindMade, "", "1883", "de.wikipedia, Basic Blue 26"},
+		// Meldola 1891, thio-dyes: primuline found by Green in 1887.
+		{"primuline", materials.KindMade, "", "1887", "Meldola 1891, primuline"},
+		// Wikipedia, "Indigo dye", Era of synthetic indigo: Baeyer's first synthesis, 1878.
+		{"synthetic-indigo", materials.KindMade, "", "1878", "Wikipedia, Indigo dye, Era of synthetic indigo"},
+		// Schmidt, Chemie in unserer Zeit 31 (1997), abstract: Indigo Pure BASF on the market in July 1897.
+		{"synthetic-indigo", materials.KindSold, "", "1897-07", "Schmidt 1997, abstract"},
+		// Miki Sangyo company history: synthetic indigo imported to Japan from 1902.
+		{"synthetic-indigo", materials.KindArrived, "JP", "1902", "Miki Sangyo, company history"},
+		// BASF chronology, 1897: an indigo label for the Chinese market around 1903.
+		{"synthetic-indigo", materials.KindArrived, "CN", "1903~", "BASF chronology, 1897"},
+		// Great Soviet Encyclopedia, "Friedländer, Paul": thioindigo, 1906.
+		{"thioindigo", materials.KindMade, "", "1906", "Great Soviet Encyclopedia, Friedländer"},
+		// Environmental Law Reporter, on the ban of Red No. 2: banned as a US food colour early in 1976.
+		{"amaranth", materials.KindWithdrawn, "US", "1976", "Environmental Law Reporter, Red No. 2"},
+		// German Wikipedia, "Rhodamin B", Verwendung: the US listing as D&C Red No. 19 withdrawn in 1984.
+		{"rhodamine-b", materials.KindWithdrawn, "US", "1984", "de.wikipedia, Rhodamin B"},
+		// From memory, not read here: Colour Index, rhodamine B by Ceresole, 1887.
+		{"rhodamine-b", materials.KindMade, "", "1887", "Colour Index (from memory)"},
+		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
+		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
+	}
+	for _, r := range rows {
+		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
+			want, err := date.Parse(r.want)
+			if err != nil {
+				t.Fatalf("bad expected date %q: %v", r.want, err)
+			}
+			m := dyesLookup(t, d, r.id)
+			if !strings.HasSuffix(m.File, dyesFile) {
+				t.Fatalf("%s comes from %s, want %s", r.id, m.File, dyesFile)
+			}
+			var got []string
+			for _, ms := range m.Claims(r.kind, r.place) {
+				got = append(got, ms.Date.EDTF())
+				if ms.Date.EDTF() == want.EDTF() {
+					return
+				}
+			}
+			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
+		})
+	}
+}
+
+// TestDyesTradeFacts checks facts of the trade (common practice, no source)
+// on this family's entries.
+func TestDyesTradeFacts(t *testing.T) {
+	d := dyesBuiltin(t)
+
+	t.Run("only picric acid is made before 1856, and it says so", func(t *testing.T) {
+		// Common practice: synthetic organic dyes appear from about 1856;
+		// picric acid (1771) is the documented exception.
+		limit := date.Gregorian(1856, 1, 1)
+		early := map[string]bool{}
+		for _, m := range dyesMaterials(d) {
+			first, ok := dyesEarliest(m.Claims(materials.KindMade, ""))
+			if !ok || first >= limit {
+				continue
+			}
+			early[m.ID] = true
+			if !strings.Contains(strings.ToLower(m.Note), "exception") {
+				t.Errorf("%s is made before 1856 but its note does not call it an exception: %q", m.ID, m.Note)
+			}
+		}
+		if len(early) != 1 || !early["picric-acid"] {
+			t.Errorf("materials made before 1856: %v, want only picric-acid", early)
+		}
+	})
+
+	t.Run("variants practitioners keep apart are separate entries", func(t *testing.T) {
+		// Common practice: each pair has its own history and dates.
+		pairs := [][2]string{
+			{"methyl violet", "crystal violet"},
+			{"fluorescein", "eosin"},
+			{"eosin", "erythrosine"},
+			{"malachite green", "Basic Violet 3"},
+			{"synthetic alizarin", "madder"},
+			{"synthetic indigo", "natural indigo"},
+			{"alizarin crimson", "madder lake"},
+			{"aniline yellow", "acid yellow (aminoazobenzene sulphonic acid)"},
+		}
+		for _, p := range pairs {
+			a := dyesLookup(t, d, p[0])
+			b := dyesLookup(t, d, p[1])
+			if a.ID == b.ID {
+				t.Errorf("%q and %q resolve to the same material %s", p[0], p[1], a.ID)
+			}
+		}
+	})
+
+	order := []struct {
+		earlier, later string
+		kind           materials.Kind
+		why            string
+	}{
+		// Common practice: the crude mixture came two decades before the pure compound.
+		{"methyl-violet", "crystal-violet", materials.KindMade, "methyl violet (1861) before crystal violet (1883)"},
+		// Common practice: eosin is brominated fluorescein.
+		{"fluorescein", "eosin", materials.KindMade, "fluorescein before eosin"},
+		// Common practice: the azo dyes begin with aniline yellow.
+		{"aniline-yellow", "chrysoidine", materials.KindSold, "aniline yellow before chrysoidine"},
+		{"aniline-yellow", "congo-red", materials.KindSold, "aniline yellow before the direct dyes"},
+		// Common practice: acid yellow is made from aniline yellow, Biebrich scarlet from acid yellow.
+		{"aniline-yellow", "acid-yellow", materials.KindMade, "aniline yellow before acid yellow"},
+		{"acid-yellow", "biebrich-scarlet", materials.KindMade, "acid yellow before Biebrich scarlet"},
+		// Common practice: synthetic alizarin came a decade before synthetic indigo.
+		{"synthetic-alizarin", "synthetic-indigo", materials.KindSold, "synthetic alizarin before synthetic indigo"},
+		// Common practice: thioindigo follows the indigo synthesis.
+		{"synthetic-indigo", "thioindigo", materials.KindMade, "indigo before thioindigo"},
+		// Common practice: a lake is no older than its dye.
+		{"synthetic-alizarin", "alizarin-crimson", materials.KindMade, "alizarin before its lake"},
+	}
+	for _, o := range order {
+		t.Run(o.why, func(t *testing.T) {
+			a, b := dyesLookup(t, d, o.earlier), dyesLookup(t, d, o.later)
+			ea, okA := dyesEarliest(a.Claims(o.kind, ""))
+			eb, okB := dyesEarliest(b.Claims(o.kind, ""))
+			if !okA || !okB {
+				t.Fatalf("missing %s claims: %s %v, %s %v", o.kind, a.ID, okA, b.ID, okB)
+			}
+			if ea > eb {
+				t.Errorf("%s %s %s is after %s %s", a.ID, o.kind, ea.ISO(), b.ID, eb.ISO())
+			}
+		})
+	}
+
+	t.Run("invention is not availability: synthetic indigo took years to sell", func(t *testing.T) {
+		// Common practice: Baeyer's synthesis and BASF's sale lie about two decades apart.
+		m := dyesLookup(t, d, "synthetic-indigo")
+		made, ok1 := dyesEarliest(m.Claims(materials.KindMade, ""))
+		sold, ok2 := dyesEarliest(m.Claims(materials.KindSold, ""))
+		if !ok1 || !ok2 {
+			t.Fatal("synthetic indigo lacks made or sold claims")
+		}
+		if years := float64(sold-made) / 365.25; years < 15 {
+			t.Errorf("synthetic indigo sold %.1f years after it was made, want at least 15", years)
+		}
+	})
+
+	t.Run("synthetic dyes reached Japan after their first sale", func(t *testing.T) {
+		// Common practice: East Asian printmakers took up the new dyes years after Europe.
+		for _, id := range []string{"fuchsine", "methyl-violet", "eosin", "synthetic-indigo"} {
+			m := dyesLookup(t, d, id)
+			claims, area := d.Arrival(m, "JP")
+			if len(claims) == 0 {
+				t.Errorf("%s has no arrival for JP", id)
+				continue
+			}
+			if area != "JP" {
+				t.Errorf("%s: arrival for JP comes from area %s, want JP itself", id, area)
+			}
+			sold, ok := dyesEarliest(m.Claims(materials.KindSold, ""))
+			arrived, ok2 := dyesEarliest(claims)
+			if !ok || !ok2 {
+				t.Errorf("%s lacks a bounded sold or arrived claim", id)
+				continue
+			}
+			if arrived <= sold {
+				t.Errorf("%s arrived in Japan %s, not after its first sale %s", id, arrived.ISO(), sold.ISO())
+			}
+		}
+	})
+
+	t.Run("an arrival in Japan does not hold for Korea", func(t *testing.T) {
+		// The arrival of a country applies to that country only, not to its neighbours.
+		m := dyesLookup(t, d, "eosin")
+		if claims, area := d.Arrival(m, "KR"); len(claims) != 0 {
+			t.Errorf("eosin has arrival claims for KR from %s: %v", area, claims)
+		}
+	})
+}
+
+// TestDyesFileShape checks what the family promises: its size, arrivals over
+// several regions, withdrawals, disagreeing claims, and that it lints clean
+// and resolves by every name.
+func TestDyesFileShape(t *testing.T) {
+	d := dyesBuiltin(t)
+	for _, p := range materials.Lint(d) {
+		if strings.HasSuffix(p.File, dyesFile) {
+			t.Errorf("lint: %s", p)
+		}
+	}
+	ms := dyesMaterials(d)
+	if len(ms) < 45 {
+		t.Errorf("%d materials in %s, want at least 45", len(ms), dyesFile)
+	}
+	regions := map[string]bool{}
+	var arrivals, withdrawals, milestones, documented, disagreeing int
+	for _, m := range ms {
+		for _, name := range m.Names {
+			got, err := d.Lookup(name)
+			if err != nil {
+				t.Errorf("Lookup(%q): %v", name, err)
+				continue
+			}
+			if got.ID != m.ID {
+				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
+			}
+		}
+		if len(m.Claims(materials.KindMade, "")) == 0 {
+			t.Errorf("%s has no made milestone", m.ID)
+		}
+		groups := map[string]map[string]bool{}
+		for _, x := range m.Milestones {
+			milestones++
+			if x.Basis == materials.BasisDocumented {
+				documented++
+			}
+			if _, ok := d.Source(x.Source); !ok {
+				t.Errorf("%s cites unknown source %q", m.ID, x.Source)
+			}
+			switch x.Kind {
+			case materials.KindArrived:
+				arrivals++
+				regions[x.Place] = true
+			case materials.KindWithdrawn:
+				withdrawals++
+			}
+			k := string(x.Kind) + "@" + x.Place
+			if groups[k] == nil {
+				groups[k] = map[string]bool{}
+			}
+			groups[k][x.Date.EDTF()] = true
+		}
+		for _, dates := range groups {
+			if len(dates) > 1 {
+				disagreeing++
+				break
+			}
+		}
+	}
+	if arrivals < 12 || len(regions) < 4 {
+		t.Errorf("%d arrivals over %d regions (%v), want at least 12 over 4", arrivals, len(regions), regions)
+	}
+	if withdrawals < 4 {
+		t.Errorf("%d withdrawn milestones, want at least 4", withdrawals)
+	}
+	if disagreeing < 5 {
+		t.Errorf("%d materials with disagreeing claims, want at least 5", disagreeing)
+	}
+	if share := float64(documented) / float64(milestones); share < 0.9 {
+		t.Errorf("documented share %.2f, want at least 0.90", share)
+	}
+}
+
+func dyesBuiltin(t *testing.T) *materials.Dataset {
+	t.Helper()
+	d, err := materials.Builtin()
+	if err != nil {
+		t.Fatalf("Builtin: %v", err)
+	}
+	return d
+}
+
+func dyesMaterials(d *materials.Dataset) []*materials.Material {
+	var out []*materials.Material
+	for _, m := range d.Materials {
+		if strings.HasSuffix(m.File, dyesFile) {
+			out = append(out, m)
+		}
+	}
+	return out
+}
+
+func dyesLookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
+	t.Helper()
+	m, err := d.Lookup(name)
+	if err != nil {
+		t.Fatalf("Lookup(%q): %v", name, err)
+	}
+	return m
+}
+
+// dyesEarliest is the earliest first day among claims with a bounded start.
+func dyesEarliest(claims []materials.Milestone) (date.Day, bool) {
+	var best date.Day
+	found := false
+	for _, c := range claims {
+		if first, ok := c.Date.Earliest(); ok && (!found || first < best) {
+			best, found = first, true
+		}
+	}
+	return best, found
+}
