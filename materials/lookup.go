@@ -96,12 +96,22 @@ func (ix *index) nearest(key string, n int) []string {
 		shown string
 		dist  int
 	}
-	limit := max(2, len([]rune(key))/3)
+	kr := []rune(key)
+	limit := max(2, len(kr)/3)
 	best := map[string]cand{}
 	for _, r := range ix.all {
 		dist := levenshtein(key, r.key)
-		if len(key) >= 4 && strings.Contains(r.key, key) {
-			dist = min(dist, 1)
+		if len(key) >= 4 {
+			if strings.Contains(r.key, key) {
+				dist = min(dist, 1)
+			} else if rk := []rune(r.key); len(rk) > len(kr)+1 {
+				// A slip in the first word of a longer name: compare with
+				// the name's start (a letter shorter or longer than the
+				// query), one more for what is left out.
+				for n := len(kr) - 1; n <= len(kr)+1; n++ {
+					dist = min(dist, levenshtein(key, string(rk[:n]))+1)
+				}
+			}
 		}
 		if dist > limit {
 			continue
