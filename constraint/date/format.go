@@ -54,7 +54,11 @@ func append2(b []byte, v int) []byte { return append(b, byte('0'+v/10%10), byte(
 // appendYear writes an EDTF year: four digits with a sign before years
 // below 0, X for unspecified digits, and the Y prefix for years of more
 // than four digits.
-func appendYear(b []byte, y int64, yx uint8) []byte {
+func appendYear(b []byte, y int64, yx uint8) []byte { return appendYearSign(b, y, yx, false) }
+
+// appendYearSign is appendYear with a minus sign also before a year of 0
+// (-00XX, the years -99 to 0).
+func appendYearSign(b []byte, y int64, yx uint8, neg bool) []byte {
 	a := y
 	if a < 0 {
 		a = -a
@@ -63,7 +67,7 @@ func appendYear(b []byte, y int64, yx uint8) []byte {
 		b = append(b, 'Y')
 		return appendInt(b, y)
 	}
-	if y < 0 {
+	if y < 0 || neg {
 		b = append(b, '-')
 	}
 	digits := [4]byte{byte('0' + a/1000), byte('0' + a/100%10), byte('0' + a/10%10), byte('0' + a%10)}
@@ -118,7 +122,7 @@ func appendPoint(b []byte, pt point, role int, sep string) []byte {
 		}
 		return appendQual(b, pt.approx, pt.uncert)
 	}
-	b = appendYear(b, pt.year, pt.yx)
+	b = appendYearSign(b, pt.year, pt.yx, pt.neg)
 	if pt.sig > 0 {
 		b = append(b, 'S')
 		b = appendInt(b, int64(pt.sig))

@@ -18,6 +18,7 @@ const maxYear = 999_999_999_999
 type point struct {
 	year  int64  // astronomical year, X digits read as 0 (187X → 1870, -18XX → -1800)
 	yx    uint8  // unspecified (X) trailing digits of the year
+	neg   bool   // the year was written with a minus sign (it matters for -00XX)
 	month uint8  // 0 none; 1–12 a month; 21–41 a season or other division
 	mx    uint8  // unspecified trailing digits of the month
 	day   uint8  // 0 none
@@ -727,7 +728,7 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 	if neg {
 		v = -v
 	}
-	pt.year = v
+	pt.year, pt.neg = v, neg && pt.yx > 0
 	if i < hi && s[i] == 'S' {
 		if seenX {
 			return i, p.fail(i, "a year with unspecified digits (X) has no significant digits")
@@ -1003,7 +1004,7 @@ func (pt *point) span() {
 		yhi = ylo
 	}
 	if unit > 1 {
-		if ylo < 0 {
+		if ylo < 0 || pt.neg {
 			ylo -= unit - 1
 		} else {
 			yhi += unit - 1
@@ -1204,9 +1205,12 @@ func (p *parser) named(lo, hi int, pt *point) error {
 		}
 	}
 	if month == 0 {
-		k := lo
-		for k < hi && !isLetter(s[k]) {
-			k++
+		k := toks[0].lo
+		for _, tk := range toks[:n] {
+			if p.hasLetter(tk.lo, tk.hi) {
+				k = tk.lo
+				break
+			}
 		}
 		return p.failHint(k, "unexpected word in a date: expected a month name or an EDTF date",
 			"write 21 May 1874, May 1874, 1874-05-21, c. 1870, 1870s or 1200 BCE")
