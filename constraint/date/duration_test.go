@@ -107,14 +107,14 @@ func TestMinMaxDaysBruteForce(t *testing.T) {
 		u        Duration
 		min, max int64 // expected, where known independently
 	}{
-		{Duration{Months: 1}, 28, 31},  // the shortest and longest month (common practice)
-		{Duration{Years: 1}, 365, 366}, // common and leap years (common practice)
+		{Duration{Months: 1}, 28, 31},             // the shortest and longest month (common practice)
+		{Duration{Years: 1}, 365, 366},            // common and leap years (common practice)
 		{Duration{Years: 1, Months: 6}, 546, 550}, // computed here by brute force; the documented figures
-		{Duration{Months: 2}, 59, 62}, // Jan–Feb of a common year; Jul–Aug (common practice)
-		{Duration{Months: 6}, 181, 184}, // January–June of a common year; March–August (common practice)
-		{Duration{Years: 4}, 1460, 1461}, // one 29 February in four years, none across 1900 (common practice)
-		{Duration{Years: 100}, 36524, 36525}, // 24 or 25 leap days in a century (common practice)
-		{Duration{Years: 400}, 146097, 146097}, // the Gregorian cycle (common practice)
+		{Duration{Months: 2}, 59, 62},             // Jan–Feb of a common year; Jul–Aug (common practice)
+		{Duration{Months: 6}, 181, 184},           // January–June of a common year; March–August (common practice)
+		{Duration{Years: 4}, 1460, 1461},          // one 29 February in four years, none across 1900 (common practice)
+		{Duration{Years: 100}, 36524, 36525},      // 24 or 25 leap days in a century (common practice)
+		{Duration{Years: 400}, 146097, 146097},    // the Gregorian cycle (common practice)
 		{Duration{Years: 401, Months: 1, Weeks: 1, Days: 1}, -1, -1},
 		{Duration{Weeks: 2, Days: 3}, 17, 17},
 		{Duration{}, 0, 0},

@@ -46,7 +46,7 @@ func TestParseErrors(t *testing.T) {
 		{"1950S5", 5, "significant digits: 5 is not between 1 and the 4 digits", ""},
 		{"Smarch 1874", 0, "expected a month name or an EDTF date", ""},
 		{"30 February 1874", 0, "day 30: February 1874 has 28 days", ""},
-		{"1874-05-21 (Julian", 12, "unexpected word", ""},
+		{"1874-05-21 (Julian", 11, "unexpected word", ""},
 		{"1234567890123 BCE", 0, "year out of range", ""},
 		{strings.Repeat("1", 2000), 1024, "too long", ""},
 	}
