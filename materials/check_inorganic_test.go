@@ -27,8 +27,12 @@ func TestInorganicAgainstSources(t *testing.T) {
 	}{
 		// Kraft, "The history of Prussian blue", Taylor & Francis chapter, abstract: invented in Berlin in 1706.
 		{"prussian-blue", materials.KindMade, "", "1706", "Kraft, History of Prussian blue, abstract"},
-		// From memory, not read here: Gettens and Stout, Painting Materials (1942), Prussian blue: Diesbach, 1704.
-		{"prussian-blue", materials.KindMade, "", "1704", "Gettens and Stout 1942 (from memory)"},
+		// Buxbaum and Pfaff, Industrial Inorganic Pigments, section 3.6.1: discovered by Diesbach in Berlin in 1704.
+		{"prussian-blue", materials.KindMade, "", "1704", "Buxbaum and Pfaff, Industrial Inorganic Pigments, 3.6.1"},
+		// Degussa, Iron Blue Pigments: Woodward's account of its manufacture, 1726.
+		{"prussian-blue", materials.KindArrived, "GB", "1726", "Degussa, Iron Blue Pigments"},
+		// From memory, not read here: Harley, Artists' Pigments c. 1600-1835: Woodward's method published in 1724.
+		{"prussian-blue", materials.KindArrived, "GB", "1724", "Harley 1982 (from memory)"},
 		// AMICO catalogue record, Hokusai, The Kirifuri Waterfall: Prussian blue introduced into Japan in 1825.
 		{"prussian-blue", materials.KindArrived, "JP", "1825", "AMICO, Hokusai, Kirifuri Waterfall"},
 		// Bailey, Studies in Conservation 57 (2012), abstract: on Canton watercolours sent 1817-1830.
@@ -89,6 +93,18 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// MFA Boston, CAMEO, Lead oxychloride: Turner's patent of 1781; advertised in Boston in 1784.
 		{"turners-yellow", materials.KindSold, "", "1781", "CAMEO, Lead oxychloride"},
 		{"turners-yellow", materials.KindArrived, "US", "1784", "CAMEO, Lead oxychloride"},
+		// Wikipedia, "Paris green", Uses: used against the potato beetle in Illinois and Indiana in 1867.
+		{"emerald-green", materials.KindArrived, "US", "1867", "Wikipedia, Paris green, Uses"},
+		// Free Art Dictionary, Cadmium yellow (after Mayer): in New York by the early 1840s.
+		{"cadmium-yellow", materials.KindArrived, "US", "1840/1843", "Free Art Dictionary, Cadmium yellow"},
+		// Getty AAT, Mars black, scope note: developed in the early 20th century.
+		{"mars-black", materials.KindMade, "", "1900/1933", "Getty AAT, Mars black"},
+		// Wikipedia, "Braunschweigisches Grün" (German): made and sold by the Gravenhorst brothers from 1767.
+		{"brunswick-green", materials.KindSold, "", "1767", "German Wikipedia, Braunschweigisches Grün"},
+		// Scott, Copper and Bronze in Art (Getty, 2002), p. 323: Brunswick green made from around 1795.
+		{"brunswick-green", materials.KindSold, "", "1795~", "Scott 2002, p. 323"},
+		// Texas State Historical Association, Handbook of Texas, Carbon black industry: Wright's process, 1864.
+		{"carbon-black", materials.KindMade, "", "1864", "Handbook of Texas, Carbon black industry"},
 		// Wikipedia, "Manganese violet", History: first documented production by Winsor & Newton in 1890.
 		{"manganese-violet", materials.KindSold, "", "1890", "Wikipedia, Manganese violet, History"},
 	}
