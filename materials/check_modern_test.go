@@ -83,6 +83,35 @@ func TestModernAgainstSources(t *testing.T) {
 		{"nitrocellulose-lacquer-duco", materials.KindSold, "", "1923", "DuPont heritage, Duco"},
 		// Wikipedia, "Alizarine ink": created by Leonhardi in 1855.
 		{"alizarine-ink", materials.KindMade, "", "1855", "Wikipedia, Alizarine ink"},
+		// Encyclopaedia Britannica, biography "Hugh Burgess": the soda process of 1851; US patent 1854.
+		{"soda-pulp-paper", materials.KindMade, "", "1851", "Britannica, Hugh Burgess"},
+		{"soda-pulp-paper", materials.KindArrived, "US", "1854", "Britannica, Hugh Burgess"},
+		// The Apsley Paper Trail, "The cylinder mould machine": Dickinson's machine patented at Apsley in 1809.
+		{"cylinder-mould-machine-paper", materials.KindMade, "", "1809", "Apsley Paper Trail, cylinder mould machine"},
+		// Same page: the type first used by the US paper industry in 1819 (the Smithsonian gives 1817).
+		{"cylinder-mould-machine-paper", materials.KindArrived, "US", "1819", "Apsley Paper Trail, cylinder mould machine"},
+		{"cylinder-mould-machine-paper", materials.KindArrived, "US", "1817", "Smithsonian HistoryWired"},
+		// Wikipedia, "Film stock": Kodak discontinued nitrate base in 1951.
+		{"cellulose-nitrate-film-base", materials.KindWithdrawn, "", "1951", "Wikipedia, Film stock"},
+		// Hazards in Collections, "Nitrate film": Eastman roll film from 1889.
+		{"cellulose-nitrate-film-base", materials.KindMade, "", "1889", "Hazards in Collections, Nitrate film"},
+		// NIOSH Hazard Review: Carbonless Copy Paper, section 1.2: introduced by NCR in 1954; Japanese licence 1962.
+		{"carbonless-copy-paper", materials.KindMade, "", "1954", "NIOSH, Carbonless Copy Paper, 1.2"},
+		{"carbonless-copy-paper", materials.KindArrived, "JP", "1962", "NIOSH, Carbonless Copy Paper, 1.2"},
+		// Birmingham Archives of Soho, "Copying press": the first presses sold in 1780.
+		{"copying-ink", materials.KindSold, "", "1780", "Birmingham Archives of Soho, Copying press"},
+		// Encyclopaedia Britannica, "Bakelite": invented in 1907.
+		{"bakelite", materials.KindMade, "", "1907", "Britannica, Bakelite"},
+		// C&EN 86 (39), 2008: Röhm's organic glass of 1933, sold by Rohm and Haas three years later.
+		{"acrylic-sheet-pmma", materials.KindSold, "", "1936", "C&EN 2008, Plexiglas"},
+		// Winsor & Newton, "Spotlight on: Manganese Blue": barium manganate phased out in the 1970s.
+		{"manganese-blue", materials.KindWithdrawn, "", "197X", "Winsor & Newton, Manganese Blue"},
+		// A. Ludlow (2022), after the Pigment Compendium p. 305: I. G. Farben's phthalocyanine blue of 1936.
+		{"phthalocyanine-blue", materials.KindArrived, "DE", "1936", "Ludlow 2022"},
+		// TIME, 12 February 1979: Paper Mate's erasable Eraser Mate to be launched in spring 1979.
+		{"erasable-ballpoint-ink", materials.KindMade, "", "1979", "TIME, 12 February 1979"},
+		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, toluidine red 1905.
+		{"toluidine-red", materials.KindMade, "", "1905", "Herbst and Hunger 2004 (from memory)"},
 	}
 	for _, r := range rows {
 		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
@@ -121,12 +150,18 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 		{"phthalocyanine-blue", "phthalocyanine-green", materials.KindMade, "phthalocyanine blue before green (common practice)"},
 		// Common practice: solvent acrylics (Magna) came before the water-borne emulsions.
 		{"acrylic-solution-paint", "acrylic-emulsion-paint", materials.KindMade, "solution acrylics before emulsions (common practice)"},
-		// Common practice: nitrate film base came before acetate, and di- before triacetate.
+		// Common practice: diacetate film base came before triacetate.
 		{"cellulose-acetate-film-base", "cellulose-triacetate-film-base", materials.KindMade, "diacetate before triacetate (common practice)"},
 		// Common practice: mechanical wood pulp came before the chemical pulps.
 		{"groundwood-paper", "sulfite-pulp-paper", materials.KindMade, "groundwood before sulphite (common practice)"},
 		// Common practice: hand-made wove paper came before machine-made paper.
 		{"wove-paper", "fourdrinier-machine-paper", materials.KindMade, "wove paper before the paper machine (common practice)"},
+		// Common practice: the soda process came before the sulphate (kraft) process that grew out of it.
+		{"soda-pulp-paper", "kraft-pulp-paper", materials.KindMade, "soda before kraft (common practice)"},
+		// Common practice: nitrate film base came before the acetate safety bases.
+		{"cellulose-nitrate-film-base", "cellulose-acetate-film-base", materials.KindMade, "nitrate before acetate (common practice)"},
+		// Common practice: acetate safety bases came before polyester.
+		{"cellulose-triacetate-film-base", "polyester-film-base", materials.KindMade, "triacetate before polyester (common practice)"},
 		// Common practice: the felt marker came before the fine fibre-tip pen.
 		{"felt-tip-marker-ink", "fibre-tip-pen-ink", materials.KindMade, "felt marker before fibre tip (common practice)"},
 	}
