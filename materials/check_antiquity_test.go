@@ -80,6 +80,16 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"verdigris", materials.KindMade, "", "-0299~", "Gettens and Stout 1942, p. 169"},
 		// Oxford Herbaria, Plants400, Carthamus: oldest safflower dyes outside Egypt on 8th-century Japanese textiles.
 		{"safflower", materials.KindArrived, "JP", "07XX", "Oxford Plants400, Carthamus"},
+		// Scottish National Dictionary, entry Cudbear: Woodcroft's index of patents, 1758.
+		{"cudbear", materials.KindMade, "", "1758", "Scottish National Dictionary, Cudbear"},
+		// MFA Boston, CAMEO, entry Mosaic gold: replaced by bronze powders in the mid-19th century.
+		{"mosaic-gold", materials.KindWithdrawn, "", "1850~", "CAMEO, Mosaic gold"},
+		// Dodge, Itinerario (2024), title: the Atlantic logwood trade, 1550-1775.
+		{"logwood", materials.KindArrived, "150", "1550~", "Dodge 2024, title and abstract"},
+		// Radini et al., Science Advances 5 (2019), abstract: lapis lazuli in dental calculus, Germany, 11th or early 12th century.
+		{"natural-ultramarine", materials.KindArrived, "DE", "0997/1162", "Radini et al. 2019, abstract"},
+		// Wikipedia, "Mosaic gold", lead section: recipe in Ge Hong's 3rd-century Baopuzi.
+		{"mosaic-gold", materials.KindMade, "", "02XX", "Wikipedia, Mosaic gold"},
 		// From memory, not read here: Harley-era handbook date for Naples yellow as a painter's pigment (Artists' Pigments vol. 1).
 		{"naples-yellow", materials.KindSold, "", "16XX", "Artists' Pigments vol. 1 (from memory)"},
 	}
