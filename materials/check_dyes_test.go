@@ -120,6 +120,19 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"synthetic-indigo", materials.KindArrived, "CN", "1903~", "BASF chronology, 1897"},
 		// Great Soviet Encyclopedia, "Friedländer, Paul": thioindigo, 1906.
 		{"thioindigo", materials.KindMade, "", "1906", "Great Soviet Encyclopedia, Friedländer"},
+		// Meldola 1891, on the methylated anilines: the bluer, benzylated methyl violet of 1868.
+		{"methyl-violet-6b", materials.KindMade, "", "1868", "Meldola 1891, methylated anilines"},
+		// Meldola 1891, naphthol azo dyes: Roussin and Poirrier's archil substitute of 1878.
+		{"archil-substitute", materials.KindSold, "", "1878", "Meldola 1891, naphthol azo dyes"},
+		// German Wikipedia, "Patentblau V": patented by Meister, Lucius & Brüning in 1888.
+		{"patent-blue-v", materials.KindMade, "", "1888", "de.wikipedia, Patentblau V"},
+		// MFA Boston, CAMEO, "Sulfur dye": cachou de Laval 1873, Vidal black 1893.
+		{"cachou-de-laval", materials.KindMade, "", "1873", "CAMEO, Sulfur dye"},
+		{"vidal-black", materials.KindMade, "", "1893", "CAMEO, Sulfur dye"},
+		// MFA Boston, CAMEO, "Indanthrone blue": first prepared by Bohn in 1901.
+		{"indanthrone", materials.KindMade, "", "1901", "CAMEO, Indanthrone blue"},
+		// texdata.com, "100 years of Indanthren dyes": first mentioned at BASF in January 1901.
+		{"indanthrone", materials.KindMade, "", "1901-01", "texdata 2001, 100 years of Indanthren dyes"},
 		// Environmental Law Reporter, on the ban of Red No. 2: banned as a US food colour early in 1976.
 		{"amaranth", materials.KindWithdrawn, "US", "1976", "Environmental Law Reporter, Red No. 2"},
 		// German Wikipedia, "Rhodamin B", Verwendung: the US listing as D&C Red No. 19 withdrawn in 1984.
@@ -180,6 +193,7 @@ func TestDyesTradeFacts(t *testing.T) {
 		// Common practice: each pair has its own history and dates.
 		pairs := [][2]string{
 			{"methyl violet", "crystal violet"},
+			{"methyl violet 6B", "crystal violet"},
 			{"fluorescein", "eosin"},
 			{"eosin", "erythrosine"},
 			{"malachite green", "Basic Violet 3"},
@@ -290,8 +304,8 @@ func TestDyesFileShape(t *testing.T) {
 		}
 	}
 	ms := dyesMaterials(d)
-	if len(ms) < 45 {
-		t.Errorf("%d materials in %s, want at least 45", len(ms), dyesFile)
+	if len(ms) < 55 {
+		t.Errorf("%d materials in %s, want at least 55", len(ms), dyesFile)
 	}
 	regions := map[string]bool{}
 	var arrivals, withdrawals, milestones, documented, disagreeing int
