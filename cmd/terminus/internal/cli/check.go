@@ -23,8 +23,12 @@ func writerFor(format string) (func(io.Writer, *constraint.Result) error, error)
 		return report.Markdown, nil
 	case "json":
 		return report.JSON, nil
+	case "html":
+		return report.HTML, nil
+	case "svg":
+		return report.SVG, nil
 	}
-	return nil, fmt.Errorf("unknown --format %q: expected text, md or json", format)
+	return nil, fmt.Errorf("unknown --format %q: expected text, md, json, html or svg", format)
 }
 
 // parseTier reads a --fail-on value.
@@ -143,7 +147,7 @@ stronger one; 2 for bad input.`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVarP(&format, "format", "f", "text", "output format: text, md or json")
+	f.StringVarP(&format, "format", "f", "text", "output format: text, md, json, html (a page with the timeline) or svg (the timeline alone)")
 	f.StringArrayVar(&matFiles, "materials", nil, "a materials file (YAML or TOML) to add over the built-in dataset; repeatable")
 	f.StringVar(&failOn, "fail-on", "soft", "exit 1 when a claim fails or the evidence conflicts at this tier or a stronger one: hard, firm or soft")
 	f.IntVar(&maxConflicts, "max-conflicts", 10, "the most minimal conflicts to list per tier")
