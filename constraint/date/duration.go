@@ -168,22 +168,34 @@ func (u Duration) spanRange() (int64, int64) {
 	s := int64(Gregorian(ys, ms, 1))
 	t := int64(Gregorian(yt, mt, 1))
 	lo, hi := int64(1)<<62, int64(-1)<<62
+	leapS, leapT := IsLeap(ys), IsLeap(yt)
 	for k := 0; k < 4800; k++ {
-		ds, dt := DaysInMonth(ys, ms), DaysInMonth(yt, mt)
+		ds, dt := int(monthDays[ms]), int(monthDays[mt])
+		if ms == 2 && leapS {
+			ds++
+		}
+		if mt == 2 && leapT {
+			dt++
+		}
 		hi = max(hi, t-s)
 		lo = min(lo, t-s+int64(min(ds, dt)-ds))
 		s += int64(ds)
 		t += int64(dt)
 		if ms++; ms == 13 {
 			ms, ys = 1, ys+1
+			leapS = IsLeap(ys)
 		}
 		if mt++; mt == 13 {
 			mt, yt = 1, yt+1
+			leapT = IsLeap(yt)
 		}
 	}
 	base := cycles*146097 + fixed
 	return lo + base, hi + base
 }
+
+// monthDays holds the lengths of the months of a common year, from index 1.
+var monthDays = [13]uint8{0, 31, 28, 31, 30, 31, 30, 31, 31, 30, 31, 30, 31}
 
 // Circa is the widening policy for approximate ("~") dates: how far each
 // approximate end of a date moves out, by the precision it was written in.
@@ -218,7 +230,17 @@ func (c Circa) For(p Precision) Duration {
 	if u, ok := c[p]; ok {
 		return u
 	}
-	return DefaultCirca()[p]
+	switch p {
+	case PrecisionDay:
+		return Duration{Days: 7}
+	case PrecisionMonth, PrecisionSeason:
+		return Duration{Months: 1}
+	case PrecisionYear, PrecisionDecade:
+		return Duration{Years: 5}
+	case PrecisionCentury:
+		return Duration{Years: 25}
+	}
+	return Duration{Years: 100}
 }
 
 // String lists the policy in precision order, with defaults filled in:
@@ -262,13 +284,23 @@ func (d Date) Widen(c Circa) Date {
 	if len(d.members) == 0 {
 		return d
 	}
+	var memo [PrecisionMillennium + 1]int64 // MaxDays per precision, +1 so that 0 means not yet
+	by := func(p Precision) Day {
+		if p > PrecisionMillennium {
+			p = PrecisionMillennium
+		}
+		if memo[p] == 0 {
+			memo[p] = c.For(p).MaxDays() + 1
+		}
+		return Day(memo[p] - 1)
+	}
 	d.Alternatives = alternatives(d.members, func(m member) Interval {
 		iv := m.interval()
 		if !iv.OpenStart && m.start.approx {
-			iv.First -= Day(c.For(m.start.prec).MaxDays())
+			iv.First -= by(m.start.prec)
 		}
 		if !iv.OpenEnd && m.end.approx {
-			iv.Last += Day(c.For(m.end.prec).MaxDays())
+			iv.Last += by(m.end.prec)
 		}
 		return iv
 	})

@@ -55,11 +55,12 @@ func TestParseDuration(t *testing.T) {
 	}
 }
 
-// naiveAdd adds months one at a time, clamping the day at the end only,
+// naiveAdd adds the years, then the months one at a time, clamping the day at the end only,
 // then days: an independent version of Duration.AddTo.
 func naiveAdd(u Duration, d Day) Day {
 	y, m, dd := d.Civil()
-	for k := int64(0); k < u.Years*12+u.Months; k++ {
+	y += u.Years
+	for k := int64(0); k < u.Months; k++ {
 		m++
 		if m == 13 {
 			m, y = 1, y+1

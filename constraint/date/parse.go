@@ -162,8 +162,10 @@ func (p *parser) top(lo, hi int) ([]member, bool, error) {
 		return nil, false, p.failHint(lo, "an all-of set {…} names several dates at once; a date here is one run of days",
 			"for one of several dates write a one-of set: [1667,1668]")
 	}
-	if ms, ok, err := p.bound(lo, hi); ok {
-		return ms, false, err
+	if c := s[lo] | 0x20; c >= 'a' && c <= 'z' {
+		if ms, ok, err := p.bound(lo, hi); ok {
+			return ms, false, err
+		}
 	}
 	if k := strings.IndexByte(s[lo:hi], '/'); k >= 0 {
 		m, err := p.interval(lo, lo+k, hi)
@@ -277,9 +279,21 @@ func (p *parser) pointAt(d Day, like point) point {
 // of the second.
 func (p *parser) rangeSplit(lo, hi int) (int, int, bool) {
 	s := p.in[lo:hi]
-	for _, sep := range []string{" – ", "–", " — ", "—", " - ", " to "} {
-		if k := indexFold(s, sep); k > 0 {
-			return lo + k, lo + k + len(sep), true
+	plain := true // no space and nothing but ASCII: only "1870-1875" can match
+	for i := 0; i < len(s); i++ {
+		if s[i] == ' ' || s[i] >= 0x80 {
+			plain = false
+			break
+		}
+	}
+	if !plain {
+		for _, sep := range []string{" – ", "–", " — ", "—", " - "} {
+			if k := strings.Index(s, sep); k > 0 {
+				return lo + k, lo + k + len(sep), true
+			}
+		}
+		if k := indexFold(s, " to "); k > 0 {
+			return lo + k, lo + k + len(" to "), true
 		}
 	}
 	// 1870-1875 and 1870s-1880s: a year (or decade), a hyphen, four digits.
@@ -437,8 +451,12 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		return member{}, p.failHint(lo, "expected a date", "write a year (1874), a month (1874-05) or a day (1874-05-21)")
 	}
 	var approx, uncert, friendlyForm bool
+	word := isLetter(s[lo]) // only then can a friendly word lead
 	// A circa word: "c. 1870", "c.1870", "ca 1870", "circa 1870".
 	for _, w := range circaWords {
+		if !word {
+			break
+		}
 		if !hasFold(s, lo, hi, w) {
 			continue
 		}
@@ -456,6 +474,9 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 	// Early, mid, late.
 	frac := 0
 	for i, w := range []string{"early", "mid", "late"} {
+		if !word {
+			break
+		}
 		if hasFold(s, lo, hi, w) && lo+len(w) < hi && (isSpace(s[lo+len(w)]) || s[lo+len(w)] == '-') {
 			frac = i + 1
 			lo, hi = p.trim(lo+len(w)+1, hi)
@@ -487,7 +508,10 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 	}
 	var pt point
 	pt.cal = p.cal
-	era, eraLo, eraHi := p.era(lo, hi)
+	era, eraLo, eraHi := 0, 0, 0
+	if c := s[hi-1] | 0x20; (c >= 'a' && c <= 'z') || c == '.' || isLetter(s[lo]) {
+		era, eraLo, eraHi = p.era(lo, hi)
+	}
 	switch {
 	case era != 0:
 		if era == eraAD && eraLo == lo {
