@@ -133,6 +133,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"indanthrone", materials.KindMade, "", "1901", "CAMEO, Indanthrone blue"},
 		// texdata.com, "100 years of Indanthren dyes": first mentioned at BASF in January 1901.
 		{"indanthrone", materials.KindMade, "", "1901-01", "texdata 2001, 100 years of Indanthren dyes"},
+		// Meldola 1891, azo colours from azobenzene: the old aniline yellow no longer used (1891).
+		{"aniline-yellow", materials.KindWithdrawn, "", "1891", "Meldola 1891, azo colours from azobenzene"},
 		// Environmental Law Reporter, on the ban of Red No. 2: banned as a US food colour early in 1976.
 		{"amaranth", materials.KindWithdrawn, "US", "1976", "Environmental Law Reporter, Red No. 2"},
 		// German Wikipedia, "Rhodamin B", Verwendung: the US listing as D&C Red No. 19 withdrawn in 1984.
