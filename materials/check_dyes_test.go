@@ -135,6 +135,12 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"indanthrone", materials.KindMade, "", "1901-01", "texdata 2001, 100 years of Indanthren dyes"},
 		// Meldola 1891, azo colours from azobenzene: the old aniline yellow no longer used (1891).
 		{"aniline-yellow", materials.KindWithdrawn, "", "1891", "Meldola 1891, azo colours from azobenzene"},
+		// LAGIS Hessen, licence for the Höchst tar-dye works (1862): fuchsine from January 1863, aldehyde green from 1864, alizarin on the market in 1869.
+		{"fuchsine", materials.KindArrived, "DE", "1863-01", "LAGIS Hessen, Höchst works licence"},
+		{"aldehyde-green", materials.KindSold, "", "1864", "LAGIS Hessen, Höchst works licence"},
+		{"synthetic-alizarin", materials.KindSold, "", "1869", "LAGIS Hessen, Höchst works licence"},
+		// WDR Stichtag, founding of Bayer: fuchsine of their own after experiments from 1861.
+		{"fuchsine", materials.KindArrived, "DE", "1861/1862", "WDR Stichtag, Bayer"},
 		// Environmental Law Reporter, on the ban of Red No. 2: banned as a US food colour early in 1976.
 		{"amaranth", materials.KindWithdrawn, "US", "1976", "Environmental Law Reporter, Red No. 2"},
 		// German Wikipedia, "Rhodamin B", Verwendung: the US listing as D&C Red No. 19 withdrawn in 1984.
@@ -354,8 +360,8 @@ func TestDyesFileShape(t *testing.T) {
 			}
 		}
 	}
-	if arrivals < 12 || len(regions) < 4 {
-		t.Errorf("%d arrivals over %d regions (%v), want at least 12 over 4", arrivals, len(regions), regions)
+	if arrivals < 14 || len(regions) < 5 {
+		t.Errorf("%d arrivals over %d regions (%v), want at least 14 over 5", arrivals, len(regions), regions)
 	}
 	if withdrawals < 4 {
 		t.Errorf("%d withdrawn milestones, want at least 4", withdrawals)
