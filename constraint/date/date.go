@@ -112,6 +112,18 @@ func (d Date) Latest() (Day, bool) {
 	return d.Alternatives[len(d.Alternatives)-1].Last, true
 }
 
+// Calendar returns the calendar d was written in: [CalendarJulian] when
+// it was marked or read as Julian (its days are converted all the same).
+func (d Date) Calendar() Calendar {
+	for _, m := range d.members {
+		if m.kind&(openStart|unknownStart) == 0 {
+			return m.start.cal
+		}
+		return m.end.cal
+	}
+	return CalendarGregorian
+}
+
 // Widened reports whether d is the result of [Date.Widen].
 func (d Date) Widened() bool { return d.widened }
 

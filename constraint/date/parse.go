@@ -793,8 +793,12 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 			}
 			m := (c0-'0')*10 + c1 - '0'
 			if m == 0 || (m > 12 && m < 21) || m > 41 {
-				return j, p.failHint(j, "month "+s[j:j+2]+": months are 01–12, seasons 21–24 (and 25–41, ISO 8601-2 divisions of the year)",
-					"for a range of years write 1870/1875")
+				e := p.fail(j, "month "+s[j:j+2]+": months are 01–12, seasons 21–24 (and 25–41, ISO 8601-2 divisions of the year)")
+				if n == 4 && !neg && i == hi && int64(m) > v%100 {
+					// 1870-75: most likely a range of years written short.
+					e.hint = "for a range of years write " + s[j-5:j-1] + "/" + s[j-5:j-3] + s[j:j+2]
+				}
+				return j, e
 			}
 			pt.month = m
 		}

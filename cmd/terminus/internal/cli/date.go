@@ -1,8 +1,205 @@
 package cli
 
-import "github.com/spf13/cobra"
+import (
+	"fmt"
+	"io"
+	"strings"
 
-// NewDateCmd builds "terminus date" (placeholder until the date command is written).
+	"github.com/spf13/cobra"
+
+	"terminus/constraint/date"
+)
+
+// NewDateCmd builds "terminus date": how date expressions are read.
 func NewDateCmd(s IO) *cobra.Command {
-	return &cobra.Command{Use: "date EXPR...", Short: "Show how date expressions are read"}
+	var format string
+	var julian bool
+	cmd := &cobra.Command{
+		Use:   "date EXPR...",
+		Short: "Show how date expressions are read",
+		Long: `Show how each date expression is read: its canonical EDTF form, the first
+and last day it can be (proleptic Gregorian calendar, astronomical years:
+0000 is 1 BCE), its precision and qualifiers, the alternatives of a one-of
+set, and how far the default circa policy widens an approximate date.
+
+Expressions are EDTF (1874, 1874-05-21, 187X, 1874~, 1870/1879, ../1900,
+[1667,1668,1670..1672]) or friendly forms (c. 1870, 1870s, early 1870s,
+1200 BCE, AD 79, before 1900, after 1850, 1870-1875, 21 May 1874). Quote an
+expression that holds spaces. A date ending in "(Julian)" or "O.S." is on
+the Julian calendar; --julian reads every unmarked date so.`,
+		Example: `  terminus date 1874 "c. 1870" "early 1870s" "1200 BCE"
+  terminus date --format json "[1667,1668,1670..1672]"
+  terminus date "1582-10-04 (Julian)"`,
+		Args: cobra.MinimumNArgs(1),
+		RunE: func(c *cobra.Command, args []string) error {
+			if format != "text" && format != "json" {
+				return usageError(fmt.Errorf("unknown --format %q: expected text or json", format))
+			}
+			cal := date.CalendarGregorian
+			if julian {
+				cal = date.CalendarJulian
+			}
+			ds := make([]date.Date, 0, len(args))
+			for _, a := range args {
+				d, err := date.ParseIn(a, cal)
+				if err != nil {
+					return usageError(err)
+				}
+				ds = append(ds, d)
+			}
+			circa := date.DefaultCirca()
+			if format == "json" {
+				out := dateListJSON{SchemaVersion: 1, Circa: circa.String()}
+				for _, d := range ds {
+					out.Dates = append(out.Dates, newDateJSON(d, circa))
+				}
+				return writeJSON(s.Out, out)
+			}
+			return writeDatesText(s.Out, ds, circa)
+		},
+	}
+	cmd.Flags().StringVarP(&format, "format", "f", "text", "output format: text or json")
+	cmd.Flags().BoolVar(&julian, "julian", false, "read unmarked dates on the Julian calendar")
+	return cmd
+}
+
+type dateListJSON struct {
+	SchemaVersion int        `json:"schema_version"`
+	Circa         string     `json:"circa"`
+	Dates         []dateJSON `json:"dates"`
+}
+
+type endJSON struct {
+	Approximate bool `json:"approximate"`
+	Uncertain   bool `json:"uncertain"`
+}
+
+type dateJSON struct {
+	Input        string       `json:"input"`
+	EDTF         string       `json:"edtf"`
+	Text         string       `json:"text"`
+	Calendar     string       `json:"calendar"`
+	Precision    string       `json:"precision"`
+	First        *string      `json:"first"`
+	Last         *string      `json:"last"`
+	Approximate  bool         `json:"approximate"`
+	Uncertain    bool         `json:"uncertain"`
+	Start        endJSON      `json:"start"`
+	End          endJSON      `json:"end"`
+	Alternatives [][2]*string `json:"alternatives,omitempty"`
+	Widened      *[2]*string  `json:"widened,omitempty"`
+}
+
+func isoOrNil(d date.Day, ok bool) *string {
+	if !ok {
+		return nil
+	}
+	s := d.ISO()
+	return &s
+}
+
+func newDateJSON(d date.Date, circa date.Circa) dateJSON {
+	sa, su, ea, eu := d.QualifiedEnds()
+	j := dateJSON{
+		Input:       d.Input,
+		EDTF:        d.EDTF(),
+		Text:        d.String(),
+		Calendar:    d.Calendar().String(),
+		Precision:   d.Precision.String(),
+		First:       isoOrNil(d.Earliest()),
+		Last:        isoOrNil(d.Latest()),
+		Approximate: d.Approximate,
+		Uncertain:   d.Uncertain,
+		Start:       endJSON{sa, su},
+		End:         endJSON{ea, eu},
+	}
+	if d.OneOf {
+		j.Alternatives = [][2]*string{}
+		for _, a := range d.Alternatives {
+			j.Alternatives = append(j.Alternatives, [2]*string{isoOrNil(a.First, !a.OpenStart), isoOrNil(a.Last, !a.OpenEnd)})
+		}
+	}
+	if d.Approximate {
+		w := d.Widen(circa)
+		j.Widened = &[2]*string{isoOrNil(w.Earliest()), isoOrNil(w.Latest())}
+	}
+	return j
+}
+
+// dayText writes a day, or "open" for an unbounded end.
+func dayText(d date.Day, ok bool) string {
+	if !ok {
+		return "open"
+	}
+	return d.ISO()
+}
+
+func writeDatesText(w io.Writer, ds []date.Date, circa date.Circa) error {
+	var b strings.Builder
+	for i, d := range ds {
+		if i > 0 {
+			b.WriteByte('\n')
+		}
+		row := func(k, v string) { fmt.Fprintf(&b, "  %-12s %s\n", k, v) }
+		fmt.Fprintf(&b, "%s\n", d.Input)
+		row("EDTF", d.EDTF())
+		row("reads as", d.String())
+		if d.Calendar() == date.CalendarJulian {
+			row("calendar", "Julian, converted to Gregorian days")
+		}
+		row("first day", dayText(d.Earliest()))
+		row("last day", dayText(d.Latest()))
+		row("precision", d.Precision.String())
+		row("qualifiers", qualifierText(d))
+		if d.OneOf {
+			for k, a := range d.Alternatives {
+				label := ""
+				if k == 0 {
+					label = "one of"
+				}
+				row(label, dayText(a.First, !a.OpenStart)+" to "+dayText(a.Last, !a.OpenEnd))
+			}
+		}
+		if d.Approximate {
+			wd := d.Widen(circa)
+			f, fok := wd.Earliest()
+			l, lok := wd.Latest()
+			row("circa", dayText(f, fok)+" to "+dayText(l, lok)+" (default policy: "+circa.For(d.Precision).String()+" for a "+d.Precision.String()+")")
+		}
+	}
+	_, err := io.WriteString(w, b.String())
+	return err
+}
+
+func qualifierText(d date.Date) string {
+	sa, su, ea, eu := d.QualifiedEnds()
+	if !d.Approximate && !d.Uncertain {
+		return "none"
+	}
+	end := func(a, u bool) string {
+		switch {
+		case a && u:
+			return "approximate and uncertain"
+		case a:
+			return "approximate"
+		case u:
+			return "uncertain"
+		}
+		return "exact"
+	}
+	s, e := end(sa, su), end(ea, eu)
+	if s == e && !d.OneOf {
+		return s
+	}
+	if d.OneOf {
+		q := []string{}
+		if d.Approximate {
+			q = append(q, "approximate")
+		}
+		if d.Uncertain {
+			q = append(q, "uncertain")
+		}
+		return strings.Join(q, " and ") + " (some members)"
+	}
+	return "start " + s + ", end " + e
 }
