@@ -37,6 +37,11 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"prussian-blue", materials.KindArrived, "JP", "1825", "AMICO, Hokusai, Kirifuri Waterfall"},
 		// Bailey, Studies in Conservation 57 (2012), abstract: on Canton watercolours sent 1817-1830.
 		{"prussian-blue", materials.KindArrived, "CN", "1817/1830", "Bailey 2012, abstract"},
+		// Seldes et al., JAIC 38 (1999), Conclusions: not in Cuzco paintings before 1770; first South American record 1789.
+		{"prussian-blue", materials.KindArrived, "PE", "1770~", "Seldes et al. 1999, Conclusions"},
+		{"prussian-blue", materials.KindArrived, "005", "1789", "Seldes et al. 1999, Conclusions"},
+		// Journal of Color Science and Technology, Qajar penboxes, abstract: chrome green places a work after the mid-19th century.
+		{"chrome-green", materials.KindArrived, "IR", "1850~", "JCST, Qajar penboxes, abstract"},
 		// Wikipedia, "Scheele's green", lead section: invented by Scheele in 1775.
 		{"scheeles-green", materials.KindMade, "", "1775", "Wikipedia, Scheele's green, lead"},
 		// Gettens and Stout, Painting Materials (1942), p. 113, Emerald green: first made at Schweinfurt in 1814.
