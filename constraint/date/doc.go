@@ -91,6 +91,15 @@
 //	not before 1850, no earlier than 1850,
 //	from 1850, since 1850                       1850/..  (inclusive)
 //
+//	May 1874, 21 May 1874, May 21, 1874, Sept. 1874
+//	                                            1874-05, 1874-05-21, 1874-09
+//
+// In a range written with a dash or "to", an era written after the second
+// year only applies to both ("1200-1100 BCE" is -1199/-1099), and so does
+// a circa word before the first only ("c. 1870-1875" is 1870~/1875~); an
+// EDTF interval with "/" keeps its qualifiers per end ("c. 1870/1879" is
+// 1870~/1879).
+//
 // "Early", "mid" and "late" are thirds of the decade or century that
 // overlap by one year at the seams, so a year at a seam belongs to both.
 // "Before" and "after" are strict at the precision written: before

@@ -65,8 +65,9 @@ func (m member) interval() Interval {
 }
 
 type parser struct {
-	in  string
-	cal Calendar
+	in   string
+	cal  Calendar
+	era2 int // an era that a bare year takes from the other end of a range
 }
 
 func (p *parser) fail(pos int, msg string) *ParseError {
@@ -296,23 +297,55 @@ func (p *parser) rangeSplit(lo, hi int) (int, int, bool) {
 			return lo + k, lo + k + len(" to "), true
 		}
 	}
-	// 1870-1875 and 1870s-1880s: a year (or decade), a hyphen, four digits.
-	i := 0
-	for i < len(s) && isDigit(s[i]) {
-		i++
-	}
-	if i == 4 && i+1 < len(s) && s[i] == 's' {
-		i++
-	}
-	if i >= 4 && i+5 <= len(s) && s[i] == '-' && isDigit(s[i+1]) && isDigit(s[i+2]) && isDigit(s[i+3]) && isDigit(s[i+4]) {
-		return lo + i, lo + i + 1, true
+	// 1870-1875 and 1870s-1880s: a year (or decade), a hyphen, four digits
+	// (never EDTF, whose months have two digits).
+	for k := 4; k+5 <= len(s); k++ {
+		if s[k] != '-' || !allDigits(s[k+1:k+5]) || (k+5 < len(s) && (isDigit(s[k+5]) || s[k+5] == '-')) {
+			continue
+		}
+		e := k
+		if s[e-1] == 's' {
+			e--
+		}
+		if e >= 4 && allDigits(s[e-4:e]) && (e == 4 || !isDigit(s[e-5])) {
+			return lo + k, lo + k + 1, true
+		}
 	}
 	return 0, 0, false
 }
 
+func allDigits(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if !isDigit(s[i]) {
+			return false
+		}
+	}
+	return len(s) > 0
+}
+
+// circaWord reports whether s[lo:hi] begins with a circa word.
+func (p *parser) circaWord(lo, hi int) bool {
+	lo, hi = p.trim(lo, hi)
+	for _, w := range circaWords {
+		if hasFold(p.in, lo, hi, w) {
+			return true
+		}
+	}
+	return hi-lo > 2 && (p.in[lo]|0x20) == 'c' && isSpace(p.in[lo+1])
+}
+
 // span reads a two-part friendly range whose parts are [lo,a) and [b,hi).
+// An era after the second part only ("1200-1100 BCE") applies to both,
+// and so does a circa word before the first part only ("c. 1870-1875").
 func (p *parser) span(lo, a, b, hi int) (member, error) {
+	x, y := p.trim(b, hi)
+	if era, _, _ := p.era(x, y); era == eraBCE {
+		if e, _, _ := p.era(p.trim(lo, a)); e == 0 {
+			p.era2 = eraBCE
+		}
+	}
 	m1, err := p.pointish(lo, a)
+	p.era2 = 0
 	if err != nil {
 		return member{}, err
 	}
@@ -321,6 +354,9 @@ func (p *parser) span(lo, a, b, hi int) (member, error) {
 		return member{}, err
 	}
 	m := member{start: m1.start, end: m2.end, kind: ranged}
+	if p.circaWord(lo, a) && !p.circaWord(b, hi) {
+		m.end.approx = true
+	}
 	return m, p.ordered(m, a)
 }
 
@@ -511,6 +547,9 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 	era, eraLo, eraHi := 0, 0, 0
 	if c := s[hi-1] | 0x20; (c >= 'a' && c <= 'z') || c == '.' || isLetter(s[lo]) {
 		era, eraLo, eraHi = p.era(lo, hi)
+	}
+	if era == 0 && p.era2 != 0 && allDigits(s[lo:hi]) {
+		era, eraLo, eraHi = p.era2, hi, hi
 	}
 	switch {
 	case era != 0:
