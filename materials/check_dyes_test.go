@@ -141,6 +141,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"synthetic-alizarin", materials.KindSold, "", "1869", "LAGIS Hessen, Höchst works licence"},
 		// WDR Stichtag, founding of Bayer: fuchsine of their own after experiments from 1861.
 		{"fuchsine", materials.KindArrived, "DE", "1861/1862", "WDR Stichtag, Bayer"},
+		// "Woulfe Discovers Picric Acid", Summary of Event: Barth's sulphonated indigo of 1744.
+		{"indigo-carmine", materials.KindMade, "", "1744", "Woulfe Discovers Picric Acid, Summary of Event"},
 		// Environmental Law Reporter, on the ban of Red No. 2: banned as a US food colour early in 1976.
 		{"amaranth", materials.KindWithdrawn, "US", "1976", "Environmental Law Reporter, Red No. 2"},
 		// German Wikipedia, "Rhodamin B", Verwendung: the US listing as D&C Red No. 19 withdrawn in 1984.
@@ -179,10 +181,14 @@ func TestDyesTradeFacts(t *testing.T) {
 
 	t.Run("only picric acid is made before 1856, and it says so", func(t *testing.T) {
 		// Common practice: synthetic organic dyes appear from about 1856;
-		// picric acid (1771) is the documented exception.
+		// picric acid (1771) is the documented exception. Semi-synthetic
+		// derivatives of natural dyes (indigo carmine) are older by nature.
 		limit := date.Gregorian(1856, 1, 1)
 		early := map[string]bool{}
 		for _, m := range dyesMaterials(d) {
+			if m.Origin != "synthetic" {
+				continue
+			}
 			first, ok := dyesEarliest(m.Claims(materials.KindMade, ""))
 			if !ok || first >= limit {
 				continue
@@ -207,6 +213,7 @@ func TestDyesTradeFacts(t *testing.T) {
 			{"malachite green", "Basic Violet 3"},
 			{"synthetic alizarin", "madder"},
 			{"synthetic indigo", "natural indigo"},
+			{"indigo carmine", "synthetic indigo"},
 			{"alizarin crimson", "madder lake"},
 			{"aniline yellow", "acid yellow (aminoazobenzene sulphonic acid)"},
 		}
