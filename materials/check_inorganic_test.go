@@ -69,8 +69,12 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"viridian", materials.KindMade, "", "1835", "Palazzo Spinelli, ArgoMed 2644"},
 		// Wikipedia, "Viridian", History: Guignet's patented process of 1859.
 		{"viridian", materials.KindSold, "", "1859", "Wikipedia, Viridian, History"},
-		// KIK-IRPA glossary, vert de chrome: opaque chromium oxide published by Vauquelin in 1809.
-		{"chromium-oxide-green", materials.KindMade, "", "1809", "KIK-IRPA, vert de chrome"},
+		// Gettens and Stout, Painting Materials (1942), p. 107: Vauquelin proposed chromium oxide for glazes in 1809.
+		{"chromium-oxide-green", materials.KindMade, "", "1809", "Gettens and Stout 1942, p. 107"},
+		// Gettens and Stout, Painting Materials (1942), p. 107: not an artists' pigment until about 1862.
+		{"chromium-oxide-green", materials.KindSold, "", "1862~", "Gettens and Stout 1942, p. 107"},
+		// Wikipedia, "Prussian blue", History: Frisch sold the pigment no later than 1708.
+		{"prussian-blue", materials.KindSold, "", "1708", "Wikipedia, Prussian blue, History"},
 		// Chipstone, American Furniture 2003, fig. 7 caption (Gilmor 1814): chrome yellow on Baltimore carriages.
 		{"chrome-yellow", materials.KindArrived, "US", "1814", "Chipstone, American Furniture 2003, fig. 7"},
 		// Wikipedia, "Jean-Baptiste Guimet": a synthetic route to ultramarine found in 1826.
