@@ -1,0 +1,360 @@
+package survey
+
+import (
+	"bufio"
+	"bytes"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+	"sync/atomic"
+)
+
+// Format is the layout of an input file.
+type Format string
+
+// The input formats.
+const (
+	JSONL Format = "jsonl" // one case per line, the case file schema in JSON
+	CSV   Format = "csv"   // the spreadsheet column set of the package comment
+)
+
+// ParseFormat reads an --input value: "jsonl", "csv" or "" / "auto".
+func ParseFormat(s string) (Format, error) {
+	switch strings.ToLower(s) {
+	case "", "auto":
+		return "", nil
+	case "jsonl", "ndjson", "json":
+		return JSONL, nil
+	case "csv":
+		return CSV, nil
+	}
+	return "", fmt.Errorf("unknown input format %q: expected jsonl, csv or auto", s)
+}
+
+// InputError is a problem with a whole input (it cannot be read, or a CSV
+// file has no usable header): the survey does not start.
+type InputError struct {
+	File    string
+	Line    int // 0 when the problem is not on a line
+	Msg     string
+	Suggest string
+	Err     error
+}
+
+func (e *InputError) Error() string {
+	if e.Line > 0 {
+		return fmt.Sprintf("%s:%d: %s", e.File, e.Line, e.Msg)
+	}
+	return fmt.Sprintf("%s: %s", e.File, e.Msg)
+}
+
+// Hint returns the suggestion, for the command line's "hint:" line.
+func (e *InputError) Hint() string { return e.Suggest }
+
+func (e *InputError) Unwrap() error { return e.Err }
+
+// The CSV columns the survey reads; every other column is free and passed
+// through to the output unchanged.
+const (
+	colID        = "id"
+	colTitle     = "title"
+	colPlace     = "place"
+	colClaim     = "claim"
+	colMaterials = "materials"
+	colNotBefore = "not_before"
+	colNotAfter  = "not_after"
+)
+
+// Columns returns the CSV column names the survey reads, in the documented
+// order.
+func Columns() []string {
+	return []string{colID, colTitle, colPlace, colClaim, colMaterials, colNotBefore, colNotAfter}
+}
+
+// Input is one collection opened for a survey. Open every input before the
+// survey starts, so that a missing file or a bad header stops it before any
+// output.
+type Input struct {
+	// Name is the file name as given, "-" for standard input.
+	Name string
+	// Format is the format read or detected.
+	Format Format
+	// Size is the input's length in bytes, -1 when not known (a pipe).
+	Size int64
+	// Free are the names of the CSV columns kept through, in file order.
+	Free []string
+
+	read   atomic.Int64 // bytes consumed, for the progress bar
+	closer io.Closer
+	lr     *lineReader
+	known  map[string]int // CSV: known column → field index
+	free   []int          // CSV: field index of each free column
+	split  csvSplitter
+	width  int // CSV: number of header fields
+}
+
+// DisplayName is the name used in messages: the file name, or "stdin".
+func (in *Input) DisplayName() string {
+	if in.Name == "-" {
+		return "stdin"
+	}
+	return in.Name
+}
+
+type countingReader struct {
+	r io.Reader
+	n *atomic.Int64
+}
+
+func (c countingReader) Read(p []byte) (int, error) {
+	n, err := c.r.Read(p)
+	c.n.Add(int64(n))
+	return n, err
+}
+
+// Open opens a collection file; name "-" reads stdin. format "" detects the
+// format from the extension (.csv; .jsonl, .ndjson, .json) or, failing
+// that, from the first character ('{' is JSON Lines, anything else CSV).
+// For CSV the header row is read and checked here.
+func Open(name string, stdin io.Reader, format Format) (*Input, error) {
+	in := &Input{Name: name, Size: -1}
+	var r io.Reader
+	if name == "-" {
+		if stdin == nil {
+			stdin = os.Stdin
+		}
+		r = stdin
+	} else {
+		f, err := os.Open(name)
+		if err != nil {
+			var pe *os.PathError
+			if errors.As(err, &pe) {
+				err = pe.Err
+			}
+			return nil, &InputError{File: name, Msg: fmt.Sprintf("cannot read the collection: %v", err), Err: err}
+		}
+		if st, err := f.Stat(); err == nil {
+			if st.IsDir() {
+				f.Close()
+				return nil, &InputError{File: name, Msg: "is a folder, not a collection file", Suggest: "name the .jsonl or .csv files, e.g. folder/*.csv"}
+			}
+			if st.Mode().IsRegular() {
+				in.Size = st.Size()
+			}
+		}
+		in.closer = f
+		r = f
+	}
+	br := bufio.NewReaderSize(countingReader{r, &in.read}, 64<<10)
+	if format == "" {
+		format = formatByName(name)
+	}
+	if format == "" {
+		format = sniff(br)
+	}
+	in.Format = format
+	in.lr = newLineReader(br, MaxLine)
+	if format == CSV {
+		if err := in.readHeader(); err != nil {
+			in.Close()
+			return nil, err
+		}
+	}
+	return in, nil
+}
+
+func formatByName(name string) Format {
+	switch strings.ToLower(filepath.Ext(name)) {
+	case ".csv":
+		return CSV
+	case ".jsonl", ".ndjson", ".json":
+		return JSONL
+	}
+	return ""
+}
+
+// sniff looks at the first character that is not white space.
+func sniff(br *bufio.Reader) Format {
+	head, _ := br.Peek(4096)
+	head = bytes.TrimPrefix(head, []byte("\xef\xbb\xbf"))
+	head = bytes.TrimLeft(head, " \t\r\n")
+	if len(head) > 0 && head[0] == '{' {
+		return JSONL
+	}
+	return CSV
+}
+
+// Close closes the file (not standard input).
+func (in *Input) Close() error {
+	if in.closer == nil {
+		return nil
+	}
+	c := in.closer
+	in.closer = nil
+	return c.Close()
+}
+
+// normColumn folds a header name: case, surrounding space, and spaces or
+// hyphens for underscores ("Not before" is not_before).
+func normColumn(s string) string {
+	s = strings.ToLower(strings.TrimSpace(s))
+	return strings.NewReplacer(" ", "_", "-", "_").Replace(s)
+}
+
+// columnAliases are other spellings of the known columns.
+var columnAliases = map[string]string{"material": colMaterials, "claims": colClaim, "claimed": colClaim}
+
+func (in *Input) readHeader() error {
+	for {
+		text, line, tooLong, err := in.lr.next()
+		if errors.Is(err, io.EOF) {
+			return nil // an empty file: no records
+		}
+		if err != nil {
+			return &InputError{File: in.Name, Msg: fmt.Sprintf("cannot read the collection: %v", err), Err: err}
+		}
+		if tooLong {
+			return &InputError{File: in.Name, Line: line, Msg: "the header row is longer than 1 MiB"}
+		}
+		if len(bytes.TrimSpace(text)) == 0 {
+			continue
+		}
+		if !in.split.feed(text, line) {
+			return &InputError{File: in.Name, Line: line, Msg: "the header row opens a quote that it does not close"}
+		}
+		in.known = map[string]int{}
+		in.width = len(in.split.fields)
+		known := Columns()
+		for i, f := range in.split.fields {
+			n := normColumn(f.Text)
+			if a, ok := columnAliases[n]; ok {
+				n = a
+			}
+			if contains(known, n) {
+				if prev, dup := in.known[n]; dup {
+					return &InputError{File: in.Name, Line: line, Msg: fmt.Sprintf("the header names the column %q twice (fields %d and %d)", n, prev+1, i+1)}
+				}
+				in.known[n] = i
+				continue
+			}
+			if near := nearColumn(n, known); near != "" {
+				return &InputError{File: in.Name, Line: line, Msg: fmt.Sprintf("header column %q: did you mean %q?", f.Text, near),
+					Suggest: "rename the column; the survey reads " + strings.Join(known, ", ") + " and keeps any other column as it is"}
+			}
+			in.free = append(in.free, i)
+			in.Free = append(in.Free, strings.TrimSpace(f.Text))
+		}
+		if len(in.known) == 0 {
+			return &InputError{File: in.Name, Line: line, Msg: "the first row names none of the survey's columns: is the header row missing?",
+				Suggest: "start the file with a header row such as: id,title,place,claim,materials,not_before,not_after"}
+		}
+		return nil
+	}
+}
+
+// nearColumn returns the known column within two edits of n, for a
+// misspelt header; "" when there is none or n is short.
+func nearColumn(n string, known []string) string {
+	if len(n) < 4 {
+		return ""
+	}
+	for _, k := range known {
+		if d := editDistance(n, k); d > 0 && d <= 2 {
+			return k
+		}
+	}
+	return ""
+}
+
+func editDistance(a, b string) int {
+	prev := make([]int, len(b)+1)
+	cur := make([]int, len(b)+1)
+	for j := range prev {
+		prev[j] = j
+	}
+	for i := 1; i <= len(a); i++ {
+		cur[0] = i
+		for j := 1; j <= len(b); j++ {
+			cost := 1
+			if a[i-1] == b[j-1] {
+				cost = 0
+			}
+			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+		}
+		prev, cur = cur, prev
+	}
+	return prev[len(b)]
+}
+
+func contains(list []string, s string) bool {
+	for _, x := range list {
+		if x == s {
+			return true
+		}
+	}
+	return false
+}
+
+// rawRecord is one record as read, before parsing: a JSON line or the
+// fields of a CSV row.
+type rawRecord struct {
+	in     *Input
+	line   int
+	text   []byte     // JSON Lines: the line (a copy)
+	fields []csvField // CSV: the row (a copy)
+	err    error      // a record that could not even be split
+}
+
+// next reads the next record; io.EOF at the end. Blank lines are not
+// records and are skipped.
+func (in *Input) next() (rawRecord, error) {
+	for {
+		text, line, tooLong, err := in.lr.next()
+		if errors.Is(err, io.EOF) {
+			if in.Format == CSV && in.split.open {
+				start := in.split.start.Line
+				if len(in.split.fields) > 0 {
+					start = in.split.fields[0].Line
+				}
+				in.split.finish()
+				return rawRecord{in: in, line: start, err: recordErr(in.Name, start, 0, "a quoted field opens here and is not closed before the end of the file", "close the quote, or write a quote inside a quoted field as \"\"")}, nil
+			}
+			return rawRecord{}, io.EOF
+		}
+		if err != nil {
+			return rawRecord{}, &InputError{File: in.Name, Line: line, Msg: fmt.Sprintf("cannot read the collection: %v", err), Err: err}
+		}
+		if in.Format == JSONL {
+			if tooLong {
+				return rawRecord{in: in, line: line, err: recordErr(in.Name, line, 0, fmt.Sprintf("the line is longer than %d bytes", MaxLine), "")}, nil
+			}
+			if len(bytes.TrimSpace(text)) == 0 {
+				continue
+			}
+			return rawRecord{in: in, line: line, text: bytes.Clone(text)}, nil
+		}
+		if !in.split.open && len(bytes.TrimSpace(text)) == 0 {
+			continue
+		}
+		if tooLong || in.split.size+len(text) > MaxLine {
+			start := line
+			if in.split.open {
+				start = in.split.start.Line
+				if len(in.split.fields) > 0 {
+					start = in.split.fields[0].Line
+				}
+			}
+			in.split.open = false
+			return rawRecord{in: in, line: start, err: recordErr(in.Name, start, 0, fmt.Sprintf("the record is longer than %d bytes", MaxLine), "a quoted field may be missing its closing quote")}, nil
+		}
+		if !in.split.feed(text, line) {
+			continue
+		}
+		fields := make([]csvField, len(in.split.fields))
+		copy(fields, in.split.fields)
+		return rawRecord{in: in, line: fields[0].Line, fields: fields}, nil
+	}
+}

@@ -1,0 +1,93 @@
+package survey
+
+import (
+	"bufio"
+	"bytes"
+	"encoding/json"
+	"io"
+	"strconv"
+
+	"terminus/cmd/terminus/internal/report"
+)
+
+// JSONLWriter writes one JSON object per record, in input order:
+//
+//	{"id": "inv-7", "file": "c.jsonl", "line": 7, "status": "improbable",
+//	 "columns": {...}, "result": {...the check --format json document...}}
+//	{"id": "line-8", "file": "c.jsonl", "line": 8, "status": "error",
+//	 "error": "c.jsonl:8:31: finding finding-1: unknown material \"smalts\"",
+//	 "hint": "did you mean 'smalt'?"}
+//
+// "columns" holds the free CSV columns (absent when there are none). The
+// counts are not written: every line is a record.
+type JSONLWriter struct {
+	w    *bufio.Writer
+	free []string
+}
+
+// NewJSONLWriter returns a writer to w; free names the free columns.
+func NewJSONLWriter(w io.Writer, free []string) *JSONLWriter {
+	return &JSONLWriter{w: bufio.NewWriterSize(w, 256<<10), free: free}
+}
+
+func appendString(b []byte, s string) []byte {
+	var buf bytes.Buffer
+	enc := json.NewEncoder(&buf)
+	enc.SetEscapeHTML(false)
+	_ = enc.Encode(s) // a string always encodes
+	return append(b, bytes.TrimSuffix(buf.Bytes(), []byte("\n"))...)
+}
+
+// Render encodes the record.
+func (j *JSONLWriter) Render(o *Outcome) error {
+	b := make([]byte, 0, 512)
+	b = append(b, `{"id":`...)
+	b = appendString(b, o.ID)
+	b = append(b, `,"file":`...)
+	b = appendString(b, o.File)
+	b = append(b, `,"line":`...)
+	b = strconv.AppendInt(b, int64(o.Line), 10)
+	b = append(b, `,"status":`...)
+	b = appendString(b, string(o.Summary.Status))
+	if len(j.free) > 0 && o.Free != nil {
+		b = append(b, `,"columns":{`...)
+		for i, name := range j.free {
+			if i > 0 {
+				b = append(b, ',')
+			}
+			b = appendString(b, name)
+			b = append(b, ':')
+			b = appendString(b, o.Free[i])
+		}
+		b = append(b, '}')
+	}
+	switch {
+	case o.Err != nil:
+		b = append(b, `,"error":`...)
+		b = appendString(b, o.Summary.Err)
+		if o.Summary.Hint != "" {
+			b = append(b, `,"hint":`...)
+			b = appendString(b, o.Summary.Hint)
+		}
+	case o.Result != nil:
+		var buf bytes.Buffer
+		buf.Grow(4096)
+		if err := report.JSONLine(&buf, o.Result); err != nil {
+			return err
+		}
+		b = append(b, `,"result":`...)
+		b = append(b, bytes.TrimSuffix(buf.Bytes(), []byte("\n"))...)
+	}
+	b = append(b, "}\n"...)
+	o.Out = b
+	return nil
+}
+
+// Write writes the encoded record.
+func (j *JSONLWriter) Write(o *Outcome) error {
+	_, err := j.w.Write(o.Out)
+	return err
+}
+
+// Close flushes the output.
+func (j *JSONLWriter) Close(Counts) error { return j.w.Flush() }
