@@ -96,6 +96,7 @@ func NewRootCmd(s IO) *cobra.Command {
 		NewInitCmd(s),
 		NewDateCmd(s),
 		NewMaterialsCmd(s),
+		NewSurveyCmd(s),
 	)
 	return root
 }
