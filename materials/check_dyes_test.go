@@ -143,6 +143,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"fuchsine", materials.KindArrived, "DE", "1861/1862", "WDR Stichtag, Bayer"},
 		// "Woulfe Discovers Picric Acid", Summary of Event: Barth's sulphonated indigo of 1744.
 		{"indigo-carmine", materials.KindMade, "", "1744", "Woulfe Discovers Picric Acid, Summary of Event"},
+		// Meldola 1891, dimethylaniline colours: Lauth's violet of 1876.
+		{"thionine", materials.KindMade, "", "1876", "Meldola 1891, dimethylaniline colours"},
 		// Environmental Law Reporter, on the ban of Red No. 2: banned as a US food colour early in 1976.
 		{"amaranth", materials.KindWithdrawn, "US", "1976", "Environmental Law Reporter, Red No. 2"},
 		// German Wikipedia, "Rhodamin B", Verwendung: the US listing as D&C Red No. 19 withdrawn in 1984.
@@ -243,6 +245,8 @@ func TestDyesTradeFacts(t *testing.T) {
 		{"acid-yellow", "biebrich-scarlet", materials.KindMade, "acid yellow before Biebrich scarlet"},
 		// Common practice: synthetic alizarin came a decade before synthetic indigo.
 		{"synthetic-alizarin", "synthetic-indigo", materials.KindSold, "synthetic alizarin before synthetic indigo"},
+		// Common practice: methylene blue was Caro's development of Lauth's violet.
+		{"thionine", "methylene-blue", materials.KindMade, "Lauth's violet before methylene blue"},
 		// Common practice: thioindigo follows the indigo synthesis.
 		{"synthetic-indigo", "thioindigo", materials.KindMade, "indigo before thioindigo"},
 		// Common practice: a lake is no older than its dye.
