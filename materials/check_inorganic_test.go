@@ -46,6 +46,10 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"scheeles-green", materials.KindMade, "", "1775", "Wikipedia, Scheele's green, lead"},
 		// Gettens and Stout, Painting Materials (1942), p. 113, Emerald green: first made at Schweinfurt in 1814.
 		{"emerald-green", materials.KindMade, "", "1814", "Gettens and Stout 1942, p. 113"},
+		// KIK-IRPA glossary, vert de Schweinfurt: Mitis at Kirchberg near Vienna, 1798-1812.
+		{"emerald-green", materials.KindMade, "", "1798/1812", "KIK-IRPA, vert de Schweinfurt"},
+		// Frimmel, Studien und Skizzen zur Gemäldekunde 1 (1913), p. 239: Scheele's green invented 1778.
+		{"scheeles-green", materials.KindMade, "", "1778", "Frimmel 1913, p. 239"},
 		// Winsor & Newton, "Spotlight on colour: Emerald Green" (2013): available to artists until the 1960s.
 		{"emerald-green", materials.KindWithdrawn, "", "196X", "Winsor & Newton, Emerald Green (2013)"},
 		// Wikipedia, "Cobalt blue", Historical uses: Thénard 1802; production in France from 1807.
