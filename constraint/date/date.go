@@ -60,7 +60,8 @@ type Date struct {
 	Input string
 	// Alternatives holds the intervals in ascending order, disjoint and not
 	// touching (adjacent or overlapping members of a set are merged); a
-	// plain date or an EDTF interval has exactly one.
+	// plain date or an EDTF interval has exactly one, unless its X digits
+	// leave scattered days (156X-12-25 has ten).
 	Alternatives []Interval
 	// Precision is the precision of the first written date (the start of an
 	// interval, the first member of a set).

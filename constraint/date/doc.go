@@ -47,11 +47,15 @@
 // [1760-12..] (a disjunction; spaces after the commas are accepted);
 // exponential years Y-17E7; significant digits 1950S2 (some year from 1900
 // to 1999); the divisions of the year 25–41 (hemisphere seasons, quarters,
-// quadrimesters, semesters); X digits in interval ends that leave one run
-// of days (2004-06-XX/2004-07-03). Not supported, with an error that says
-// so: all-of sets {…} (a single event is not on several dates at once),
-// qualifiers on single components (2004-06~-11, ?2004-06-~11), and X
-// digits that leave scattered days (156X-12-25, 1985-XX-12).
+// quadrimesters, semesters); X digits anywhere in a four-digit year, month
+// or day. X digits that leave scattered days (156X-12-25, December 25 in
+// each year of the 1560s) give a disjunction too: one [Interval] per run
+// of days, at most 1000 runs (XXXX-12-XX, 10000 Decembers, is an error). In
+// an interval end such X digits count by their first or last day
+// (2004-06-XX/2004-07-03 starts 2004-06-01). Not supported, with an error
+// that says so: all-of sets {…} (a single event is not on several dates
+// at once) and qualifiers on single components (2004-06~-11,
+// ?2004-06-~11).
 //
 // Seasons are read as meteorological seasons of the northern hemisphere:
 // spring (21, 25) March–May, summer (22, 26) June–August, autumn (23, 27)

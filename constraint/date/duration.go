@@ -294,8 +294,7 @@ func (d Date) Widen(c Circa) Date {
 		}
 		return Day(memo[p] - 1)
 	}
-	d.Alternatives = alternatives(d.members, func(m member) Interval {
-		iv := m.interval()
+	d.Alternatives = alternatives(d.members, func(m member, iv Interval) Interval {
 		if !iv.OpenStart && m.start.approx {
 			iv.First -= by(m.start.prec)
 		}

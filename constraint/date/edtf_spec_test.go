@@ -181,10 +181,9 @@ func TestEDTFLevel2Unsupported(t *testing.T) {
 		{"L2 Group Qualification ex3", "2004?-06-11"},
 		{"L2 Individual Component ex4", "?2004-06-~11"},
 		{"L2 Individual Component ex5", "2004-%06-11"},
-		{"L2 Unspecified Digit ex1", "156X-12-25"},
-		{"L2 Unspecified Digit ex2", "15XX-12-25"},
+		// "Some day in December in some year": 10000 Decembers, more runs
+		// of days than this package reads (1000).
 		{"L2 Unspecified Digit ex3", "XXXX-12-XX"},
-		{"L2 Unspecified Digit ex5", "1XXX-12"},
 		{"L2 Interval ex1", "2004-06-~01/2004-06-~20"},
 	} {
 		t.Run(tt.section, func(t *testing.T) {
@@ -197,5 +196,57 @@ func TestEDTFLevel2Unsupported(t *testing.T) {
 				t.Errorf("error fields = %+v", pe)
 			}
 		})
+	}
+}
+
+// Level 2, Unspecified Digit: X digits anywhere leave scattered days, read
+// as a disjunction of runs of days (the meanings are the specification's).
+func TestEDTFLevel2ScatteredX(t *testing.T) {
+	tests := []struct {
+		section, in string
+		n           int    // how many runs
+		first, last string // the first and the last run
+		prec        Precision
+	}{
+		// Example 1: "December 25 sometime during the 1560s".
+		{"L2 Unspecified Digit ex1", "156X-12-25", 10, "1560-12-25→1560-12-25", "1569-12-25→1569-12-25", PrecisionDay},
+		// Example 2: "December 25 sometime during the 1500s".
+		{"L2 Unspecified Digit ex2", "15XX-12-25", 100, "1500-12-25→1500-12-25", "1599-12-25→1599-12-25", PrecisionDay},
+		// Example 5: "Some December during the 1000s".
+		{"L2 Unspecified Digit ex5", "1XXX-12", 1000, "1000-12-01→1000-12-31", "1999-12-01→1999-12-31", PrecisionMonth},
+		// Our own strings: the twelfth of each month of 1985 (1985-01-12 … 1985-12-12).
+		{"L2 Unspecified Digit (ours)", "1985-XX-12", 12, "1985-01-12→1985-01-12", "1985-12-12→1985-12-12", PrecisionDay},
+		// Every year of 1905, 1915, … 1995; February or December 1984; the 5th, 15th, 25th of February 1985;
+		// the 1st, 11th, 21st of April 1985 (not the 31st: April has 30 days).
+		{"L2 Unspecified Digit (ours)", "19X5", 10, "1905-01-01→1905-12-31", "1995-01-01→1995-12-31", PrecisionYear},
+		{"L2 Unspecified Digit (ours)", "1984-X2", 2, "1984-02-01→1984-02-29", "1984-12-01→1984-12-31", PrecisionMonth},
+		{"L2 Unspecified Digit (ours)", "1985-02-X5", 3, "1985-02-05→1985-02-05", "1985-02-25→1985-02-25", PrecisionDay},
+		{"L2 Unspecified Digit (ours)", "1985-04-X1", 3, "1985-04-01→1985-04-01", "1985-04-21→1985-04-21", PrecisionDay},
+		{"L2 Unspecified Digit (ours)", "-15X0", 10, "-1590-01-01→-1590-12-31", "-1500-01-01→-1500-12-31", PrecisionYear},
+	}
+	for _, tt := range tests {
+		t.Run(tt.section+" "+tt.in, func(t *testing.T) {
+			d, err := Parse(tt.in)
+			if err != nil {
+				t.Fatal(err)
+			}
+			got := iso(d)
+			if len(got) != tt.n || got[0] != tt.first || got[len(got)-1] != tt.last {
+				t.Errorf("%d runs from %s to %s, want %d from %s to %s", len(got), got[0], got[len(got)-1], tt.n, tt.first, tt.last)
+			}
+			if d.EDTF() != tt.in || d.Precision != tt.prec {
+				t.Errorf("EDTF() = %q, precision %v; want %q, %v", d.EDTF(), d.Precision, tt.in, tt.prec)
+			}
+			checkDate(t, tt.in, d)
+		})
+	}
+	// Approximate scattered days widen run by run (day policy: 7 days).
+	d, err := Parse("156X-12-25~")
+	if err != nil {
+		t.Fatal(err)
+	}
+	w := iso(d.Widen(DefaultCirca()))
+	if len(w) != 10 || w[0] != "1560-12-18→1561-01-01" {
+		t.Errorf("156X-12-25~ widened = %v", w)
 	}
 }

@@ -122,6 +122,9 @@ func appendPoint(b []byte, pt point, role int, sep string) []byte {
 		}
 		return appendQual(b, pt.approx, pt.uncert)
 	}
+	if pt.scattered {
+		return appendScattered(b, pt)
+	}
 	b = appendYearSign(b, pt.year, pt.yx, pt.neg)
 	if pt.sig > 0 {
 		b = append(b, 'S')
@@ -237,6 +240,16 @@ func (pt point) people(b *strings.Builder) {
 	if pt.approx {
 		b.WriteString("c. ")
 	}
+	if pt.scattered {
+		q := pt
+		q.approx, q.uncert = false, false
+		b.WriteString("any day written ")
+		b.Write(appendScattered(nil, q))
+		if pt.uncert {
+			b.WriteByte('?')
+		}
+		return
+	}
 	if pt.yx > 0 || pt.sig > 0 {
 		switch {
 		case pt.year >= 1000 && pt.yx > 0 && pt.yx <= 2:
@@ -248,6 +261,11 @@ func (pt point) people(b *strings.Builder) {
 			yearPeople(b, lo)
 			b.WriteString(" to ")
 			yearPeople(b, hi)
+			if pt.sig > 0 {
+				b.WriteString(" (estimated ")
+				yearPeople(b, pt.year)
+				b.WriteByte(')')
+			}
 		}
 	} else {
 		switch {
@@ -313,4 +331,39 @@ func (m member) people(b *strings.Builder, inSet bool) {
 		b.WriteString(" to ")
 		m.end.people(b)
 	}
+}
+
+// appendScattered writes a point with scattered X digits.
+func appendScattered(b []byte, pt point) []byte {
+	if pt.year < 0 || pt.neg {
+		b = append(b, '-')
+	}
+	a := max(pt.year, -pt.year)
+	for k := 3; k >= 0; k-- {
+		w := int64(1)
+		for range k {
+			w *= 10
+		}
+		if pt.ym&(1<<k) != 0 {
+			b = append(b, 'X')
+		} else {
+			b = append(b, byte('0'+a/w%10))
+		}
+	}
+	two := func(val, mask uint8) {
+		b = append(b, '-')
+		for k, c := range [2]byte{'0' + val/10, '0' + val%10} {
+			if mask&(2>>k) != 0 {
+				c = 'X'
+			}
+			b = append(b, c)
+		}
+	}
+	if pt.month != 0 || pt.mm != 0 {
+		two(pt.month, pt.mm)
+		if pt.day != 0 || pt.dm != 0 {
+			two(pt.day, pt.dm)
+		}
+	}
+	return appendQual(b, pt.approx, pt.uncert)
 }

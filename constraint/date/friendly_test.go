@@ -117,6 +117,7 @@ func TestStringPeople(t *testing.T) {
 		{"-18XX", "1900 BCE to 1801 BCE"},
 		{"1582-10-04 (Julian)", "4 October 1582 (Julian)"},
 		{"1985-04-12T23:20:30Z", "12 April 1985 23:20:30Z"},
+		{"1950S2", "1900 to 1999 (estimated 1950)"},
 	}
 	for _, tt := range tests {
 		d, err := Parse(tt.in)
