@@ -49,6 +49,9 @@ var yamlLine = regexp.MustCompile(`line (\d+)`)
 
 // yamlTree reads the one document of a YAML file.
 func (p *parser) yamlTree(data []byte) *yaml.Node {
+	if root, ok := fastYAML(data); ok {
+		return root
+	}
 	dec := yaml.NewDecoder(bytes.NewReader(data))
 	var doc yaml.Node
 	if err := dec.Decode(&doc); err != nil {
