@@ -27,8 +27,8 @@ func TestInorganicAgainstSources(t *testing.T) {
 	}{
 		// Kraft, "The history of Prussian blue", Taylor & Francis chapter, abstract: invented in Berlin in 1706.
 		{"prussian-blue", materials.KindMade, "", "1706", "Kraft, History of Prussian blue, abstract"},
-		// Buxbaum and Pfaff, Industrial Inorganic Pigments, section 3.6.1: discovered by Diesbach in Berlin in 1704.
-		{"prussian-blue", materials.KindMade, "", "1704", "Buxbaum and Pfaff, Industrial Inorganic Pigments, 3.6.1"},
+		// Buxbaum et al., Industrial Inorganic Pigments, section 3.6.1: discovered by Diesbach in Berlin in 1704.
+		{"prussian-blue", materials.KindMade, "", "1704", "Buxbaum et al., Industrial Inorganic Pigments, 3.6.1"},
 		// Degussa, Iron Blue Pigments: Woodward's account of its manufacture, 1726.
 		{"prussian-blue", materials.KindArrived, "GB", "1726", "Degussa, Iron Blue Pigments"},
 		// From memory, not read here: Harley, Artists' Pigments c. 1600-1835: Woodward's method published in 1724.
@@ -83,8 +83,8 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"chrome-yellow", materials.KindArrived, "US", "1814", "Chipstone, American Furniture 2003, fig. 7"},
 		// Wikipedia, "Jean-Baptiste Guimet": a synthetic route to ultramarine found in 1826.
 		{"synthetic-ultramarine", materials.KindMade, "", "1826", "Wikipedia, Jean-Baptiste Guimet"},
-		// Collier's New Encyclopedia, Ultramarine: Société d'Encouragement prize awarded to Guimet in 1828.
-		{"synthetic-ultramarine", materials.KindMade, "", "1828", "Collier's New Encyclopedia, Ultramarine"},
+		// Collier's Encyclopedia, vol. 10, Ultramarine: Société d'Encouragement prize awarded to Guimet in 1828.
+		{"synthetic-ultramarine", materials.KindMade, "", "1828", "Collier's Encyclopedia, vol. 10, Ultramarine"},
 		// Scientific American, 24 April 1852: imported into the United States from Germany and France.
 		{"synthetic-ultramarine", materials.KindArrived, "US", "1852", "Scientific American, 24 April 1852"},
 		// Gettens and Stout, Painting Materials (1942), p. 102: cadmium yellow commercially available about 1846.
