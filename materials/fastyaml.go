@@ -378,8 +378,11 @@ func plainTag(v string) string {
 	case "", "~", "null", "Null", "NULL":
 		return "!!null"
 	}
-	digits := strings.TrimLeft(v, "+-")
-	if len(v)-len(digits) <= 1 && digits != "" && strings.Trim(digits, "0123456789") == "" {
+	digits := v
+	if v[0] == '+' || v[0] == '-' {
+		digits = v[1:]
+	}
+	if digits != "" && allDigits(digits) {
 		// As the decoder reads them: a leading zero is octal ("030" is an
 		// integer, "08" is not), and a number too large is not an integer.
 		if _, err := strconv.ParseInt(v, 0, 64); err == nil {
@@ -589,4 +592,13 @@ func (f *flow) node() (*yaml.Node, bool) {
 		f.i += end
 		return f.p.scalar(v, plainTag(v), 0, f.line, col), true
 	}
+}
+
+func allDigits(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] < '0' || s[i] > '9' {
+			return false
+		}
+	}
+	return true
 }
