@@ -52,10 +52,14 @@
 // each year of the 1560s) give a disjunction too: one [Interval] per run
 // of days, at most 1000 runs (XXXX-12-XX, 10000 Decembers, is an error). In
 // an interval end such X digits count by their first or last day
-// (2004-06-XX/2004-07-03 starts 2004-06-01). Not supported, with an error
-// that says so: all-of sets {…} (a single event is not on several dates
-// at once) and qualifiers on single components (2004-06~-11,
-// ?2004-06-~11).
+// (2004-06-XX/2004-07-03 starts 2004-06-01). Qualifiers on single parts:
+// after a part for it and every part before it (2004-06~-11: year and
+// month approximate), before a part for it alone (?2004-06-~11: year
+// uncertain, day approximate); such a date widens by the circa policy of
+// its finest approximate part (2004-06~-11 by the month policy). Not
+// supported, with an error that says so: all-of sets {…} (a single event
+// is not on several dates at once), and qualifiers on parts together with
+// scattered X digits, a time of day, significant digits or a long year.
 //
 // Seasons are read as meteorological seasons of the northern hemisphere:
 // spring (21, 25) March–May, summer (22, 26) June–August, autumn (23, 27)

@@ -273,7 +273,8 @@ func ParseCircaKey(name string) (Precision, error) {
 }
 
 // Widen returns d with every approximate end moved out by the policy c
-// for the precision that end was written in: the start of the end's run
+// for the precision that end was written in (for qualifiers on single
+// parts, the finest approximate part): the start of the end's run
 // of days earlier by c's MaxDays, its last day later by MaxDays (the
 // conservative choice both ways). A single approximate date ("1870~")
 // widens at both sides; an interval "1870~/1879" only at its start. Open
@@ -296,10 +297,10 @@ func (d Date) Widen(c Circa) Date {
 	}
 	d.Alternatives = alternatives(d.members, func(m member, iv Interval) Interval {
 		if !iv.OpenStart && m.start.approx {
-			iv.First -= by(m.start.prec)
+			iv.First -= by(m.start.widenPrec())
 		}
 		if !iv.OpenEnd && m.end.approx {
-			iv.Last += by(m.end.prec)
+			iv.Last += by(m.end.widenPrec())
 		}
 		return iv
 	})

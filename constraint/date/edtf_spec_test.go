@@ -177,14 +177,9 @@ func TestEDTFLevel2Unsupported(t *testing.T) {
 		{"L2 All Members ex7", "{1667,1668,1670..1672}"},
 		{"L2 All Members ex8", "{1960,1961-12}"},
 		{"L2 All Members ex9", "{..1984}"},
-		{"L2 Group Qualification ex2", "2004-06~-11"},
-		{"L2 Group Qualification ex3", "2004?-06-11"},
-		{"L2 Individual Component ex4", "?2004-06-~11"},
-		{"L2 Individual Component ex5", "2004-%06-11"},
 		// "Some day in December in some year": 10000 Decembers, more runs
 		// of days than this package reads (1000).
 		{"L2 Unspecified Digit ex3", "XXXX-12-XX"},
-		{"L2 Interval ex1", "2004-06-~01/2004-06-~20"},
 	} {
 		t.Run(tt.section, func(t *testing.T) {
 			_, err := Parse(tt.in)
@@ -248,5 +243,67 @@ func TestEDTFLevel2ScatteredX(t *testing.T) {
 	w := iso(d.Widen(DefaultCirca()))
 	if len(w) != 10 || w[0] != "1560-12-18→1561-01-01" {
 		t.Errorf("156X-12-25~ widened = %v", w)
+	}
+}
+
+// Level 2, Qualification: qualifiers on single parts, with the meaning the
+// specification gives (which parts are approximate or uncertain), and how
+// far the default circa policy then widens (the finest approximate part).
+func TestEDTFLevel2Qualification(t *testing.T) {
+	tests := []struct {
+		section, in    string
+		people         string // the parts qualified, as the specification lists them
+		approx, uncert bool
+		widened        string
+	}{
+		// Group Qualification example 1: "year, month, and day uncertain and approximate".
+		{"L2 Group Qualification ex1", "2004-06-11%", "c. 11 June 2004?", true, true, "2004-06-04→2004-06-18"},
+		// Example 2: "year and month approximate" (widened by the month policy, 31 days).
+		{"L2 Group Qualification ex2", "2004-06~-11", "11 June 2004 (year approximate, month approximate)", true, false, "2004-05-11→2004-07-12"},
+		// Example 3: "year uncertain" (nothing widens).
+		{"L2 Group Qualification ex3", "2004?-06-11", "11 June 2004 (year uncertain)", false, true, "2004-06-11→2004-06-11"},
+		// Qualification of Individual Component example 4: "year uncertain; month known; day approximate".
+		{"L2 Individual Component ex4", "?2004-06-~11", "11 June 2004 (year uncertain, day approximate)", true, true, "2004-06-04→2004-06-18"},
+		// Example 5: "month uncertain and approximate; year and day known".
+		{"L2 Individual Component ex5", "2004-%06-11", "11 June 2004 (month approximate and uncertain)", true, true, "2004-05-11→2004-07-12"},
+		// Interval example 1: "An interval in June 2004 beginning approximately the first and ending approximately the 20th".
+		{"L2 Interval ex1", "2004-06-~01/2004-06-~20", "1 June 2004 (day approximate) to 20 June 2004 (day approximate)", true, false, "2004-05-25→2004-06-27"},
+	}
+	for _, tt := range tests {
+		t.Run(tt.section, func(t *testing.T) {
+			d, err := Parse(tt.in)
+			if err != nil {
+				t.Fatal(err)
+			}
+			if d.EDTF() != tt.in {
+				t.Errorf("EDTF() = %q, want %q", d.EDTF(), tt.in)
+			}
+			if d.String() != tt.people {
+				t.Errorf("String() = %q, want %q", d.String(), tt.people)
+			}
+			if d.Approximate != tt.approx || d.Uncertain != tt.uncert {
+				t.Errorf("approximate, uncertain = %v, %v", d.Approximate, d.Uncertain)
+			}
+			if got := iso(d.Widen(DefaultCirca())); len(got) != 1 || got[0] != tt.widened {
+				t.Errorf("widened = %v, want %s", got, tt.widened)
+			}
+			checkDate(t, tt.in, d)
+		})
+	}
+	// Other spellings of the same qualifiers come back in the shortest form.
+	for in, want := range map[string]string{
+		"~2004-~06-~11":  "2004-06-11~",
+		"2004-~06~":      "2004-06~",
+		"~2004-06-11":    "2004~-06-11",
+		"2004?-06-11~":   "%2004-~06-~11",
+		"c. 2004-06~-11": "2004-06-11~",
+	} {
+		d, err := Parse(in)
+		if err != nil {
+			t.Fatalf("Parse(%q): %v", in, err)
+		}
+		if d.EDTF() != want {
+			t.Errorf("Parse(%q).EDTF() = %q, want %q", in, d.EDTF(), want)
+		}
 	}
 }

@@ -125,6 +125,9 @@ func appendPoint(b []byte, pt point, role int, sep string) []byte {
 	if pt.scattered {
 		return appendScattered(b, pt)
 	}
+	if pt.partial {
+		return appendPartial(b, pt)
+	}
 	b = appendYearSign(b, pt.year, pt.yx, pt.neg)
 	if pt.sig > 0 {
 		b = append(b, 'S')
@@ -237,8 +240,35 @@ func yearPeople(b *strings.Builder, y int64) {
 }
 
 func (pt point) people(b *strings.Builder) {
-	if pt.approx {
+	if pt.approx && !pt.partial {
 		b.WriteString("c. ")
+	}
+	if pt.partial {
+		plain := pt
+		plain.partial, plain.approx, plain.uncert = false, false, false
+		plain.people(b)
+		b.WriteString(" (")
+		names := [3]string{"year", "month", "day"}
+		for i, first := 0, true; i < pt.parts(); i++ {
+			if pt.q[i] == 0 {
+				continue
+			}
+			if !first {
+				b.WriteString(", ")
+			}
+			first = false
+			b.WriteString(names[i])
+			switch pt.q[i] {
+			case qApprox:
+				b.WriteString(" approximate")
+			case qUncert:
+				b.WriteString(" uncertain")
+			default:
+				b.WriteString(" approximate and uncertain")
+			}
+		}
+		b.WriteByte(')')
+		return
 	}
 	if pt.scattered {
 		q := pt
@@ -366,4 +396,72 @@ func appendScattered(b []byte, pt point) []byte {
 		}
 	}
 	return appendQual(b, pt.approx, pt.uncert)
+}
+
+func qualChar(q uint8) byte {
+	switch q {
+	case qApprox:
+		return '~'
+	case qUncert:
+		return '?'
+	}
+	return '%'
+}
+
+// appendPartial writes a date with qualifiers on its parts: one qualifier
+// at the end when every part has the same; a qualifier after the last of
+// the leading parts that share one, when the rest have none (2004-06~-11);
+// else one before each qualified part (?2004-06-~11).
+func appendPartial(b []byte, pt point) []byte {
+	n := pt.parts()
+	q := pt.q
+	plain := pt
+	plain.partial, plain.approx, plain.uncert = false, false, false
+	text := appendPoint(nil, plain, roleSingle, "/")
+	// the parts of the plain text: year, month, day
+	var cuts [3]int // where each part ends in text
+	k := 0
+	if text[0] == '-' {
+		k = 1
+	}
+	for part := 0; part < n; part++ {
+		for k < len(text) && text[k] != '-' {
+			k++
+		}
+		cuts[part] = k
+		k++
+	}
+	same := true
+	for i := 1; i < n; i++ {
+		same = same && q[i] == q[0]
+	}
+	if same {
+		b = append(b, text...)
+		return appendQual(b, q[0]&qApprox != 0, q[0]&qUncert != 0)
+	}
+	last := 0 // the leading parts q[0..last] share q[0], the rest have none
+	for last+1 < n && q[last+1] == q[0] {
+		last++
+	}
+	prefix := q[0] != 0
+	for i := last + 1; i < n; i++ {
+		prefix = prefix && q[i] == 0
+	}
+	if prefix {
+		b = append(b, text[:cuts[last]]...)
+		b = append(b, qualChar(q[0]))
+		return append(b, text[cuts[last]:]...)
+	}
+	start := 0
+	for part := 0; part < n; part++ {
+		if part > 0 {
+			b = append(b, '-')
+			start = cuts[part-1] + 1
+		}
+		if q[part] != 0 {
+			b = append(b, qualChar(q[part]))
+		}
+		b = append(b, text[start:cuts[part]]...)
+	}
+	return b
 }

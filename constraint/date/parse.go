@@ -1,6 +1,7 @@
 package date
 
 import (
+	"errors"
 	"slices"
 	"strings"
 )
@@ -26,14 +27,21 @@ type point struct {
 	// are 0.
 	scattered  bool
 	ym, mm, dm uint8
-	month      uint8  // 0 none; 1–12 a month; 21–41 a season or other division
-	mx         uint8  // unspecified trailing digits of the month
-	day        uint8  // 0 none
-	dx         uint8  // unspecified trailing digits of the day
-	sig        uint8  // significant digits of the year (level 2 "1950S2"), 0 when not given
-	time       string // a time of day as written ("T23:20:30Z"); kept, never used
-	cal        Calendar
-	prec       Precision
+
+	// partial marks qualifiers on single parts (EDTF level 2: 2004-06~-11,
+	// ?2004-06-~11): q holds the qualifiers in effect on the year, the
+	// month and the day (qApprox, qUncert), and approx and uncert say
+	// whether any part has them.
+	partial bool
+	q       [3]uint8
+	month   uint8  // 0 none; 1–12 a month; 21–41 a season or other division
+	mx      uint8  // unspecified trailing digits of the month
+	day     uint8  // 0 none
+	dx      uint8  // unspecified trailing digits of the day
+	sig     uint8  // significant digits of the year (level 2 "1950S2"), 0 when not given
+	time    string // a time of day as written ("T23:20:30Z"); kept, never used
+	cal     Calendar
+	prec    Precision
 
 	approx, uncert bool
 
@@ -397,13 +405,11 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		if err := p.named(lo, hi, &pt); err != nil {
 			return member{}, err
 		}
-	default:
-		for k := lo; k < hi; k++ {
-			if c := s[k]; c == '?' || c == '~' || c == '%' {
-				return member{}, p.failHint(k, "qualifiers on a single part of a date (EDTF level 2: 2004-06~-11, ?2004-06-~11) are not read",
-					"qualify the whole date at its end: 2004-06-11~")
-			}
+	case strings.ContainsAny(s[lo:hi], "?~%"):
+		if err := p.qualifiedCore(lo, hi, &pt); err != nil {
+			return member{}, err
 		}
+	default:
 		i, err := p.core(lo, hi, &pt)
 		if err != nil {
 			return member{}, err
@@ -412,7 +418,24 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 			return member{}, p.unexpected(i, hi)
 		}
 	}
-	pt.approx, pt.uncert = approx, uncert
+	if pt.partial {
+		// A qualifier after the whole date applies to every part.
+		var q uint8
+		if approx {
+			q |= qApprox
+		}
+		if uncert {
+			q |= qUncert
+		}
+		for k := range pt.q {
+			pt.q[k] |= q
+		}
+		pt.settle()
+	} else {
+		// pt.approx and pt.uncert are set only when qualifiers on every
+		// part came to the same as a whole-date qualifier.
+		pt.approx, pt.uncert = pt.approx || approx, pt.uncert || uncert
+	}
 	if frac != 0 {
 		if pt.yx != 1 && pt.yx != 2 || pt.month != 0 {
 			return member{}, p.failHint(lo, "early, mid and late apply to a decade or a century",
@@ -428,8 +451,8 @@ func (p *parser) unexpected(i, hi int) *ParseError {
 	s := p.in
 	switch c := s[i]; {
 	case c == '?' || c == '~' || c == '%':
-		return p.failHint(i, "a qualifier stands at the end of a date in this version",
-			"write the qualifier after the whole date: 2004-06-11?")
+		return p.failHint(i, "a qualifier stands at the end of a date or next to one of its parts",
+			"write 2004-06-11? (all uncertain) or 2004?-06-11 (the year uncertain)")
 	case c == '-' && i+1 < hi && isDigit(s[i+1]):
 		return p.failHint(i, "expected the end of the date after the day",
 			"a date has at most a year, a month and a day: 1874-05-21")
@@ -1159,6 +1182,169 @@ func (pt *point) runPrecision() Precision {
 		return PrecisionDay
 	case pt.month != 0 || pt.mm != 0:
 		return PrecisionMonth
+	}
+	return PrecisionYear
+}
+
+// The qualifier bits of a part of a date.
+const (
+	qApprox = 1 << iota
+	qUncert
+)
+
+func qualBits(c byte) uint8 {
+	switch c {
+	case '~':
+		return qApprox
+	case '?':
+		return qUncert
+	}
+	return qApprox | qUncert
+}
+
+// qualifiedCore reads an EDTF level-2 date with qualifiers on its parts.
+// A qualifier right after a part applies to it and to every part before it
+// (2004-06~-11: year and month approximate); one right before a part
+// applies to that part alone (?2004-06-~11: year uncertain, day
+// approximate). The date without its qualifiers is read by core.
+func (p *parser) qualifiedCore(lo, hi int, pt *point) error {
+	s := p.in
+	var buf [48]byte
+	var at [48]int // the position in s of each byte of buf
+	b := buf[:0]
+	part := 0
+	var left, right [3]uint8
+	for k := lo; k < hi; k++ {
+		c := s[k]
+		if len(b) == len(buf) {
+			return p.fail(k, "text too long for a date with qualified parts")
+		}
+		switch c {
+		case '?', '~', '%':
+			q := qualBits(c)
+			start := len(b) == 0 || b[len(b)-1] == '-'
+			next := byte(0)
+			if k+1 < hi {
+				next = s[k+1]
+			}
+			if start && left[part] == 0 && (isDigit(next) || next == 'X' || (next == '-' && len(b) == 0)) {
+				left[part] = q
+				continue
+			}
+			if !start && right[part] == 0 && (next == 0 || next == '-' || next == '?' || next == '~' || next == '%') {
+				right[part] = q
+				continue
+			}
+			if !start && (isDigit(next) || next == 'X') {
+				return p.failHint(k, "a qualifier stands before or after a whole part of the date, not inside it",
+					"write 2004-06~-11 (year and month approximate) or 2004-06-~11 (day approximate)")
+			}
+			return p.failHint(k, "too many qualifiers on one part of the date",
+				"write one: ? (uncertain), ~ (approximate) or % (both), before a part or after it")
+		case '-':
+			if len(b) > 0 {
+				part++
+				if part > 2 {
+					return p.fail(k, "expected the end of the date after the day")
+				}
+			}
+		}
+		at[len(b)] = k
+		b = append(b, c)
+	}
+	if len(b) == 0 {
+		return p.fail(lo, "expected a date with the qualifiers")
+	}
+	at[len(b)] = hi
+	sub := parser{in: string(b), cal: p.cal}
+	i, err := sub.core(0, len(b), pt)
+	if err != nil {
+		var pe *ParseError
+		if errors.As(err, &pe) {
+			pe.Input, pe.Pos = p.in, at[min(pe.Pos, len(b))]
+		}
+		return err
+	}
+	if i < len(b) {
+		return p.unexpected(at[i], hi)
+	}
+	if pt.scattered || pt.time != "" || pt.sig != 0 || pt.year > 9999 || pt.year < -9999 {
+		return p.fail(lo, "qualifiers on single parts are read on plain dates only (no scattered X digits, time, significant digits or long year)")
+	}
+	parts := 1
+	if pt.month != 0 || pt.mx != 0 {
+		parts = 2
+		if pt.day != 0 || pt.dx != 0 {
+			parts = 3
+		}
+	}
+	for k := parts; k < 3; k++ {
+		if left[k] != 0 || right[k] != 0 {
+			return p.fail(hi-1, "a qualifier on a part the date does not have")
+		}
+	}
+	for k := 0; k < 3; k++ {
+		pt.q[k] = left[k]
+		for j := k; j < 3; j++ {
+			pt.q[k] |= right[j]
+		}
+		if k >= parts {
+			pt.q[k] = 0
+		}
+	}
+	pt.partial = true
+	pt.settle()
+	return nil
+}
+
+// settle sets approx and uncert from the qualifiers of the parts. When
+// every part has the same qualifiers they are those of the whole date.
+func (pt *point) settle() {
+	parts := pt.parts()
+	same := true
+	for k := 1; k < parts; k++ {
+		same = same && pt.q[k] == pt.q[0]
+	}
+	if same {
+		pt.partial = false
+		pt.approx, pt.uncert = pt.q[0]&qApprox != 0, pt.q[0]&qUncert != 0
+		pt.q = [3]uint8{}
+		return
+	}
+	pt.approx, pt.uncert = false, false
+	for k := 0; k < parts; k++ {
+		pt.approx = pt.approx || pt.q[k]&qApprox != 0
+		pt.uncert = pt.uncert || pt.q[k]&qUncert != 0
+	}
+}
+
+// parts is how many parts pt has: 1 (year), 2 (month) or 3 (day).
+func (pt *point) parts() int {
+	switch {
+	case pt.day != 0 || pt.dx != 0:
+		return 3
+	case pt.month != 0 || pt.mx != 0:
+		return 2
+	}
+	return 1
+}
+
+// widenPrec is the precision whose circa policy widens pt: its own, or for
+// qualified parts the finest approximate part (2004-06~-11 widens by the
+// month policy, ?2004-06-~11 by the day policy).
+func (pt *point) widenPrec() Precision {
+	if !pt.partial {
+		return pt.prec
+	}
+	switch {
+	case pt.q[2]&qApprox != 0:
+		return PrecisionDay
+	case pt.q[1]&qApprox != 0 && pt.month > 12:
+		return PrecisionSeason
+	case pt.q[1]&qApprox != 0:
+		return PrecisionMonth
+	case pt.prec > PrecisionYear:
+		return pt.prec
 	}
 	return PrecisionYear
 }
