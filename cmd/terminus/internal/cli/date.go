@@ -63,6 +63,9 @@ the Julian calendar; --julian reads every unmarked date so.`,
 	return cmd
 }
 
+// maxTextAlternatives is how many alternatives the text output lists.
+const maxTextAlternatives = 12
+
 type dateListJSON struct {
 	SchemaVersion int        `json:"schema_version"`
 	Circa         string     `json:"circa"`
@@ -113,7 +116,7 @@ func newDateJSON(d date.Date, circa date.Circa) dateJSON {
 		Start:       endJSON{sa, su},
 		End:         endJSON{ea, eu},
 	}
-	if d.OneOf {
+	if d.OneOf || len(d.Alternatives) > 1 {
 		j.Alternatives = [][2]*string{}
 		for _, a := range d.Alternatives {
 			j.Alternatives = append(j.Alternatives, [2]*string{isoOrNil(a.First, !a.OpenStart), isoOrNil(a.Last, !a.OpenEnd)})
@@ -151,11 +154,15 @@ func writeDatesText(w io.Writer, ds []date.Date, circa date.Circa) error {
 		row("last day", dayText(d.Latest()))
 		row("precision", d.Precision.String())
 		row("qualifiers", qualifierText(d))
-		if d.OneOf {
+		if d.OneOf || len(d.Alternatives) > 1 {
 			for k, a := range d.Alternatives {
 				label := ""
 				if k == 0 {
 					label = "one of"
+				}
+				if k == maxTextAlternatives && len(d.Alternatives) > maxTextAlternatives+1 {
+					row("", fmt.Sprintf("… and %d more (--format json lists them all)", len(d.Alternatives)-k))
+					break
 				}
 				row(label, dayText(a.First, !a.OpenStart)+" to "+dayText(a.Last, !a.OpenEnd))
 			}

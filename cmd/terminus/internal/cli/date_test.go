@@ -128,3 +128,29 @@ func TestDateJulianFlag(t *testing.T) {
 		t.Errorf("calendars missing:\n%s", out)
 	}
 }
+
+func TestDateScattered(t *testing.T) {
+	// EDTF level 2: "December 25 sometime during the 1500s" is 100 days.
+	out, _, code := execute(t, "date", "15XX-12-25")
+	if code != 0 {
+		t.Fatalf("exit %d", code)
+	}
+	for _, want := range []string{"  one of       1500-12-25 to 1500-12-25\n", "… and 88 more (--format json lists them all)\n", "  precision    day\n"} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	out, _, _ = execute(t, "date", "--format", "json", "15XX-12-25")
+	var got struct {
+		Dates []struct {
+			Alternatives [][2]string `json:"alternatives"`
+		} `json:"dates"`
+	}
+	if err := json.Unmarshal([]byte(out), &got); err != nil {
+		t.Fatal(err)
+	}
+	alts := got.Dates[0].Alternatives
+	if len(alts) != 100 || alts[99] != [2]string{"1599-12-25", "1599-12-25"} {
+		t.Errorf("%d alternatives, last %v; want 100, the last 1599-12-25", len(alts), alts[len(alts)-1])
+	}
+}
