@@ -54,6 +54,10 @@ func parseJSONLine(r rawRecord, p parsed) (parsed, error) {
 	name := r.in.DisplayName()
 	text := r.text
 	if !json.Valid(text) {
+		// The id may still be readable before the syntax error.
+		if id, _, err := takeID(text); err == nil && id != "" {
+			p.id = id
+		}
 		var v any
 		err := json.Unmarshal(text, &v)
 		col := 0
