@@ -54,6 +54,9 @@ func TestParseErrors(t *testing.T) {
 		{"1874-05-21 (Julian", 11, "unexpected word", ""},
 		{"1234567890123 BCE", 0, "year out of range", ""},
 		{strings.Repeat("1", 2000), 1024, "too long", ""},
+		{"156X-12-25 (Julian)", 0, "Gregorian calendar only", ""},
+		{"Y12000 (Julian)", 0, "years -9999 to 9999", ""},
+		{"9999 (Julian)", 0, "years -9999 to 9999", ""},
 	}
 	for _, tt := range tests {
 		t.Run(tt.in, func(t *testing.T) {

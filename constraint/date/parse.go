@@ -436,6 +436,14 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		// part came to the same as a whole-date qualifier.
 		pt.approx, pt.uncert = pt.approx || approx, pt.uncert || uncert
 	}
+	if pt.cal == CalendarJulian {
+		if pt.scattered {
+			return member{}, p.fail(lo, "scattered unspecified digits are read on the Gregorian calendar only")
+		}
+		if a, b := pt.first.Year(), pt.last.Year(); a < -9999 || b > 9999 {
+			return member{}, p.fail(lo, "Julian dates are read for the years -9999 to 9999 (their days are written in four-digit years)")
+		}
+	}
 	if frac != 0 {
 		if pt.yx != 1 && pt.yx != 2 || pt.month != 0 {
 			return member{}, p.failHint(lo, "early, mid and late apply to a decade or a century",
