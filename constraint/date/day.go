@@ -18,7 +18,7 @@ func floorDiv(a, b int64) int64 {
 
 // Gregorian returns the day for year y (astronomical numbering: 0 is 1 BCE),
 // month m (1–12) and day d of the proleptic Gregorian calendar. It does not
-// check that the month and day exist; see [ValidDay].
+// check that the month and day exist; see [DaysInMonth].
 func Gregorian(y int64, m, d int) Day {
 	// Days from civil after H. Hinnant, "chrono-Compatible Low-Level Date
 	// Algorithms", with era arithmetic that holds for every integer year.

@@ -120,3 +120,29 @@ func TestQualifiedEnds(t *testing.T) {
 		}
 	}
 }
+
+func TestSmallAccessors(t *testing.T) {
+	if got := Precision(42).String(); got != "Precision(42)" {
+		t.Errorf("Precision(42).String() = %q", got)
+	}
+	if mustParse(t, "1582 (Julian)").Calendar() != CalendarJulian || mustParse(t, "1582").Calendar() != CalendarGregorian {
+		t.Error("Calendar() does not say how the date was read")
+	}
+	if CalendarJulian.String() != "Julian" || CalendarGregorian.String() != "Gregorian" {
+		t.Error("Calendar names")
+	}
+	if y := Gregorian(-1199, 3, 1).Year(); y != -1199 {
+		t.Errorf("Year() = %d", y)
+	}
+	d := mustParse(t, "1870~")
+	if d.Widened() || !d.Widen(DefaultCirca()).Widened() {
+		t.Error("Widened() does not tell a widened date")
+	}
+	var zero Date
+	if _, ok := zero.Earliest(); ok {
+		t.Error("the zero Date has an earliest day")
+	}
+	if zero.String() != "" || len(zero.Widen(DefaultCirca()).Alternatives) != 0 {
+		t.Error("the zero Date is not empty")
+	}
+}
