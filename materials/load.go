@@ -303,8 +303,9 @@ func crossCheck(d *Dataset, base *Dataset) ErrorList {
 		} else {
 			ids[m.ID] = m
 		}
-		for _, n := range append([]string{m.ID}, m.Names...) {
-			k := fold(n)
+		keys := m.foldedNames()
+		for i, n := range append([]string{m.ID}, m.Names...) {
+			k := keys[i]
 			if other, dup := names[k]; dup && other != m && other.ID != m.ID {
 				errs = append(errs, &Error{File: m.File, Line: m.Line,
 					Msg:        fmt.Sprintf("name %q of %q is also a name of %q (%s)", n, m.ID, other.ID, nameWhere[k]),

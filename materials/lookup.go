@@ -29,8 +29,13 @@ func buildIndex(ms []*Material) *index {
 	}
 	for _, m := range ms {
 		// Names before the id, so that a suggestion shows a name.
-		for _, n := range append(slices.Clone(m.Names), m.ID) {
-			k := fold(n)
+		keys := m.foldedNames()
+		for i := range keys {
+			j := (i + 1) % len(keys)
+			k, n := keys[j], m.ID
+			if j > 0 {
+				n = m.Names[j-1]
+			}
 			if k == "" {
 				continue
 			}
@@ -190,6 +195,14 @@ func ciShort(name string) string {
 // ligatures folded to plain letters (é→e, ß→ss, æ→ae, ü→u), and everything
 // but letters and digits dropped.
 func fold(s string) string {
+	plain := true
+	for i := 0; i < len(s) && plain; i++ {
+		c := s[i]
+		plain = 'a' <= c && c <= 'z' || '0' <= c && c <= '9'
+	}
+	if plain {
+		return s
+	}
 	var b strings.Builder
 	b.Grow(len(s))
 	for _, r := range s {
@@ -213,42 +226,60 @@ func fold(s string) string {
 	return b.String()
 }
 
-// foldGroups pairs plain forms with the Latin letters (with diacritics)
-// and ligatures of the European languages that fold to them, after the
-// Unicode decompositions of Latin-1 Supplement and Latin Extended-A; ß, æ,
-// œ, ø, ł, đ and þ are written out as is common practice.
-var foldGroups = [...]struct{ plain, from string }{
-	{"a", "àáâãäåāăąǎÀÁÂÃÄÅĀĂĄǍ"},
-	{"ae", "æǽÆǼ"},
-	{"c", "çćĉċčÇĆĈĊČ"},
-	{"d", "ďđðĎĐÐ"},
-	{"e", "èéêëēĕėęěÈÉÊËĒĔĖĘĚ"},
-	{"g", "ĝğġģĜĞĠĢ"},
-	{"h", "ĥħĤĦ"},
-	{"i", "ìíîïĩīĭįıǐÌÍÎÏĨĪĬĮİǏ"},
-	{"ij", "ĳĲ"},
-	{"j", "ĵĴ"},
-	{"k", "ķĶ"},
-	{"l", "ĺļľŀłĹĻĽĿŁ"},
-	{"n", "ñńņňŉÑŃŅŇ"},
-	{"o", "òóôõöøōŏőǒÒÓÔÕÖØŌŎŐǑ"},
-	{"oe", "œŒ"},
-	{"r", "ŕŗřŔŖŘ"},
-	{"s", "śŝşšſŚŜŞŠș"},
-	{"ss", "ß"},
-	{"t", "ţťŧŢŤŦțȚ"},
-	{"th", "þÞ"},
-	{"u", "ùúûüũūŭůűųǔÙÚÛÜŨŪŬŮŰŲǓ"},
-	{"w", "ŵŴ"},
-	{"y", "ýÿŷÝŸŶ"},
-	{"z", "źżžŹŻŽ"},
-}
-
+// foldRune gives the plain form of a Latin letter with diacritics or a
+// ligature of the European languages, after the Unicode decompositions of
+// Latin-1 Supplement and Latin Extended-A; ß, æ, œ, ø, ł, đ and þ are
+// written out as is common practice.
 func foldRune(r rune) (string, bool) {
-	for _, g := range foldGroups {
-		if strings.ContainsRune(g.from, r) {
-			return g.plain, true
-		}
+	switch r {
+	case 'à', 'á', 'â', 'ã', 'ä', 'å', 'ā', 'ă', 'ą', 'ǎ', 'À', 'Á', 'Â', 'Ã', 'Ä', 'Å', 'Ā', 'Ă', 'Ą', 'Ǎ':
+		return "a", true
+	case 'æ', 'ǽ', 'Æ', 'Ǽ':
+		return "ae", true
+	case 'ç', 'ć', 'ĉ', 'ċ', 'č', 'Ç', 'Ć', 'Ĉ', 'Ċ', 'Č':
+		return "c", true
+	case 'ď', 'đ', 'ð', 'Ď', 'Đ', 'Ð':
+		return "d", true
+	case 'è', 'é', 'ê', 'ë', 'ē', 'ĕ', 'ė', 'ę', 'ě', 'È', 'É', 'Ê', 'Ë', 'Ē', 'Ĕ', 'Ė', 'Ę', 'Ě':
+		return "e", true
+	case 'ĝ', 'ğ', 'ġ', 'ģ', 'Ĝ', 'Ğ', 'Ġ', 'Ģ':
+		return "g", true
+	case 'ĥ', 'ħ', 'Ĥ', 'Ħ':
+		return "h", true
+	case 'ì', 'í', 'î', 'ï', 'ĩ', 'ī', 'ĭ', 'į', 'ı', 'ǐ', 'Ì', 'Í', 'Î', 'Ï', 'Ĩ', 'Ī', 'Ĭ', 'Į', 'İ', 'Ǐ':
+		return "i", true
+	case 'ĳ', 'Ĳ':
+		return "ij", true
+	case 'ĵ', 'Ĵ':
+		return "j", true
+	case 'ķ', 'Ķ':
+		return "k", true
+	case 'ĺ', 'ļ', 'ľ', 'ŀ', 'ł', 'Ĺ', 'Ļ', 'Ľ', 'Ŀ', 'Ł':
+		return "l", true
+	case 'ñ', 'ń', 'ņ', 'ň', 'ŉ', 'Ñ', 'Ń', 'Ņ', 'Ň':
+		return "n", true
+	case 'ò', 'ó', 'ô', 'õ', 'ö', 'ø', 'ō', 'ŏ', 'ő', 'ǒ', 'Ò', 'Ó', 'Ô', 'Õ', 'Ö', 'Ø', 'Ō', 'Ŏ', 'Ő', 'Ǒ':
+		return "o", true
+	case 'œ', 'Œ':
+		return "oe", true
+	case 'ŕ', 'ŗ', 'ř', 'Ŕ', 'Ŗ', 'Ř':
+		return "r", true
+	case 'ś', 'ŝ', 'ş', 'š', 'ſ', 'Ś', 'Ŝ', 'Ş', 'Š', 'ș':
+		return "s", true
+	case 'ß':
+		return "ss", true
+	case 'ţ', 'ť', 'ŧ', 'Ţ', 'Ť', 'Ŧ', 'ț', 'Ț':
+		return "t", true
+	case 'þ', 'Þ':
+		return "th", true
+	case 'ù', 'ú', 'û', 'ü', 'ũ', 'ū', 'ŭ', 'ů', 'ű', 'ų', 'ǔ', 'Ù', 'Ú', 'Û', 'Ü', 'Ũ', 'Ū', 'Ŭ', 'Ů', 'Ű', 'Ų', 'Ǔ':
+		return "u", true
+	case 'ŵ', 'Ŵ':
+		return "w", true
+	case 'ý', 'ÿ', 'ŷ', 'Ý', 'Ÿ', 'Ŷ':
+		return "y", true
+	case 'ź', 'ż', 'ž', 'Ź', 'Ż', 'Ž':
+		return "z", true
 	}
 	return "", false
 }

@@ -136,6 +136,22 @@ type Material struct {
 
 	File string
 	Line int
+
+	keys []string // folded id and names, as the loader computed them
+}
+
+// foldedNames returns the lookup keys of the id and of every name, in that
+// order.
+func (m *Material) foldedNames() []string {
+	if len(m.keys) == len(m.Names)+1 {
+		return m.keys
+	}
+	keys := make([]string, 0, len(m.Names)+1)
+	keys = append(keys, fold(m.ID))
+	for _, n := range m.Names {
+		keys = append(keys, fold(n))
+	}
+	return keys
 }
 
 // Name returns the material's display name: its first name, or its id.

@@ -276,17 +276,20 @@ func (p *parser) material(n *yaml.Node) *Material {
 			"write it like "+quote(suggestID(m.ID)))
 	}
 	what := fmt.Sprintf("material %q", m.ID)
+	m.keys = []string{fold(m.ID)}
 	if f, ok := given(fs, "names"); ok {
 		for _, nn := range p.list(f.val, "names") {
 			nn = deref(nn)
 			s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
+			k := fold(s)
 			switch {
 			case s == "":
 				p.errAt(nn, "empty name in "+what, "")
-			case fold(s) == "":
+			case k == "":
 				p.errAt(nn, fmt.Sprintf("name %q of %s has no letters or digits", s, what), "")
 			default:
 				m.Names = append(m.Names, s)
+				m.keys = append(m.keys, k)
 			}
 		}
 	}
