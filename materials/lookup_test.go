@@ -192,3 +192,17 @@ func TestLevenshtein(t *testing.T) {
 		}
 	}
 }
+
+func TestValidID(t *testing.T) {
+	for _, tc := range []struct {
+		id string
+		ok bool
+	}{
+		{"prussian-blue", true}, {"pigment-red-83", true}, {"a", true}, {"2b", true},
+		{"", false}, {"-a", false}, {"a-", false}, {"a--b", false}, {"Prussian-blue", false}, {"a_b", false}, {"é", false},
+	} {
+		if got := validID(tc.id); got != tc.ok {
+			t.Errorf("validID(%q): got %v, want %v", tc.id, got, tc.ok)
+		}
+	}
+}

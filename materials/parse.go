@@ -484,9 +484,23 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 	return ms, ok
 }
 
-var idPattern = regexp.MustCompile(`^[a-z0-9]+(-[a-z0-9]+)*$`)
-
-func validID(s string) bool { return idPattern.MatchString(s) }
+// validID reports whether s is lower case letters and digits in words
+// joined by single hyphens: "prussian-blue", "pigment-red-83".
+func validID(s string) bool {
+	if s == "" || s[0] == '-' || s[len(s)-1] == '-' {
+		return false
+	}
+	for i := 0; i < len(s); i++ {
+		c := s[i]
+		switch {
+		case 'a' <= c && c <= 'z', '0' <= c && c <= '9':
+		case c == '-' && s[i-1] != '-':
+		default:
+			return false
+		}
+	}
+	return true
+}
 
 // suggestID turns "Prussian Blue" into "prussian-blue".
 func suggestID(s string) string {
