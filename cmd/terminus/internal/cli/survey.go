@@ -5,6 +5,7 @@ import (
 	"fmt"
 	"io"
 	"os"
+	"runtime/debug"
 
 	"github.com/spf13/cobra"
 
@@ -38,6 +39,24 @@ func isTerminal(w io.Writer) bool {
 	}
 	st, err := f.Stat()
 	return err == nil && st.Mode()&os.ModeCharDevice != 0
+}
+
+// tuneGC raises the garbage collector's target for a survey, unless the
+// user set GOGC or GOMEMLIMIT, and returns the function that puts the old
+// settings back. A survey's live heap is small and bounded (the reorder
+// window), so the default target of 100 % makes the collector run every
+// few hundred records: at 400 % it takes about a third less CPU time,
+// with a soft memory limit of 192 MiB as a guard.
+func tuneGC() func() {
+	if os.Getenv("GOGC") != "" || os.Getenv("GOMEMLIMIT") != "" {
+		return func() {}
+	}
+	oldPercent := debug.SetGCPercent(400)
+	oldLimit := debug.SetMemoryLimit(192 << 20)
+	return func() {
+		debug.SetGCPercent(oldPercent)
+		debug.SetMemoryLimit(oldLimit)
+	}
 }
 
 // NewSurveyCmd builds "terminus survey".
@@ -145,6 +164,7 @@ errors count toward exit 1); 2 for bad usage or an input that cannot be read.`,
 			if isTerminal(s.Err) {
 				opt.Progress = s.Err
 			}
+			defer tuneGC()()
 			counts, err := survey.Run(cmd.Context(), inputs, w, opt)
 			if err != nil {
 				var ie *survey.InputError

@@ -40,7 +40,7 @@ func appendString(b []byte, s string) []byte {
 
 // Render encodes the record.
 func (j *JSONLWriter) Render(o *Outcome) error {
-	b := make([]byte, 0, 512)
+	b := make([]byte, 0, 8<<10)
 	b = append(b, `{"id":`...)
 	b = appendString(b, o.ID)
 	b = append(b, `,"file":`...)
@@ -70,13 +70,12 @@ func (j *JSONLWriter) Render(o *Outcome) error {
 			b = appendString(b, o.Summary.Hint)
 		}
 	case o.Result != nil:
-		var buf bytes.Buffer
-		buf.Grow(4096)
-		if err := report.JSONLine(&buf, o.Result); err != nil {
+		b = append(b, `,"result":`...)
+		buf := bytes.NewBuffer(b)
+		if err := report.JSONLine(buf, o.Result); err != nil {
 			return err
 		}
-		b = append(b, `,"result":`...)
-		b = append(b, bytes.TrimSuffix(buf.Bytes(), []byte("\n"))...)
+		b = bytes.TrimSuffix(buf.Bytes(), []byte("\n"))
 	}
 	b = append(b, "}\n"...)
 	o.Out = b
