@@ -29,7 +29,7 @@ func Problems(err error) []Problem {
 	for _, e := range errorsAsList(err) {
 		msg := e.Msg
 		if e.Suggestion != "" {
-			msg += " (hint: " + e.Suggestion + ")"
+			msg += "; " + e.Suggestion
 		}
 		out = append(out, Problem{File: e.File, Line: e.Line, Column: e.Column, Msg: msg})
 	}
