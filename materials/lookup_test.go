@@ -206,3 +206,24 @@ func TestValidID(t *testing.T) {
 		}
 	}
 }
+
+// TestHandMadeDataset checks that a dataset put together in code, without
+// the loader, still answers.
+func TestHandMadeDataset(t *testing.T) {
+	d := &Dataset{
+		Materials: []*Material{{ID: "lead-white", Names: []string{"lead white", "Bleiweiß"}, CAS: "1319-46-6"}},
+		Sources:   []Source{{Key: "k", Cite: "a cite"}},
+	}
+	if m, err := d.Lookup("bleiweiss"); err != nil || m.ID != "lead-white" {
+		t.Errorf("Lookup: got %v, %v", m, err)
+	}
+	if m, err := d.Lookup("1319-46-6"); err != nil || m.ID != "lead-white" {
+		t.Errorf("Lookup by CAS: got %v, %v", m, err)
+	}
+	if s, ok := d.Source("k"); !ok || s.Cite != "a cite" {
+		t.Errorf("Source: got %v, %v", s, ok)
+	}
+	if c, area := d.Arrival(d.Materials[0], "NL"); c != nil || area != "" {
+		t.Errorf("Arrival without regions: got %v %q", c, area)
+	}
+}

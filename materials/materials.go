@@ -201,6 +201,14 @@ const DataVersion = "2026.12"
 
 // Source returns the bibliography entry for key.
 func (d *Dataset) Source(key string) (Source, bool) {
+	if d.sources == nil { // a dataset put together by hand
+		for _, s := range d.Sources {
+			if s.Key == key {
+				return s, true
+			}
+		}
+		return Source{}, false
+	}
 	if i, ok := d.sources[key]; ok {
 		return d.Sources[i], true
 	}
