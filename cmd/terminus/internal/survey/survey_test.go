@@ -1,0 +1,353 @@
+package survey
+
+import (
+	"bytes"
+	"context"
+	"encoding/json"
+	"errors"
+	"fmt"
+	"io"
+	"os"
+	"path/filepath"
+	"strings"
+	"sync/atomic"
+	"testing"
+
+	"terminus/constraint"
+	"terminus/materials"
+)
+
+func TestCSVSplitter(t *testing.T) {
+	tests := []struct {
+		name  string
+		lines []string
+		want  []string
+		cols  []int
+	}{
+		{"plain", []string{"a,b,c"}, []string{"a", "b", "c"}, []int{1, 3, 5}},
+		{"empty fields", []string{",,"}, []string{"", "", ""}, []int{1, 2, 3}},
+		{"quoted comma", []string{`x,"a, b",y`}, []string{"x", "a, b", "y"}, []int{1, 3, 10}},
+		{"doubled quote", []string{`"say ""hi""",z`}, []string{`say "hi"`, "z"}, []int{1, 14}},
+		{"spans lines", []string{`1,"two`, `lines",3`}, []string{"1", "two\nlines", "3"}, []int{1, 3, 8}},
+		{"stray quote kept", []string{`5" x 7",b`}, []string{`5" x 7"`, "b"}, []int{1, 9}},
+		{"text after closing quote", []string{`"a"b,c`}, []string{"ab", "c"}, []int{1, 6}},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			var s csvSplitter
+			done := false
+			for i, l := range tc.lines {
+				done = s.feed([]byte(l), i+1)
+				if done != (i == len(tc.lines)-1) {
+					t.Fatalf("after line %d: done %v", i+1, done)
+				}
+			}
+			var got []string
+			var cols []int
+			for _, f := range s.fields {
+				got = append(got, f.Text)
+				cols = append(cols, f.Column)
+			}
+			if fmt.Sprint(got) != fmt.Sprint(tc.want) || fmt.Sprint(cols) != fmt.Sprint(tc.cols) {
+				t.Errorf("got %q at %v, want %q at %v", got, cols, tc.want, tc.cols)
+			}
+		})
+	}
+}
+
+func TestTakeID(t *testing.T) {
+	tests := []struct {
+		name, line, id string
+		wantErr        bool
+	}{
+		{"first", `{"id": "a", "title": "t"}`, "a", false},
+		{"middle", `{"title": "t", "id": "b", "place": "NL"}`, "b", false},
+		{"last", `{"title": "t", "id": "c"}`, "c", false},
+		{"only", `{"id": "d"}`, "d", false},
+		{"number", `{"id": 42, "title": "t"}`, "42", false},
+		{"null", `{"id": null, "title": "t"}`, "", false},
+		{"nested ids are not the record's", `{"findings": [{"id": "f-1", "material": "smalt"}]}`, "", false},
+		{"escaped", `{"id": "x\"y", "title": "t"}`, `x"y`, false},
+		{"object", `{"id": {"a": 1}}`, "", true},
+	}
+	for _, tc := range tests {
+		t.Run(tc.name, func(t *testing.T) {
+			id, rest, err := takeID([]byte(tc.line))
+			if (err != nil) != tc.wantErr {
+				t.Fatalf("error %v, want error %v", err, tc.wantErr)
+			}
+			if err != nil {
+				return
+			}
+			if id != tc.id {
+				t.Errorf("id %q, want %q", id, tc.id)
+			}
+			if len(rest) != len(tc.line) {
+				t.Errorf("the rest %q is not as long as the line: columns would move", rest)
+			}
+			var m map[string]any
+			if err := json.Unmarshal(rest, &m); err != nil {
+				t.Fatalf("the rest %q is not JSON: %v", rest, err)
+			}
+			if _, has := m["id"]; has {
+				t.Errorf("the rest %q still has the id", rest)
+			}
+			if tc.id == "" && !strings.Contains(tc.line, `"id": null`) && string(rest) != tc.line {
+				t.Errorf("a line without a top-level id changed: %q", rest)
+			}
+		})
+	}
+	// The rest decodes as a case, and positions in it are those of the line.
+	line := `{"id": "a-1", "title": "t", "claimz": []}`
+	_, rest, _ := takeID([]byte(line))
+	_, err := constraint.ParseCase("c.jsonl", rest, "json")
+	var ce *constraint.Error
+	if !errors.As(err, &ce) || ce.Column != strings.Index(line, `"claimz"`)+1 {
+		t.Errorf("error %v: want the column of \"claimz\" in the line, %d", err, strings.Index(line, `"claimz"`)+1)
+	}
+}
+
+func TestLineReader(t *testing.T) {
+	long := strings.Repeat("x", 100)
+	in := "\xef\xbb\xbfone\r\ntwo\n" + long + "\nthree"
+	lr := newLineReader(strings.NewReader(in), 50)
+	type got struct {
+		text    string
+		line    int
+		tooLong bool
+	}
+	var all []got
+	for {
+		text, line, tooLong, err := lr.next()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		if err != nil {
+			t.Fatal(err)
+		}
+		all = append(all, got{string(text), line, tooLong})
+	}
+	want := []got{{"one", 1, false}, {"two", 2, false}, {long[:50], 3, true}, {"three", 4, false}}
+	if fmt.Sprint(all) != fmt.Sprint(want) {
+		t.Errorf("got %v\nwant %v", all, want)
+	}
+}
+
+func openText(t *testing.T, name, text string) *Input {
+	t.Helper()
+	p := filepath.Join(t.TempDir(), name)
+	if err := os.WriteFile(p, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	in, err := Open(p, nil, "")
+	if err != nil {
+		t.Fatal(err)
+	}
+	return in
+}
+
+func TestCSVHeader(t *testing.T) {
+	in := openText(t, "h.csv", "ID, Not Before ,Material,Claimed,Shelf mark\n")
+	for col, idx := range map[string]int{colID: 0, colNotBefore: 1, colMaterials: 2, colClaim: 3} {
+		if in.known[col] != idx {
+			t.Errorf("column %s at %d, want %d (known %v)", col, in.known[col], idx, in.known)
+		}
+	}
+	if fmt.Sprint(in.Free) != "[Shelf mark]" {
+		t.Errorf("free columns %q", in.Free)
+	}
+	for _, tc := range []struct{ text, want string }{
+		{"id,claim,Claim\n", `names the column "claim" twice`},
+		{"title,tittle\n", `did you mean "title"?`},
+		{"\"id,claim\n", "does not close"},
+	} {
+		p := filepath.Join(t.TempDir(), "bad.csv")
+		os.WriteFile(p, []byte(tc.text), 0o644)
+		_, err := Open(p, nil, "")
+		var ie *InputError
+		if !errors.As(err, &ie) || !strings.Contains(err.Error(), tc.want) {
+			t.Errorf("%q: error %v, want an InputError with %q", tc.text, err, tc.want)
+		}
+	}
+}
+
+func TestCSVUnclosedQuote(t *testing.T) {
+	in := openText(t, "q.csv", "id,title\na,ok\nb,\"never closed\nc,lost\n")
+	var got []string
+	for {
+		r, err := in.next()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		if err != nil {
+			t.Fatal(err)
+		}
+		s := fmt.Sprintf("%d", r.line)
+		if r.err != nil {
+			s += " " + r.err.Error()
+		}
+		got = append(got, s)
+	}
+	if len(got) != 2 || got[0] != "2" || !strings.Contains(got[1], "q.csv:3: a quoted field opens here and is not closed") {
+		t.Errorf("records %q", got)
+	}
+}
+
+// probe is a Writer that checks the order of writes and counts the
+// records rendered but not yet written.
+type probe struct {
+	inFlight, most atomic.Int64
+	lines          []int
+	delay          func(o *Outcome)
+}
+
+func (p *probe) Render(o *Outcome) error {
+	n := p.inFlight.Add(1)
+	for {
+		m := p.most.Load()
+		if n <= m || p.most.CompareAndSwap(m, n) {
+			break
+		}
+	}
+	if p.delay != nil {
+		p.delay(o)
+	}
+	return nil
+}
+
+func (p *probe) Write(o *Outcome) error {
+	p.inFlight.Add(-1)
+	p.lines = append(p.lines, o.Line)
+	return nil
+}
+
+func (p *probe) Close(Counts) error { return nil }
+
+func builtin(t testing.TB) *materials.Dataset {
+	ds, err := materials.Builtin()
+	if err != nil {
+		t.Fatal(err)
+	}
+	return ds
+}
+
+func TestRunWindowBoundsRecordsInFlight(t *testing.T) {
+	const n, window = 300, 8
+	in := openText(t, "c.jsonl", string(benchCollection(n, false)))
+	// The first record is slow: without the window every later record
+	// would pile up behind it.
+	p := &probe{delay: func(o *Outcome) {
+		if o.Line == 1 {
+			for range 200000 {
+				_ = fmt.Sprint(o.Line)
+			}
+		}
+	}}
+	c, err := Run(context.Background(), []*Input{in}, p, Options{Dataset: builtin(t), Workers: 4, Window: window})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c.Records != n || len(p.lines) != n {
+		t.Fatalf("%d records counted, %d written, want %d", c.Records, len(p.lines), n)
+	}
+	for i, l := range p.lines {
+		if l != i+1 {
+			t.Fatalf("write %d is line %d: out of order", i+1, l)
+		}
+	}
+	if m := p.most.Load(); m > window {
+		t.Errorf("%d records were in flight at once, more than the window of %d", m, window)
+	}
+}
+
+func TestRunCanceled(t *testing.T) {
+	in := openText(t, "c.jsonl", string(benchCollection(500, false)))
+	ctx, cancel := context.WithCancel(context.Background())
+	p := &probe{delay: func(o *Outcome) {
+		if o.Line == 20 {
+			cancel()
+		}
+	}}
+	c, err := Run(ctx, []*Input{in}, p, Options{Dataset: builtin(t), Workers: 2})
+	if !errors.Is(err, context.Canceled) {
+		t.Errorf("error %v, want context.Canceled", err)
+	}
+	if c.Records >= 500 {
+		t.Errorf("all %d records were written after the cancel", c.Records)
+	}
+}
+
+type failWriter struct{ probe }
+
+func (f *failWriter) Write(o *Outcome) error {
+	if o.Line == 3 {
+		return errors.New("disk full")
+	}
+	return f.probe.Write(o)
+}
+
+func TestRunWriterErrorStops(t *testing.T) {
+	in := openText(t, "c.jsonl", string(benchCollection(200, false)))
+	c, err := Run(context.Background(), []*Input{in}, &failWriter{}, Options{Dataset: builtin(t)})
+	if err == nil || err.Error() != "disk full" || c.Records != 2 {
+		t.Errorf("error %v after %d records, want disk full after 2", err, c.Records)
+	}
+}
+
+func TestReportSpill(t *testing.T) {
+	var out bytes.Buffer
+	rw := newReportWriter(&out, ReportInfo{}, false, 64)
+	var c Counts
+	for i := range 50 {
+		o := &Outcome{ID: fmt.Sprintf("r-%02d", i), File: "f", Line: i + 1, Summary: Summary{Status: StatusConsistent, Claims: "1840 consistent"}}
+		if i%10 == 0 {
+			o.Summary = Summary{Status: StatusError, Err: "bad", Fails: true}
+		}
+		if err := rw.Render(o); err != nil {
+			t.Fatal(err)
+		}
+		if err := rw.Write(o); err != nil {
+			t.Fatal(err)
+		}
+		c.add(o.Summary)
+	}
+	spilled := rw.sections[StatusConsistent].file
+	if spilled == nil {
+		t.Fatal("the section did not move to a temporary file past its limit")
+	}
+	name := spilled.Name()
+	if err := rw.Close(c); err != nil {
+		t.Fatal(err)
+	}
+	if _, err := os.Stat(name); !errors.Is(err, os.ErrNotExist) {
+		t.Errorf("the temporary file %s is still there: %v", name, err)
+	}
+	s := out.String()
+	last := -1
+	for i := range 50 {
+		if i%10 == 0 {
+			continue
+		}
+		at := strings.Index(s, fmt.Sprintf("| r-%02d |", i))
+		if at < last {
+			t.Fatalf("row r-%02d missing or out of order", i)
+		}
+		last = at
+	}
+	if !strings.Contains(s, "## Record errors: not checked (5)") || !strings.Contains(s, "## Consistent (45)") {
+		t.Errorf("section counts wrong:\n%s", s)
+	}
+	if strings.Index(s, "## Record errors") > strings.Index(s, "## Consistent") {
+		t.Error("errors should come before the consistent records")
+	}
+}
+
+func TestCountsString(t *testing.T) {
+	var c Counts
+	for _, s := range []Status{StatusConsistent, StatusError, StatusExcluded, StatusConsistent} {
+		c.add(Summary{Status: s})
+	}
+	if got, want := c.String(), "4 records: 1 excluded, 1 error, 2 consistent"; got != want {
+		t.Errorf("got %q, want %q", got, want)
+	}
+}
