@@ -81,7 +81,7 @@
 //	c. 1870, c.1870, ca 1870, ca. 1870, circa 1870,
 //	about 1870, around 1870, approx. 1870       1870~
 //	c. 1870?                                    1870%
-//	1870s, 1870's                               187X (1870–1879)
+//	1870s, 1870's, the 1870s                    187X (1870–1879)
 //	1800s                                       18XX (1800–1899): a year ending
 //	                                            in 00 reads as the wider century
 //	1870s?                                      187X?
@@ -107,6 +107,9 @@
 // a circa word before the first only ("c. 1870-1875" is 1870~/1875~); an
 // EDTF interval with "/" keeps its qualifiers per end ("c. 1870/1879" is
 // 1870~/1879).
+//
+// Centuries by name ("19th century") are not read: the words are used
+// for 1801–1900 and for 1800–1899 alike; write 1800s, 18XX or 1801/1900.
 //
 // "Early", "mid" and "late" are thirds of the decade or century that
 // overlap by one year at the seams, so a year at a seam belongs to both.

@@ -50,6 +50,8 @@ func TestParseErrors(t *testing.T) {
 		{"Y", 1, "expected the digits of a year after Y", ""},
 		{"1950S5", 5, "significant digits: 5 is not between 1 and the 4 digits", ""},
 		{"Smarch 1874", 0, "expected a month name or an EDTF date", ""},
+		{"187x", 0, "expected a month name or an EDTF date", "upper-case X: 187X"},
+		{"19th century", 0, "expected a month name or an EDTF date", "1800s"},
 		{"30 February 1874", 0, "day 30: February 1874 has 28 days", ""},
 		{"1874-05-21 (Julian", 11, "unexpected word", ""},
 		{"1234567890123 BCE", 0, "year out of range", ""},

@@ -349,8 +349,20 @@ func (p *parser) named(lo, hi int, pt *point) error {
 				break
 			}
 		}
-		return p.failHint(k, "unexpected word in a date: expected a month name or an EDTF date",
-			"write 21 May 1874, May 1874, 1874-05-21, c. 1870, 1870s or 1200 BCE")
+		hint := "write 21 May 1874, May 1874, 1874-05-21, c. 1870, 1870s or 1200 BCE"
+		w := ""
+		for _, tk := range toks[:n] {
+			if tk.lo == k {
+				w = s[tk.lo:tk.hi]
+			}
+		}
+		switch {
+		case strings.ContainsAny(w, "0123456789") && strings.ContainsAny(w, "xu"):
+			hint = "unspecified digits are an upper-case X: " + strings.NewReplacer("x", "X", "u", "X").Replace(w)
+		case strings.EqualFold(w, "century") || strings.HasSuffix(strings.ToLower(w), "th") || strings.HasSuffix(strings.ToLower(w), "st") || strings.HasSuffix(strings.ToLower(w), "nd") || strings.HasSuffix(strings.ToLower(w), "rd"):
+			hint = "centuries are not read by name: write 18XX or 1800s (the years 1800–1899), or 1801/1900"
+		}
+		return p.failHint(k, "unexpected word in a date: expected a month name or an EDTF date", hint)
 	}
 	num := func(t tok, what string, digits int) (int64, error) {
 		if t.hi-t.lo > digits || t.hi == t.lo {

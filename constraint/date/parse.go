@@ -340,6 +340,9 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		approx, friendlyForm = true, true
 		lo, hi = p.trim(lo+2, hi)
 	}
+	if word && hasFold(s, lo, hi, "the ") { // "the 1870s", "c. the early 1870s"
+		lo, hi = p.trim(lo+len("the "), hi)
+	}
 	// Early, mid, late.
 	frac := 0
 	for i, w := range []string{"early", "mid", "late"} {
