@@ -6,6 +6,7 @@ import (
 	"encoding/csv"
 	"encoding/json"
 	"fmt"
+	"os"
 	"regexp"
 	"strconv"
 	"strings"
@@ -362,5 +363,53 @@ func TestSurveyParseOnly(t *testing.T) {
 	total, by := countsLine(t, errs)
 	if total != 9 || by["parsed"] != 7 || by["errors"] != 2 || !strings.Contains(out, ",a-2,") && !strings.Contains(out, "a-2,") {
 		t.Errorf("counts %d %v\n%s", total, by, out)
+	}
+}
+
+func TestSurveyFreeColumnsOfSeveralFiles(t *testing.T) {
+	a := writeCase(t, "a.csv", "id,materials,claim,place,shelf\na-1,fixture yellow,1840,NL,S1\n")
+	b := writeCase(t, "b.csv", "box,id,materials,claim,place\nB9,b-1,fixture yellow,1840,NL\n")
+	out, errs, code := execute(t, "survey", "--materials", fixture, "--format", "csv", a, b)
+	if code != 0 {
+		t.Fatalf("exit %d: %s", code, errs)
+	}
+	rows, err := csv.NewReader(strings.NewReader(out)).ReadAll()
+	if err != nil || len(rows) != 3 {
+		t.Fatalf("rows %q: %v", rows, err)
+	}
+	if got := strings.Join(rows[0][:5], ","); got != "id,file,line,shelf,box" {
+		t.Errorf("header starts %q, want the union of the free columns in order of appearance", got)
+	}
+	if rows[1][3] != "S1" || rows[1][4] != "" || rows[2][3] != "" || rows[2][4] != "B9" {
+		t.Errorf("free values %q %q", rows[1][:5], rows[2][:5])
+	}
+}
+
+func TestSurveyEmptyInput(t *testing.T) {
+	p := writeCase(t, "empty.jsonl", "\n\n")
+	out, errs, code := execute(t, "survey", "--format", "csv", p)
+	if code != 0 || !strings.HasPrefix(out, "id,file,line,status,") || strings.Count(out, "\n") != 1 || !strings.Contains(errs, "survey: 0 records") {
+		t.Errorf("exit %d, stdout %q, stderr %q", code, out, errs)
+	}
+}
+
+func TestIsTerminal(t *testing.T) {
+	// The progress line goes only to a terminal: never to a buffer, a file
+	// or a pipe.
+	f, err := os.CreateTemp(t.TempDir(), "stderr")
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer f.Close()
+	r, w, err := os.Pipe()
+	if err != nil {
+		t.Fatal(err)
+	}
+	defer r.Close()
+	defer w.Close()
+	for name, out := range map[string]any{"buffer": &bytes.Buffer{}, "file": f, "pipe": w} {
+		if isTerminal(out.(interface{ Write([]byte) (int, error) })) {
+			t.Errorf("%s taken for a terminal", name)
+		}
 	}
 }

@@ -12,6 +12,7 @@ import (
 	"strings"
 	"sync/atomic"
 	"testing"
+	"time"
 
 	"terminus/constraint"
 	"terminus/materials"
@@ -349,5 +350,26 @@ func TestCountsString(t *testing.T) {
 	}
 	if got, want := c.String(), "4 records: 1 excluded, 1 error, 2 consistent"; got != want {
 		t.Errorf("got %q, want %q", got, want)
+	}
+}
+
+func TestProgress(t *testing.T) {
+	in := openText(t, "c.jsonl", string(benchCollection(40, false)))
+	var buf bytes.Buffer
+	// The first record takes long enough for the ticker to draw.
+	p := &probe{delay: func(o *Outcome) {
+		if o.Line == 1 {
+			time.Sleep(700 * time.Millisecond)
+		}
+	}}
+	if _, err := Run(context.Background(), []*Input{in}, p, Options{Dataset: builtin(t), Progress: &buf}); err != nil {
+		t.Fatal(err)
+	}
+	s := buf.String()
+	if !strings.HasSuffix(s, "\r\x1b[K") {
+		t.Errorf("the progress line is not cleared at the end: %q", s)
+	}
+	if !strings.Contains(s, "survey: 0 records [") || !strings.Contains(s, "%") {
+		t.Errorf("no progress line with a bar (the input's size is known): %q", s)
 	}
 }
