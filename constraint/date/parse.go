@@ -1221,7 +1221,7 @@ func qualBits(c byte) uint8 {
 func (p *parser) qualifiedCore(lo, hi int, pt *point) error {
 	s := p.in
 	var buf [48]byte
-	var at [48]int // the position in s of each byte of buf
+	var at [len(buf) + 1]int // the position in s of each byte of buf, and of its end
 	b := buf[:0]
 	part := 0
 	var left, right [3]uint8
