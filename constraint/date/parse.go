@@ -319,7 +319,7 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 	if lo == hi {
 		return member{}, p.failHint(lo, "expected a date", "write a year (1874), a month (1874-05) or a day (1874-05-21)")
 	}
-	var approx, uncert, friendlyForm bool
+	var approx, uncert bool
 	word := isLetter(s[lo]) // only then can a friendly word lead
 	// A circa word: "c. 1870", "c.1870", "ca 1870", "circa 1870".
 	for _, w := range circaWords {
@@ -331,13 +331,13 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		}
 		n := lo + len(w)
 		if n < hi && (isSpace(s[n]) || (w[len(w)-1] == '.' && isDigit(s[n]))) {
-			approx, friendlyForm = true, true
+			approx = true
 			lo, hi = p.trim(n, hi)
 			break
 		}
 	}
 	if !approx && hi-lo > 2 && (s[lo] == 'c' || s[lo] == 'C') && isSpace(s[lo+1]) {
-		approx, friendlyForm = true, true
+		approx = true
 		lo, hi = p.trim(lo+2, hi)
 	}
 	if word && hasFold(s, lo, hi, "the ") { // "the 1870s", "c. the early 1870s"
@@ -398,12 +398,10 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		if err := p.eraYear(lo, hi, era, &pt); err != nil {
 			return member{}, err
 		}
-		friendlyForm = true
 	case hi-lo >= 4 && (s[hi-1] == 's' || s[hi-1] == 'S') && isDigit(s[lo]):
 		if err := p.plural(lo, hi, &pt); err != nil {
 			return member{}, err
 		}
-		friendlyForm = true
 	case p.hasLetter(lo, hi):
 		if err := p.named(lo, hi, &pt); err != nil {
 			return member{}, err
@@ -454,7 +452,6 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		}
 		return fraction(pt, frac), nil
 	}
-	_ = friendlyForm
 	return member{start: pt, end: pt}, nil
 }
 
@@ -488,10 +485,6 @@ func quoteChar(s string, i int) string {
 // X digits, a time of day; no qualifiers) and returns where it stopped.
 func (p *parser) core(i, hi int, pt *point) (int, error) {
 	s := p.in
-	lo0 := i
-	if s[i] == '-' {
-		lo0++
-	}
 	if s[i] == 'Y' {
 		return p.longYear(i, hi, pt)
 	}
@@ -508,7 +501,7 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		i++
 	}
 	n := i - j
-	if n > 4 && j == lo0 {
+	if n > 4 {
 		return i, p.failHint(j, "a year of more than four digits takes the Y prefix",
 			"write Y"+s[j:i]+" for the year, or 1874-05-21 (with hyphens) for a day")
 	}
