@@ -162,14 +162,14 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		fmt.Fprintln(ew, "### References")
 		fmt.Fprintln(ew)
 		for _, s := range r.Sources {
-			cite := s.Cite
+			cite := mdEscape(s.Cite)
 			if cite == "" {
 				cite = "(not in the bibliography)"
 			}
-			if s.URL != "" {
+			if s.URL != "" && !strings.ContainsAny(s.URL, "<> ") {
 				cite += ", <" + s.URL + ">"
 			}
-			fmt.Fprintf(ew, "- [%s] %s\n", s.Key, mdEscape(cite))
+			fmt.Fprintf(ew, "- [%s] %s\n", mdEscape(s.Key), cite)
 		}
 		fmt.Fprintln(ew)
 	}
