@@ -4,21 +4,19 @@ import (
 	"strconv"
 	"strings"
 	"unicode/utf8"
-
-	"gopkg.in/yaml.v3"
 )
 
 // fastYAML reads the plain subset of YAML that materials files are written
 // in — block mappings and sequences, one-line flow lists and mappings,
-// plain, single- and double-quoted scalars, comments — into the node tree
-// yaml.v3 would give (kinds, values, styles, lines and columns; the tags
-// that matter here, null and integer). It is several times quicker than the
+// plain, single- and double-quoted scalars, comments — into the tree that
+// yaml.v3's would convert to (kinds, values, quoting, lines and columns;
+// the tags that matter here, null and integer). It is several times quicker than the
 // general decoder. Anything outside the subset (anchors, tags, block
 // scalars, multi-line values, tabs, several documents, a value it is not
 // sure of) makes it give up with ok false, and the general decoder reads
 // the file instead, so it never changes what a file means or which errors
 // it gets. A differential fuzz test holds it to that.
-func fastYAML(data []byte) (root *yaml.Node, ok bool) {
+func fastYAML(data []byte) (root *node, ok bool) {
 	if !utf8.Valid(data) {
 		return nil, false
 	}
@@ -48,23 +46,28 @@ type fastLine struct {
 type fastParser struct {
 	lines []fastLine
 	i     int
-	slab  []yaml.Node // nodes are taken from here, a chunk at a time
+	slab  []node // nodes are taken from here, a chunk at a time
 }
 
-// node returns a new node, zeroed, from the current chunk.
-func (p *fastParser) node(kind yaml.Kind, tag string, line, col int) *yaml.Node {
+// node returns a new node from the current chunk.
+func (p *fastParser) node(kind kindOfNode, line, col int) *node {
 	if len(p.slab) == cap(p.slab) {
-		p.slab = make([]yaml.Node, 0, 512)
+		p.slab = make([]node, 0, 1024)
 	}
 	p.slab = p.slab[:len(p.slab)+1]
 	n := &p.slab[len(p.slab)-1]
-	n.Kind, n.Tag, n.Line, n.Column = kind, tag, line, col
+	n.kind, n.line, n.col = kind, int32(line), int32(col)
 	return n
 }
 
-func (p *fastParser) scalar(value, tag string, style yaml.Style, line, col int) *yaml.Node {
-	n := p.node(yaml.ScalarNode, tag, line, col)
-	n.Value, n.Style = value, style
+// scalar returns a scalar node; a plain one gets the decoder's reading of
+// null and integer.
+func (p *fastParser) scalar(value string, quoted bool, line, col int) *node {
+	n := p.node(scalarNode, line, col)
+	n.value, n.quoted = value, quoted
+	if !quoted {
+		n.null, n.integer = plainTag(value)
+	}
 	return n
 }
 
@@ -113,10 +116,13 @@ func (p *fastParser) split(s string) bool {
 	return true
 }
 
-// printable is yaml.v3's set of printable characters, without the tab.
+// printable is yaml.v3's set of printable characters, without the tab and
+// without the ones it also reads as line breaks (U+0085, U+2028, U+2029).
 func printable(r rune) bool {
 	switch {
-	case r == 0x85, r >= 0x20 && r <= 0x7E, r >= 0xA0 && r <= 0xD7FF:
+	case r == 0x2028 || r == 0x2029:
+		return false
+	case r >= 0x20 && r <= 0x7E, r >= 0xA0 && r <= 0xD7FF:
 		return true
 	case r >= 0xE000 && r <= 0xFFFD:
 		return r != 0xFEFF
@@ -129,7 +135,7 @@ func printable(r rune) bool {
 func (p *fastParser) cur() *fastLine { return &p.lines[p.i] }
 
 // block reads the node that starts at the current line, at column col.
-func (p *fastParser) block(col int) (*yaml.Node, bool) {
+func (p *fastParser) block(col int) (*node, bool) {
 	l := p.cur()
 	if l.col != col {
 		return nil, false
@@ -142,9 +148,9 @@ func (p *fastParser) block(col int) (*yaml.Node, bool) {
 
 func isDash(s string) bool { return s == "-" || strings.HasPrefix(s, "- ") }
 
-func (p *fastParser) sequence(col int) (*yaml.Node, bool) {
+func (p *fastParser) sequence(col int) (*node, bool) {
 	l := p.cur()
-	seq := p.node(yaml.SequenceNode, "!!seq", l.num, col)
+	seq := p.node(seqNode, l.num, col)
 	for p.i < len(p.lines) {
 		l = p.cur()
 		if l.col < col {
@@ -167,14 +173,14 @@ func (p *fastParser) sequence(col int) (*yaml.Node, bool) {
 		if !ok {
 			return nil, false
 		}
-		seq.Content = append(seq.Content, item)
+		seq.content = append(seq.content, item)
 	}
 	return seq, true
 }
 
 // item reads a sequence item or mapping value that starts on the current
 // line at its offset: a nested mapping or sequence, or a one-line value.
-func (p *fastParser) item(col int) (*yaml.Node, bool) {
+func (p *fastParser) item(col int) (*node, bool) {
 	l := p.cur()
 	s := l.text[l.off:]
 	if isDash(s) {
@@ -196,9 +202,9 @@ func (p *fastParser) noContinuation(col int) bool {
 	return p.i == len(p.lines) || p.lines[p.i].col <= col
 }
 
-func (p *fastParser) mapping(col int) (*yaml.Node, bool) {
+func (p *fastParser) mapping(col int) (*node, bool) {
 	l := p.cur()
-	m := p.node(yaml.MappingNode, "!!map", l.num, col)
+	m := p.node(mapNode, l.num, col)
 	for p.i < len(p.lines) {
 		l = p.cur()
 		if l.col < col {
@@ -211,7 +217,7 @@ func (p *fastParser) mapping(col int) (*yaml.Node, bool) {
 		if !isKey {
 			return nil, false
 		}
-		m.Content = append(m.Content, k)
+		m.content = append(m.content, k)
 		// The value: on this line after ": ", or a block on the next lines.
 		rest := l.text[after:]
 		trimmed := strings.TrimLeft(rest, " ")
@@ -227,13 +233,13 @@ func (p *fastParser) mapping(col int) (*yaml.Node, bool) {
 				if !ok {
 					return nil, false
 				}
-				m.Content = append(m.Content, v)
+				m.content = append(m.content, v)
 			case next.col == col && isDash(next.text[next.off:]):
 				v, ok := p.sequence(col)
 				if !ok {
 					return nil, false
 				}
-				m.Content = append(m.Content, v)
+				m.content = append(m.content, v)
 			default:
 				return nil, false
 			}
@@ -245,7 +251,7 @@ func (p *fastParser) mapping(col int) (*yaml.Node, bool) {
 		if !ok {
 			return nil, false
 		}
-		m.Content = append(m.Content, v)
+		m.content = append(m.content, v)
 		p.i++
 		if !p.noContinuation(col) {
 			return nil, false
@@ -262,9 +268,14 @@ func (l *fastLine) column(off int) int {
 	return utf8.RuneCountInString(l.text[:off]) + 1
 }
 
+// maxKey is the longest key the quick reader takes: YAML allows a simple
+// key of at most 1024 characters, and the reader leaves the edge to the
+// decoder.
+const maxKey = 1000
+
 // key reads "key:" at the line's offset; after is the byte offset just past
 // the colon.
-func (p *fastParser) key(l *fastLine) (k *yaml.Node, after int, ok bool) {
+func (p *fastParser) key(l *fastLine) (k *node, after int, ok bool) {
 	s := l.text[l.off:]
 	if s == "" {
 		return nil, 0, false
@@ -272,14 +283,10 @@ func (p *fastParser) key(l *fastLine) (k *yaml.Node, after int, ok bool) {
 	switch s[0] {
 	case '"', '\'':
 		v, n, ok := quoted(s)
-		if !ok || n >= len(s) || s[n] != ':' || (n+1 < len(s) && s[n+1] != ' ') {
+		if !ok || n >= len(s) || s[n] != ':' || (n+1 < len(s) && s[n+1] != ' ') || n > maxKey {
 			return nil, 0, false
 		}
-		style := yaml.DoubleQuotedStyle
-		if s[0] == '\'' {
-			style = yaml.SingleQuotedStyle
-		}
-		return p.scalar(v, "!!str", style, l.num, l.col), l.off + n + 1, true
+		return p.scalar(v, true, l.num, l.col), l.off + n + 1, true
 	}
 	if !plainStart(s, false) {
 		return nil, 0, false
@@ -288,12 +295,14 @@ func (p *fastParser) key(l *fastLine) (k *yaml.Node, after int, ok bool) {
 		switch {
 		case s[i] == '#' && i > 0 && s[i-1] == ' ':
 			return nil, 0, false
+		case i > maxKey:
+			return nil, 0, false
 		case s[i] == ':' && (i+1 == len(s) || s[i+1] == ' '):
 			name := strings.TrimRight(s[:i], " ")
 			if name == "" || strings.ContainsAny(name, "\"'[]{},") {
 				return nil, 0, false
 			}
-			return p.scalar(name, plainTag(name), 0, l.num, l.col), l.off + i + 1, true
+			return p.scalar(name, false, l.num, l.col), l.off + i + 1, true
 		}
 	}
 	return nil, 0, false
@@ -301,9 +310,9 @@ func (p *fastParser) key(l *fastLine) (k *yaml.Node, after int, ok bool) {
 
 // lineValue reads a value that must end on its line: a flow collection, a
 // quoted or a plain scalar, then at most a comment.
-func (p *fastParser) lineValue(l *fastLine) (*yaml.Node, bool) {
+func (p *fastParser) lineValue(l *fastLine) (*node, bool) {
 	s := l.text[l.off:]
-	var n *yaml.Node
+	var n *node
 	var used int
 	switch s[0] {
 	case '[', '{':
@@ -318,11 +327,7 @@ func (p *fastParser) lineValue(l *fastLine) (*yaml.Node, bool) {
 		if !ok {
 			return nil, false
 		}
-		style := yaml.DoubleQuotedStyle
-		if s[0] == '\'' {
-			style = yaml.SingleQuotedStyle
-		}
-		n = p.scalar(v, "!!str", style, l.num, l.col)
+		n = p.scalar(v, true, l.num, l.col)
 		used = w
 	default:
 		if !plainStart(s, false) {
@@ -336,7 +341,7 @@ func (p *fastParser) lineValue(l *fastLine) (*yaml.Node, bool) {
 		if strings.Contains(v, ": ") || strings.HasSuffix(v, ":") {
 			return nil, false
 		}
-		return p.scalar(v, plainTag(v), 0, l.num, l.col), true
+		return p.scalar(v, false, l.num, l.col), true
 	}
 	rest := strings.TrimLeft(s[used:], " ")
 	if rest != "" && (rest[0] != '#' || used == len(s) || s[used] != ' ') {
@@ -369,31 +374,28 @@ func plainStart(s string, inFlow bool) bool {
 	return true
 }
 
-// plainTag resolves the tags that matter here: null and decimal integers.
-// Any other plain scalar that the decoder might read as something else (a
-// bool, a float, a date) is still text to the schema check, which reads
-// every scalar's value as written.
-func plainTag(v string) string {
+// plainTag resolves the tags that matter here, as the decoder does: null,
+// and integers. Any other plain scalar that the decoder might read as
+// something else (a bool, a float, a date) is still text to the schema
+// check, which reads every scalar's value as written.
+func plainTag(v string) (null, integer bool) {
 	switch v {
 	case "", "~", "null", "Null", "NULL":
-		return "!!null"
+		return true, false
 	}
-	digits := v
-	if v[0] == '+' || v[0] == '-' {
-		digits = v[1:]
+	// As the decoder reads integers: a plain scalar that begins with a
+	// digit or a sign and parses, underscores dropped, in Go's base-prefix
+	// syntax ("030" octal, "0x1F", "0b101"), as a signed or unsigned 64-bit
+	// integer ("08" and numbers too large are not).
+	if c := v[0]; c != '+' && c != '-' && (c < '0' || c > '9') {
+		return false, false
 	}
-	if digits != "" && allDigits(digits) {
-		// As the decoder reads them: a leading zero is octal ("030" is an
-		// integer, "08" is not), and a number too large is not an integer.
-		if _, err := strconv.ParseInt(v, 0, 64); err == nil {
-			return "!!int"
-		}
-		if _, err := strconv.ParseUint(v, 0, 64); err == nil {
-			return "!!int"
-		}
-		return "!!float"
+	plain := strings.ReplaceAll(v, "_", "")
+	if _, err := strconv.ParseInt(plain, 0, 64); err == nil {
+		return false, true
 	}
-	return "!!str"
+	_, err := strconv.ParseUint(plain, 0, 64)
+	return false, err == nil
 }
 
 // quoted reads a quoted scalar at the start of s, returning its value and
@@ -480,7 +482,7 @@ func (f *flow) space() {
 	}
 }
 
-func (f *flow) node() (*yaml.Node, bool) {
+func (f *flow) node() (*node, bool) {
 	f.space()
 	if f.i >= len(f.s) {
 		return nil, false
@@ -492,14 +494,13 @@ func (f *flow) node() (*yaml.Node, bool) {
 			return nil, false
 		}
 		defer func() { f.depth-- }()
-		kind, tag, end := yaml.SequenceNode, "!!seq", byte(']')
+		kind, end := seqNode, byte(']')
 		if c == '{' {
-			kind, tag, end = yaml.MappingNode, "!!map", '}'
+			kind, end = mapNode, '}'
 		}
-		n := f.p.node(kind, tag, f.line, col)
-		n.Style = yaml.FlowStyle
-		if kind == yaml.MappingNode {
-			n.Content = make([]*yaml.Node, 0, 2*(strings.Count(f.s[f.i:], ",")+1))
+		n := f.p.node(kind, f.line, col)
+		if kind == mapNode {
+			n.content = make([]*node, 0, 2*(strings.Count(f.s[f.i:], ",")+1))
 		}
 		f.i++
 		f.space()
@@ -508,13 +509,14 @@ func (f *flow) node() (*yaml.Node, bool) {
 			return n, true
 		}
 		for {
+			start := f.i
 			item, ok := f.node()
 			if !ok {
 				return nil, false
 			}
 			f.space()
-			if kind == yaml.MappingNode {
-				if item.Kind != yaml.ScalarNode || f.i >= len(f.s) || f.s[f.i] != ':' {
+			if kind == mapNode {
+				if item.kind != scalarNode || f.i-start > maxKey || f.i >= len(f.s) || f.s[f.i] != ':' {
 					return nil, false
 				}
 				f.i++
@@ -525,13 +527,13 @@ func (f *flow) node() (*yaml.Node, bool) {
 				if !ok {
 					return nil, false
 				}
-				n.Content = append(n.Content, item, v)
+				n.content = append(n.content, item, v)
 				f.space()
 			} else {
 				if f.i < len(f.s) && f.s[f.i] == ':' {
 					return nil, false // a one-pair mapping inside a list
 				}
-				n.Content = append(n.Content, item)
+				n.content = append(n.content, item)
 			}
 			if f.i >= len(f.s) {
 				return nil, false
@@ -555,12 +557,8 @@ func (f *flow) node() (*yaml.Node, bool) {
 		if !ok {
 			return nil, false
 		}
-		style := yaml.DoubleQuotedStyle
-		if c == '\'' {
-			style = yaml.SingleQuotedStyle
-		}
 		f.i += w
-		return f.p.scalar(v, "!!str", style, f.line, col), true
+		return f.p.scalar(v, true, f.line, col), true
 	default:
 		rest := f.s[f.i:]
 		if !plainStart(rest, true) {
@@ -590,15 +588,6 @@ func (f *flow) node() (*yaml.Node, bool) {
 			return nil, false
 		}
 		f.i += end
-		return f.p.scalar(v, plainTag(v), 0, f.line, col), true
+		return f.p.scalar(v, false, f.line, col), true
 	}
-}
-
-func allDigits(s string) bool {
-	for i := 0; i < len(s); i++ {
-		if s[i] < '0' || s[i] > '9' {
-			return false
-		}
-	}
-	return true
 }

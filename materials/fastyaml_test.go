@@ -13,44 +13,38 @@ import (
 
 // decodeYAML reads text with the general decoder, as the loader does when
 // the quick reader gives up.
-func decodeYAML(text string) (*yaml.Node, error) {
+func decodeYAML(text string) (*node, error) {
 	var doc yaml.Node
 	if err := yaml.Unmarshal([]byte(text), &doc); err != nil {
 		return nil, err
 	}
+	root := &doc
 	if doc.Kind == yaml.DocumentNode && len(doc.Content) == 1 {
-		return doc.Content[0], nil
+		root = doc.Content[0]
 	}
-	return &doc, nil
+	return fromYAML(root, map[*yaml.Node]*node{}), nil
 }
 
 // sameTree compares what the schema check reads of two trees: kinds,
-// values, styles, positions, and whether a scalar is null or an integer.
-func sameTree(a, b *yaml.Node, path string) error {
-	if a.Kind != b.Kind || a.Line != b.Line || a.Column != b.Column {
-		return fmt.Errorf("%s: kind/line/column %v %d:%d, decoder %v %d:%d", path, a.Kind, a.Line, a.Column, b.Kind, b.Line, b.Column)
+// values, quoting, positions, and whether a scalar is null or an integer.
+func sameTree(a, b *node, path string) error {
+	if a.kind != b.kind || a.line != b.line || a.col != b.col {
+		return fmt.Errorf("%s: kind/line/column %v %d:%d, decoder %v %d:%d", path, a.kind, a.line, a.col, b.kind, b.line, b.col)
 	}
-	if a.Kind == yaml.ScalarNode {
-		if a.Value != b.Value {
-			return fmt.Errorf("%s: value %q, decoder %q", path, a.Value, b.Value)
+	if a.kind == scalarNode {
+		if a.value != b.value {
+			return fmt.Errorf("%s: value %q, decoder %q", path, a.value, b.value)
 		}
-		if (a.Tag == "!!null") != (b.Tag == "!!null") {
-			return fmt.Errorf("%s: tag %s, decoder %s (value %q)", path, a.Tag, b.Tag, a.Value)
-		}
-		if a.Tag == "!!int" && b.Tag != "!!int" {
-			return fmt.Errorf("%s: tag %s, decoder %s (value %q)", path, a.Tag, b.Tag, a.Value)
-		}
-		quotedA := a.Style&(yaml.DoubleQuotedStyle|yaml.SingleQuotedStyle) != 0
-		quotedB := b.Style&(yaml.DoubleQuotedStyle|yaml.SingleQuotedStyle) != 0
-		if quotedA != quotedB {
-			return fmt.Errorf("%s: style %v, decoder %v", path, a.Style, b.Style)
+		if a.null != b.null || a.integer != b.integer || a.quoted != b.quoted {
+			return fmt.Errorf("%s: null/integer/quoted %v/%v/%v, decoder %v/%v/%v (value %q)",
+				path, a.null, a.integer, a.quoted, b.null, b.integer, b.quoted, a.value)
 		}
 	}
-	if len(a.Content) != len(b.Content) {
-		return fmt.Errorf("%s: %d children, decoder %d", path, len(a.Content), len(b.Content))
+	if len(a.content) != len(b.content) {
+		return fmt.Errorf("%s: %d children, decoder %d", path, len(a.content), len(b.content))
 	}
-	for i := range a.Content {
-		if err := sameTree(a.Content[i], b.Content[i], fmt.Sprintf("%s/%d", path, i)); err != nil {
+	for i := range a.content {
+		if err := sameTree(a.content[i], b.content[i], fmt.Sprintf("%s/%d", path, i)); err != nil {
 			return err
 		}
 	}

@@ -31,7 +31,7 @@ type parser struct {
 
 func parseFile(f rawFile, regions *Regions) *fileResult {
 	p := &parser{file: f.name, regions: regions}
-	var root *yaml.Node
+	var root *node
 	if f.toml {
 		root = p.tomlTree(f.data)
 	} else {
@@ -48,7 +48,7 @@ func parseFile(f rawFile, regions *Regions) *fileResult {
 var yamlLine = regexp.MustCompile(`line (\d+)`)
 
 // yamlTree reads the one document of a YAML file.
-func (p *parser) yamlTree(data []byte) *yaml.Node {
+func (p *parser) yamlTree(data []byte) *node {
 	if root, ok := fastYAML(data); ok {
 		return root
 	}
@@ -63,14 +63,15 @@ func (p *parser) yamlTree(data []byte) *yaml.Node {
 	}
 	var extra yaml.Node
 	if err := dec.Decode(&extra); err == nil {
-		p.errAt(&extra, "a materials file holds one YAML document; found a second", "remove the '---' line or split the file")
+		p.errAt(&node{line: int32(extra.Line), col: int32(extra.Column)}, "a materials file holds one YAML document; found a second", "remove the '---' line or split the file")
 	} else if !errors.Is(err, io.EOF) {
 		p.syntax(err)
 	}
+	root := &doc
 	if doc.Kind == yaml.DocumentNode && len(doc.Content) == 1 {
-		return doc.Content[0]
+		root = doc.Content[0]
 	}
-	return &doc
+	return fromYAML(root, map[*yaml.Node]*node{})
 }
 
 // syntax reports a YAML syntax error at the line the decoder names.
@@ -87,17 +88,17 @@ func (p *parser) syntax(err error) {
 		Suggestion: "check the indentation and quoting on this line and the one before; quote dates and places"})
 }
 
-func (p *parser) errAt(n *yaml.Node, msg, hint string) {
+func (p *parser) errAt(n *node, msg, hint string) {
 	line, col := 1, 0
-	if n != nil && n.Line > 0 {
-		line, col = n.Line, n.Column
+	if n != nil && n.line > 0 {
+		line, col = int(n.line), int(n.col)
 	}
 	p.errs = append(p.errs, &Error{File: p.file, Line: line, Column: col, Msg: msg, Suggestion: hint})
 }
 
 // field is one key of a mapping.
 type field struct {
-	key, val *yaml.Node
+	key, val *node
 	// typo marks an unknown key that stands in for this one (already
 	// reported with a "did you mean"), so that its absence is not reported
 	// a second time.
@@ -107,35 +108,35 @@ type field struct {
 // fields returns the keys of mapping n, reporting keys not in allowed
 // (with the nearest allowed key) and keys given twice. what names n in
 // messages ("material", "milestone").
-func (p *parser) fields(n *yaml.Node, what string, allowed []string) map[string]field {
+func (p *parser) fields(n *node, what string, allowed []string) map[string]field {
 	n = deref(n)
-	if n.Kind != yaml.MappingNode {
-		p.errAt(n, fmt.Sprintf("expected a %s as a mapping of %s; found %s", what, strings.Join(allowed, ", "), nodeKind(n)), "")
+	if n.kind != mapNode {
+		p.errAt(n, fmt.Sprintf("expected a %s as a mapping of %s; found %s", what, strings.Join(allowed, ", "), describe(n)), "")
 		return nil
 	}
-	out := make(map[string]field, len(n.Content)/2)
-	for i := 0; i+1 < len(n.Content); i += 2 {
-		k, v := deref(n.Content[i]), deref(n.Content[i+1])
-		if k.Kind != yaml.ScalarNode {
-			p.errAt(k, fmt.Sprintf("expected a key of the %s; found %s", what, nodeKind(k)), "")
+	out := make(map[string]field, len(n.content)/2)
+	for i := 0; i+1 < len(n.content); i += 2 {
+		k, v := deref(n.content[i]), deref(n.content[i+1])
+		if k.kind != scalarNode {
+			p.errAt(k, fmt.Sprintf("expected a key of the %s; found %s", what, describe(k)), "")
 			continue
 		}
-		if !slices.Contains(allowed, k.Value) {
+		if !slices.Contains(allowed, k.value) {
 			hint := "the keys of a " + what + " are " + strings.Join(allowed, ", ")
-			if s := nearestWords(k.Value, allowed, 1); len(s) == 1 {
+			if s := nearestWords(k.value, allowed, 1); len(s) == 1 {
 				hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
 				if _, given := out[s[0]]; !given {
 					out[s[0]] = field{key: k, typo: true}
 				}
 			}
-			p.errAt(k, fmt.Sprintf("unknown key %q in a %s", k.Value, what), hint)
+			p.errAt(k, fmt.Sprintf("unknown key %q in a %s", k.value, what), hint)
 			continue
 		}
-		if prev, dup := out[k.Value]; dup && !prev.typo {
-			p.errAt(k, fmt.Sprintf("key %q is given twice in this %s (first on line %d)", k.Value, what, prev.key.Line), "keep one of them")
+		if prev, dup := out[k.value]; dup && !prev.typo {
+			p.errAt(k, fmt.Sprintf("key %q is given twice in this %s (first on line %d)", k.value, what, int(prev.key.line)), "keep one of them")
 			continue
 		}
-		out[k.Value] = field{key: k, val: v}
+		out[k.value] = field{key: k, val: v}
 	}
 	return out
 }
@@ -146,27 +147,24 @@ func given(fs map[string]field, key string) (field, bool) {
 	return f, ok && !f.typo
 }
 
-func deref(n *yaml.Node) *yaml.Node {
-	for i := 0; n != nil && n.Kind == yaml.AliasNode && i < 8; i++ {
-		n = n.Alias
-	}
+func deref(n *node) *node {
 	if n == nil {
-		return &yaml.Node{}
+		return &node{}
 	}
 	return n
 }
 
-func nodeKind(n *yaml.Node) string {
-	switch n.Kind {
-	case yaml.MappingNode:
+func describe(n *node) string {
+	switch n.kind {
+	case mapNode:
 		return "a mapping"
-	case yaml.SequenceNode:
+	case seqNode:
 		return "a list"
-	case yaml.ScalarNode:
-		if n.Tag == "!!null" {
+	case scalarNode:
+		if n.null {
 			return "nothing"
 		}
-		return fmt.Sprintf("%q", n.Value)
+		return fmt.Sprintf("%q", n.value)
 	}
 	return "something else"
 }
@@ -176,18 +174,18 @@ func (p *parser) str(f field, what string) string {
 	if f.val == nil || f.typo {
 		return ""
 	}
-	if f.val.Kind != yaml.ScalarNode {
-		p.errAt(f.val, fmt.Sprintf("expected %s as text; found %s", what, nodeKind(f.val)), "")
+	if f.val.kind != scalarNode {
+		p.errAt(f.val, fmt.Sprintf("expected %s as text; found %s", what, describe(f.val)), "")
 		return ""
 	}
-	if f.val.Tag == "!!null" {
+	if f.val.null {
 		return ""
 	}
-	return f.val.Value
+	return f.val.value
 }
 
 // required reads a key that must be there and not empty.
-func (p *parser) required(fs map[string]field, key, what string, at *yaml.Node) string {
+func (p *parser) required(fs map[string]field, key, what string, at *node) string {
 	f, ok := fs[key]
 	if !ok {
 		p.errAt(at, fmt.Sprintf("%s has no %q", what, key), "")
@@ -200,9 +198,9 @@ func (p *parser) required(fs map[string]field, key, what string, at *yaml.Node) 
 	return s
 }
 
-func (p *parser) top(root *yaml.Node) ([]Source, []*Material) {
+func (p *parser) top(root *node) ([]Source, []*Material) {
 	root = deref(root)
-	if root.Kind == yaml.ScalarNode && root.Tag == "!!null" {
+	if root.kind == scalarNode && root.null {
 		return nil, nil
 	}
 	fs := p.fields(root, "materials file", []string{"sources", "materials"})
@@ -225,27 +223,27 @@ func (p *parser) top(root *yaml.Node) ([]Source, []*Material) {
 	return sources, mats
 }
 
-func (p *parser) list(n *yaml.Node, what string) []*yaml.Node {
+func (p *parser) list(n *node, what string) []*node {
 	n = deref(n)
-	if n.Kind == yaml.ScalarNode && n.Tag == "!!null" {
+	if n.kind == scalarNode && n.null {
 		return nil
 	}
-	if n.Kind != yaml.SequenceNode {
-		p.errAt(n, fmt.Sprintf("expected %s as a list; found %s", what, nodeKind(n)), "start each entry with '- '")
+	if n.kind != seqNode {
+		p.errAt(n, fmt.Sprintf("expected %s as a list; found %s", what, describe(n)), "start each entry with '- '")
 		return nil
 	}
-	return n.Content
+	return n.content
 }
 
 var sourceKeys = []string{"key", "cite", "url"}
 
-func (p *parser) source(n *yaml.Node) (Source, bool) {
+func (p *parser) source(n *node) (Source, bool) {
 	n = deref(n)
 	fs := p.fields(n, "source", sourceKeys)
 	if fs == nil {
 		return Source{}, false
 	}
-	s := Source{File: p.file, Line: n.Line}
+	s := Source{File: p.file, Line: int(n.line)}
 	s.Key = p.required(fs, "key", "a source", n)
 	s.Cite = p.required(fs, "cite", fmt.Sprintf("source %q", s.Key), n)
 	if f, ok := given(fs, "url"); ok {
@@ -263,13 +261,13 @@ func (p *parser) source(n *yaml.Node) (Source, bool) {
 
 var materialKeys = []string{"id", "names", "class", "origin", "colour_index", "cas", "formula", "note", "milestones"}
 
-func (p *parser) material(n *yaml.Node) *Material {
+func (p *parser) material(n *node) *Material {
 	n = deref(n)
 	fs := p.fields(n, "material", materialKeys)
 	if fs == nil {
 		return nil
 	}
-	m := &Material{File: p.file, Line: n.Line}
+	m := &Material{File: p.file, Line: int(n.line)}
 	m.ID = p.required(fs, "id", "a material", n)
 	if m.ID != "" && !validID(m.ID) {
 		p.errAt(fs["id"].val, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
@@ -322,7 +320,7 @@ func (p *parser) material(n *yaml.Node) *Material {
 	return m
 }
 
-func (p *parser) oneOf(fs map[string]field, key, what string, at *yaml.Node, allowed []string) string {
+func (p *parser) oneOf(fs map[string]field, key, what string, at *node, allowed []string) string {
 	s := p.required(fs, key, what, at)
 	if s == "" || slices.Contains(allowed, s) {
 		return s
@@ -362,13 +360,13 @@ func (p *parser) colourIndex(f field, what string) *ColourIndex {
 
 var milestoneKeys = []string{"kind", "date", "place", "source", "basis", "note", "allowance"}
 
-func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
+func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	n = deref(n)
 	fs := p.fields(n, "milestone", milestoneKeys)
 	if fs == nil {
 		return Milestone{}, false
 	}
-	ms := Milestone{File: p.file, Line: n.Line, Column: n.Column}
+	ms := Milestone{File: p.file, Line: int(n.line), Column: int(n.col)}
 	where := "a milestone of " + what
 	ok := true
 	kind := p.required(fs, "kind", where, n)
@@ -393,19 +391,19 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 			p.errAt(f.val, "empty date in "+where, `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
 			ok = false
 		} else if d, err := date.Parse(text); err != nil {
-			col := f.val.Column
+			col := int(f.val.col)
 			msg := err.Error()
 			var pe *date.ParseError
 			if errors.As(err, &pe) {
 				msg = pe.Msg
-				if f.val.Value == text {
-					if f.val.Style&(yaml.DoubleQuotedStyle|yaml.SingleQuotedStyle) != 0 {
+				if f.val.value == text {
+					if f.val.quoted {
 						col++
 					}
 					col += pe.Pos
 				}
 			}
-			p.errs = append(p.errs, &Error{File: p.file, Line: f.val.Line, Column: col,
+			p.errs = append(p.errs, &Error{File: p.file, Line: int(f.val.line), Column: col,
 				Msg: fmt.Sprintf("bad date %q in %s: %s", text, where, msg), Err: err,
 				Suggestion: `write an EDTF date such as "1856", "1830~", "18XX" or "1704/1706", quoted`})
 			ok = false
@@ -424,7 +422,7 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 				hint = "did you mean " + orList(s) + "? (" + hint + ")"
 			}
 			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where)
-			if f.val.Tag == "!!int" {
+			if f.val.integer {
 				msg += " (an unquoted number loses its leading zeros)"
 			}
 			p.errAt(f.val, msg, hint)
@@ -472,7 +470,7 @@ func (p *parser) milestone(n *yaml.Node, what string) (Milestone, bool) {
 				if errors.As(err, &pe) {
 					msg = pe.Msg
 				}
-				p.errs = append(p.errs, &Error{File: p.file, Line: f.val.Line, Column: f.val.Column,
+				p.errs = append(p.errs, &Error{File: p.file, Line: int(f.val.line), Column: int(f.val.col),
 					Msg: fmt.Sprintf("bad allowance %q in %s: %s", text, where, msg), Err: err,
 					Suggestion: "write an ISO 8601 duration such as P10Y or P6M"})
 				ok = false

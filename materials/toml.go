@@ -10,7 +10,6 @@ import (
 	"time"
 
 	"github.com/BurntSushi/toml"
-	"gopkg.in/yaml.v3"
 )
 
 // tomlTree reads a TOML file into the same node tree a YAML file gives, so
@@ -20,7 +19,7 @@ import (
 // Strictness does not depend on the decoder's list of undecoded keys:
 // decoding into a map keeps every key, known or not, in the tree, and the
 // schema check rejects unknown ones with their line.
-func (p *parser) tomlTree(data []byte) *yaml.Node {
+func (p *parser) tomlTree(data []byte) *node {
 	var m map[string]any
 	_, err := toml.Decode(string(data), &m)
 	if err != nil {
@@ -79,10 +78,10 @@ func (t *tomlLines) keyLine(key string, from int) (int, int) {
 }
 
 // node turns a decoded TOML value into a node at line (and column).
-func (t *tomlLines) node(v any, path string, line, col int) *yaml.Node {
+func (t *tomlLines) node(v any, path string, line, col int) *node {
 	switch x := v.(type) {
 	case map[string]any:
-		n := &yaml.Node{Kind: yaml.MappingNode, Tag: "!!map", Line: line, Column: max(col, 1)}
+		n := &node{kind: mapNode, line: int32(line), col: int32(max(col, 1))}
 		keys := make([]string, 0, len(x))
 		for k := range x {
 			keys = append(keys, k)
@@ -94,38 +93,45 @@ func (t *tomlLines) node(v any, path string, line, col int) *yaml.Node {
 			if path != "" {
 				sub = path + "." + k
 			}
-			n.Content = append(n.Content,
-				&yaml.Node{Kind: yaml.ScalarNode, Tag: "!!str", Value: k, Line: kl, Column: max(kc, 1)},
+			n.content = append(n.content,
+				&node{kind: scalarNode, value: k, line: int32(kl), col: int32(max(kc, 1))},
 				t.node(x[k], sub, kl, max(kc, 1)))
 		}
 		return n
 	case []map[string]any:
-		n := &yaml.Node{Kind: yaml.SequenceNode, Tag: "!!seq", Line: line, Column: max(col, 1)}
+		n := &node{kind: seqNode, line: int32(line), col: int32(max(col, 1))}
 		for _, e := range x {
 			el := line
 			if hs := t.headers[path]; t.seen[path] < len(hs) {
 				el = hs[t.seen[path]]
 				t.seen[path]++
 			}
-			n.Content = append(n.Content, t.node(e, path, el, 1))
+			n.content = append(n.content, t.node(e, path, el, 1))
 		}
 		return n
 	case []any:
-		n := &yaml.Node{Kind: yaml.SequenceNode, Tag: "!!seq", Line: line, Column: max(col, 1)}
+		n := &node{kind: seqNode, line: int32(line), col: int32(max(col, 1))}
 		for _, e := range x {
-			n.Content = append(n.Content, t.node(e, path, line, col))
+			n.content = append(n.content, t.node(e, path, line, col))
 		}
 		return n
 	case string:
-		return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!str", Value: x, Line: line, Column: max(col, 1)}
+		return t.scalar(x, false, false, line, col)
 	case int64:
-		return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!int", Value: strconv.FormatInt(x, 10), Line: line, Column: max(col, 1)}
+		return t.scalar(strconv.FormatInt(x, 10), false, true, line, col)
 	case float64:
-		return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!float", Value: strconv.FormatFloat(x, 'g', -1, 64), Line: line, Column: max(col, 1)}
+		return t.scalar(strconv.FormatFloat(x, 'g', -1, 64), false, false, line, col)
 	case bool:
-		return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!bool", Value: strconv.FormatBool(x), Line: line, Column: max(col, 1)}
+		return t.scalar(strconv.FormatBool(x), false, false, line, col)
 	case time.Time:
-		return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!str", Value: x.Format("2006-01-02"), Line: line, Column: max(col, 1)}
+		return t.scalar(x.Format("2006-01-02"), false, false, line, col)
 	}
-	return &yaml.Node{Kind: yaml.ScalarNode, Tag: "!!str", Value: fmt.Sprint(v), Line: line, Column: max(col, 1)}
+	return t.scalar(fmt.Sprint(v), false, false, line, col)
+}
+
+// scalar makes a TOML value's node. Positions in TOML are only those of
+// lines and keys, so a string does not count as quoted (which would move
+// the column of a date error inside it).
+func (t *tomlLines) scalar(v string, quoted, integer bool, line, col int) *node {
+	return &node{kind: scalarNode, value: v, quoted: quoted, integer: integer, line: int32(line), col: int32(max(col, 1))}
 }
