@@ -292,9 +292,8 @@ func crossCheck(d *Dataset, base *Dataset) ErrorList {
 			all = append(all, s.Key)
 		}
 	}
-	ids := map[string]*Material{}
-	names := map[string]*Material{}
-	nameWhere := map[string]string{}
+	ids := make(map[string]*Material, len(d.Materials))
+	names := make(map[string]*Material, 8*len(d.Materials))
 	for _, m := range d.Materials {
 		if prev, dup := ids[m.ID]; dup {
 			errs = append(errs, &Error{File: m.File, Line: m.Line, Column: 0,
@@ -303,17 +302,18 @@ func crossCheck(d *Dataset, base *Dataset) ErrorList {
 		} else {
 			ids[m.ID] = m
 		}
-		keys := m.foldedNames()
-		for i, n := range append([]string{m.ID}, m.Names...) {
-			k := keys[i]
+		for i, k := range m.foldedNames() {
+			n := m.ID
+			if i > 0 {
+				n = m.Names[i-1]
+			}
 			if other, dup := names[k]; dup && other != m && other.ID != m.ID {
 				errs = append(errs, &Error{File: m.File, Line: m.Line,
-					Msg:        fmt.Sprintf("name %q of %q is also a name of %q (%s)", n, m.ID, other.ID, nameWhere[k]),
+					Msg:        fmt.Sprintf("name %q of %q is also a name of %q (%s:%d)", n, m.ID, other.ID, other.File, other.Line),
 					Suggestion: "a name may belong to one material only; keep it on the one it describes best"})
 				continue
 			}
 			names[k] = m
-			nameWhere[k] = fmt.Sprintf("%s:%d", m.File, m.Line)
 		}
 		for i := range m.Milestones {
 			ms := &m.Milestones[i]

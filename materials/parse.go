@@ -105,46 +105,73 @@ type field struct {
 	typo bool
 }
 
+// fieldSet is the keys of one mapping, by their place in the list of keys
+// allowed there.
+type fieldSet struct {
+	keys []string
+	f    [10]field
+	set  [10]bool
+}
+
+// lookup returns the field key; a nil set (not a mapping) has none.
+func (fs *fieldSet) lookup(key string) (field, bool) {
+	if fs == nil {
+		return field{}, false
+	}
+	if i := slices.Index(fs.keys, key); i >= 0 && fs.set[i] {
+		return fs.f[i], true
+	}
+	return field{}, false
+}
+
+// at returns the field key, or the zero field when it is not there.
+func (fs *fieldSet) at(key string) field {
+	f, _ := fs.lookup(key)
+	return f
+}
+
+// given returns the field key when it was written (not a typo of it).
+func (fs *fieldSet) given(key string) (field, bool) {
+	f, ok := fs.lookup(key)
+	return f, ok && !f.typo
+}
+
 // fields returns the keys of mapping n, reporting keys not in allowed
 // (with the nearest allowed key) and keys given twice. what names n in
-// messages ("material", "milestone").
-func (p *parser) fields(n *node, what string, allowed []string) map[string]field {
+// messages ("material", "milestone"). It returns nil when n is not a
+// mapping.
+func (p *parser) fields(n *node, what string, allowed []string) *fieldSet {
 	n = deref(n)
 	if n.kind != mapNode {
 		p.errAt(n, fmt.Sprintf("expected a %s as a mapping of %s; found %s", what, strings.Join(allowed, ", "), describe(n)), "")
 		return nil
 	}
-	out := make(map[string]field, len(n.content)/2)
+	out := &fieldSet{keys: allowed}
 	for i := 0; i+1 < len(n.content); i += 2 {
 		k, v := deref(n.content[i]), deref(n.content[i+1])
 		if k.kind != scalarNode {
 			p.errAt(k, fmt.Sprintf("expected a key of the %s; found %s", what, describe(k)), "")
 			continue
 		}
-		if !slices.Contains(allowed, k.value) {
+		j := slices.Index(allowed, k.value)
+		if j < 0 {
 			hint := "the keys of a " + what + " are " + strings.Join(allowed, ", ")
 			if s := nearestWords(k.value, allowed, 1); len(s) == 1 {
 				hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
-				if _, given := out[s[0]]; !given {
-					out[s[0]] = field{key: k, typo: true}
+				if t := slices.Index(allowed, s[0]); !out.set[t] {
+					out.f[t], out.set[t] = field{key: k, typo: true}, true
 				}
 			}
 			p.errAt(k, fmt.Sprintf("unknown key %q in a %s", k.value, what), hint)
 			continue
 		}
-		if prev, dup := out[k.value]; dup && !prev.typo {
+		if prev := out.f[j]; out.set[j] && !prev.typo {
 			p.errAt(k, fmt.Sprintf("key %q is given twice in this %s (first on line %d)", k.value, what, int(prev.key.line)), "keep one of them")
 			continue
 		}
-		out[k.value] = field{key: k, val: v}
+		out.f[j], out.set[j] = field{key: k, val: v}, true
 	}
 	return out
-}
-
-// given returns the field key when it was written (not a typo of it).
-func given(fs map[string]field, key string) (field, bool) {
-	f, ok := fs[key]
-	return f, ok && !f.typo
 }
 
 func deref(n *node) *node {
@@ -184,19 +211,23 @@ func (p *parser) str(f field, what string) string {
 	return f.val.value
 }
 
-// required reads a key that must be there and not empty.
-func (p *parser) required(fs map[string]field, key, what string, at *node) string {
-	f, ok := fs[key]
+// required reads a key that must be there and not empty; what names the
+// mapping in messages, made only when one is needed.
+func (p *parser) required(fs *fieldSet, key string, what func() string, at *node) string {
+	f, ok := fs.lookup(key)
 	if !ok {
-		p.errAt(at, fmt.Sprintf("%s has no %q", what, key), "")
+		p.errAt(at, fmt.Sprintf("%s has no %q", what(), key), "")
 		return ""
 	}
 	s := strings.TrimSpace(p.str(f, key))
 	if s == "" && !f.typo {
-		p.errAt(f.val, fmt.Sprintf("%q of %s is empty", key, what), "")
+		p.errAt(f.val, fmt.Sprintf("%q of %s is empty", key, what()), "")
 	}
 	return s
 }
+
+// words is a fixed name for a mapping in messages.
+func words(s string) func() string { return func() string { return s } }
 
 func (p *parser) top(root *node) ([]Source, []*Material) {
 	root = deref(root)
@@ -206,14 +237,14 @@ func (p *parser) top(root *node) ([]Source, []*Material) {
 	fs := p.fields(root, "materials file", []string{"sources", "materials"})
 	var sources []Source
 	var mats []*Material
-	if f, ok := given(fs, "sources"); ok {
+	if f, ok := fs.given("sources"); ok {
 		for _, n := range p.list(f.val, "sources") {
 			if s, ok := p.source(n); ok {
 				sources = append(sources, s)
 			}
 		}
 	}
-	if f, ok := given(fs, "materials"); ok {
+	if f, ok := fs.given("materials"); ok {
 		for _, n := range p.list(f.val, "materials") {
 			if m := p.material(n); m != nil {
 				mats = append(mats, m)
@@ -244,16 +275,16 @@ func (p *parser) source(n *node) (Source, bool) {
 		return Source{}, false
 	}
 	s := Source{File: p.file, Line: int(n.line)}
-	s.Key = p.required(fs, "key", "a source", n)
-	s.Cite = p.required(fs, "cite", fmt.Sprintf("source %q", s.Key), n)
-	if f, ok := given(fs, "url"); ok {
+	s.Key = p.required(fs, "key", words("a source"), n)
+	s.Cite = p.required(fs, "cite", func() string { return fmt.Sprintf("source %q", s.Key) }, n)
+	if f, ok := fs.given("url"); ok {
 		s.URL = strings.TrimSpace(p.str(f, "url"))
 		if s.URL != "" && !strings.HasPrefix(s.URL, "https://") && !strings.HasPrefix(s.URL, "http://") {
 			p.errAt(f.val, fmt.Sprintf("url %q of source %q is not a web address", s.URL, s.Key), "write it in full, starting with https://")
 		}
 	}
 	if s.Key != "" && !validID(s.Key) {
-		p.errAt(fs["key"].val, fmt.Sprintf("source key %q is not lower case letters, digits and hyphens", s.Key),
+		p.errAt(fs.at("key").val, fmt.Sprintf("source key %q is not lower case letters, digits and hyphens", s.Key),
 			"write it like 'artists-pigments-1'")
 	}
 	return s, s.Key != ""
@@ -268,15 +299,18 @@ func (p *parser) material(n *node) *Material {
 		return nil
 	}
 	m := &Material{File: p.file, Line: int(n.line)}
-	m.ID = p.required(fs, "id", "a material", n)
+	m.ID = p.required(fs, "id", words("a material"), n)
 	if m.ID != "" && !validID(m.ID) {
-		p.errAt(fs["id"].val, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
+		p.errAt(fs.at("id").val, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
 			"write it like "+quote(suggestID(m.ID)))
 	}
-	what := fmt.Sprintf("material %q", m.ID)
-	m.keys = []string{fold(m.ID)}
-	if f, ok := given(fs, "names"); ok {
-		for _, nn := range p.list(f.val, "names") {
+	what := "material " + strconv.Quote(m.ID)
+	if f, ok := fs.given("names"); ok {
+		list := p.list(f.val, "names")
+		m.Names = make([]string, 0, len(list))
+		m.keys = make([]string, 1, len(list)+1)
+		m.keys[0] = fold(m.ID)
+		for _, nn := range list {
 			nn = deref(nn)
 			s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
 			k := fold(s)
@@ -293,10 +327,10 @@ func (p *parser) material(n *node) *Material {
 	}
 	m.Class = p.oneOf(fs, "class", what, n, Classes())
 	m.Origin = p.oneOf(fs, "origin", what, n, Origins())
-	if f, ok := given(fs, "colour_index"); ok {
+	if f, ok := fs.given("colour_index"); ok {
 		m.ColourIndex = p.colourIndex(f, what)
 	}
-	if f, ok := given(fs, "cas"); ok {
+	if f, ok := fs.given("cas"); ok {
 		m.CAS = strings.TrimSpace(p.str(f, "cas"))
 		if m.CAS != "" {
 			if msg, hint := checkCAS(m.CAS); msg != "" {
@@ -304,14 +338,19 @@ func (p *parser) material(n *node) *Material {
 			}
 		}
 	}
-	if f, ok := given(fs, "formula"); ok {
+	if f, ok := fs.given("formula"); ok {
 		m.Formula = strings.TrimSpace(p.str(f, "formula"))
 	}
-	if f, ok := given(fs, "note"); ok {
+	if f, ok := fs.given("note"); ok {
 		m.Note = strings.TrimSpace(p.str(f, "note"))
 	}
-	if f, ok := given(fs, "milestones"); ok {
-		for _, mn := range p.list(f.val, "milestones") {
+	if len(m.keys) == 0 {
+		m.keys = []string{fold(m.ID)}
+	}
+	if f, ok := fs.given("milestones"); ok {
+		list := p.list(f.val, "milestones")
+		m.Milestones = make([]Milestone, 0, len(list))
+		for _, mn := range list {
 			if ms, ok := p.milestone(mn, what); ok {
 				m.Milestones = append(m.Milestones, ms)
 			}
@@ -320,8 +359,8 @@ func (p *parser) material(n *node) *Material {
 	return m
 }
 
-func (p *parser) oneOf(fs map[string]field, key, what string, at *node, allowed []string) string {
-	s := p.required(fs, key, what, at)
+func (p *parser) oneOf(fs *fieldSet, key, what string, at *node, allowed []string) string {
+	s := p.required(fs, key, words(what), at)
 	if s == "" || slices.Contains(allowed, s) {
 		return s
 	}
@@ -329,7 +368,7 @@ func (p *parser) oneOf(fs map[string]field, key, what string, at *node, allowed 
 	if n := nearestWords(strings.ToLower(s), allowed, 1); len(n) == 1 {
 		hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
 	}
-	p.errAt(fs[key].val, fmt.Sprintf("unknown %s %q for %s", key, s, what), hint)
+	p.errAt(fs.at(key).val, fmt.Sprintf("unknown %s %q for %s", key, s, what), hint)
 	return s
 }
 
@@ -341,10 +380,10 @@ func (p *parser) colourIndex(f field, what string) *ColourIndex {
 		return nil
 	}
 	ci := &ColourIndex{}
-	if g, ok := given(fs, "name"); ok {
+	if g, ok := fs.given("name"); ok {
 		ci.Name = strings.TrimSpace(p.str(g, "the Colour Index name"))
 	}
-	if g, ok := given(fs, "number"); ok {
+	if g, ok := fs.given("number"); ok {
 		ci.Number = strings.TrimSpace(p.str(g, "the Colour Index number"))
 		if ci.Number != "" && !ciNumber.MatchString(ci.Number) {
 			p.errAt(g.val, fmt.Sprintf("Colour Index number %q of %s is not five digits with an optional ':n' suffix", ci.Number, what),
@@ -367,7 +406,7 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 		return Milestone{}, false
 	}
 	ms := Milestone{File: p.file, Line: int(n.line), Column: int(n.col)}
-	where := "a milestone of " + what
+	where := func() string { return "a milestone of " + what }
 	ok := true
 	kind := p.required(fs, "kind", where, n)
 	switch Kind(kind) {
@@ -380,15 +419,15 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 		if s := nearestWords(strings.ToLower(kind), []string{"made", "sold", "arrived", "withdrawn"}, 1); len(s) == 1 {
 			hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
 		}
-		p.errAt(fs["kind"].val, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
+		p.errAt(fs.at("kind").val, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
 		ok = false
 	}
-	if f, has := fs["date"]; has && f.typo {
+	if f, has := fs.lookup("date"); has && f.typo {
 		ok = false
 	} else if has {
 		text := strings.TrimSpace(p.str(f, "a date"))
 		if text == "" {
-			p.errAt(f.val, "empty date in "+where, `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
+			p.errAt(f.val, "empty date in "+where(), `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
 			ok = false
 		} else if d, err := date.Parse(text); err != nil {
 			col := int(f.val.col)
@@ -404,24 +443,24 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 				}
 			}
 			p.errs = append(p.errs, &Error{File: p.file, Line: int(f.val.line), Column: col,
-				Msg: fmt.Sprintf("bad date %q in %s: %s", text, where, msg), Err: err,
+				Msg: fmt.Sprintf("bad date %q in %s: %s", text, where(), msg), Err: err,
 				Suggestion: `write an EDTF date such as "1856", "1830~", "18XX" or "1704/1706", quoted`})
 			ok = false
 		} else {
 			ms.Date = d
 		}
 	} else {
-		p.errAt(n, where+" has no \"date\"", "")
+		p.errAt(n, where()+" has no \"date\"", "")
 		ok = false
 	}
-	if f, has := given(fs, "place"); has {
+	if f, has := fs.given("place"); has {
 		ms.Place = strings.TrimSpace(p.str(f, "a place"))
 		if ms.Place != "" && !p.regions.Valid(ms.Place) {
 			hint := "a place is an ISO 3166-1 alpha-2 code (\"NL\") or a UN M49 area code (\"155\", quoted)"
 			if s := p.regions.Suggest(ms.Place); len(s) > 0 {
 				hint = "did you mean " + orList(s) + "? (" + hint + ")"
 			}
-			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where)
+			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where())
 			if f.val.integer {
 				msg += " (an unquoted number loses its leading zeros)"
 			}
@@ -429,15 +468,15 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 			ok = false
 		}
 	}
-	if ms.Kind == KindArrived && ms.Place == "" && !fs["place"].typo {
+	if ms.Kind == KindArrived && ms.Place == "" && !fs.at("place").typo {
 		p.errAt(n, "an arrived milestone of "+what+" has no place", "add place: with the country or area code where it arrived")
 		ok = false
 	}
-	if f, has := given(fs, "source"); has {
+	if f, has := fs.given("source"); has {
 		ms.Source = strings.TrimSpace(p.str(f, "a source key"))
 	}
-	if ms.Source == "" && !fs["source"].typo {
-		p.errAt(n, where+" cites no source", "every milestone names a source key from the bibliography; write 'from-memory' as its basis if you could not check it")
+	if ms.Source == "" && !fs.at("source").typo {
+		p.errAt(n, where()+" cites no source", "every milestone names a source key from the bibliography; write 'from-memory' as its basis if you could not check it")
 		ok = false
 	}
 	basis := p.required(fs, "basis", where, n)
@@ -447,14 +486,14 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	case "":
 		ok = false
 	default:
-		p.errAt(fs["basis"].val, fmt.Sprintf("unknown basis %q in %s", basis, where),
+		p.errAt(fs.at("basis").val, fmt.Sprintf("unknown basis %q in %s", basis, where()),
 			"basis is 'documented' (you read the claim in the source) or 'from-memory'")
 		ok = false
 	}
-	if f, has := given(fs, "note"); has {
+	if f, has := fs.given("note"); has {
 		ms.Note = strings.TrimSpace(p.str(f, "a note"))
 	}
-	if f, has := given(fs, "allowance"); has {
+	if f, has := fs.given("allowance"); has {
 		text := strings.TrimSpace(p.str(f, "an allowance"))
 		switch {
 		case ms.Kind != "" && ms.Kind != KindWithdrawn:
@@ -471,7 +510,7 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 					msg = pe.Msg
 				}
 				p.errs = append(p.errs, &Error{File: p.file, Line: int(f.val.line), Column: int(f.val.col),
-					Msg: fmt.Sprintf("bad allowance %q in %s: %s", text, where, msg), Err: err,
+					Msg: fmt.Sprintf("bad allowance %q in %s: %s", text, where(), msg), Err: err,
 					Suggestion: "write an ISO 8601 duration such as P10Y or P6M"})
 				ok = false
 			} else {
