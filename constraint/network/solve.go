@@ -501,7 +501,7 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 	if !sr.record && sr.found {
 		return nil
 	}
-	if sr.record && sr.dominated() {
+	if sr.record && sr.dominated(open) {
 		return nil
 	}
 	best := 0
@@ -536,16 +536,83 @@ func diffRange(g *stn, from, to int32) (int64, int64) {
 	return lo, hi
 }
 
-// dominated reports whether every current window lies inside the union
-// found so far; deeper choices could only narrow them.
-func (sr *search) dominated() bool {
+// dominated reports whether every variable's values at this node lie
+// inside the union found so far; deeper choices could only narrow them.
+// A variable's values are over-approximated by its window, cut, for each
+// open choice that touches it, by the union over the alternatives of the
+// window one propagation step would give (so that a gap an open choice
+// will open does not defeat the test).
+func (sr *search) dominated(open [][]calt) bool {
 	g := &sr.g
 	for i := 1; i < len(sr.p.vars); i++ {
-		if !inside(sr.dom[i], g.lo[i], g.up[i]) {
+		if inside(sr.dom[i], g.lo[i], g.up[i]) {
+			continue
+		}
+		x := int32(i)
+		vals := Set{{g.lo[i], g.up[i]}}
+		touched := false
+		for _, alts := range open {
+			var u Set
+			hit := false
+			for _, a := range alts {
+				if a.from != x && a.to != x {
+					continue
+				}
+				hit = true
+				lo, hi := oneStep(g, a, x)
+				if lo <= hi {
+					u = union(u, Interval{lo, hi})
+				}
+			}
+			if hit {
+				touched = true
+				vals = intersectSets(vals, u)
+			}
+		}
+		if !touched {
 			return false
+		}
+		for _, iv := range vals {
+			if !inside(sr.dom[i], iv.Lo, iv.Hi) {
+				return false
+			}
 		}
 	}
 	return true
+}
+
+// oneStep bounds x (an end of a) after adding a to the current bounds.
+func oneStep(g *stn, a calt, x int32) (int64, int64) {
+	f, t := a.from, a.to
+	if x == t {
+		return max(g.lo[t], addInf(g.lo[f], a.lo, -Inf)), min(g.up[t], addInf(g.up[f], a.hi, Inf))
+	}
+	return max(g.lo[f], addInf(g.lo[t], neg(a.hi), -Inf)), min(g.up[f], addInf(g.up[t], neg(a.lo), Inf))
+}
+
+// addInf adds two values either of which may be infinite towards side.
+func addInf(a, b, side int64) int64 {
+	if a <= -Inf || a >= Inf || b <= -Inf || b >= Inf {
+		return side
+	}
+	return a + b
+}
+
+func intersectSets(a, b Set) Set {
+	var out Set
+	i, j := 0, 0
+	for i < len(a) && j < len(b) {
+		lo, hi := max(a[i].Lo, b[j].Lo), min(a[i].Hi, b[j].Hi)
+		if lo <= hi {
+			out = append(out, Interval{lo, hi})
+		}
+		if a[i].Hi < b[j].Hi {
+			i++
+		} else {
+			j++
+		}
+	}
+	return out
 }
 
 func inside(s Set, lo, hi int64) bool {

@@ -1,0 +1,147 @@
+package network
+
+import (
+	"context"
+	"fmt"
+	"math/rand/v2"
+	"testing"
+)
+
+var benchSizes = []int{10, 100, 1000, 10000}
+
+// chainInstance is an ordered series of n dated items, as the reasoner
+// builds for a stack of layers or a run of documents: every item has a
+// window of its own (some open on one side), every item follows the one
+// before it, and every fifth gap also has a longest length.
+func chainInstance(n int) *Network {
+	rng := rand.New(rand.NewPCG(uint64(n), 1))
+	net := New()
+	vs := make([]Var, n)
+	for i := range vs {
+		vs[i] = net.AddVar(fmt.Sprintf("item%d", i))
+	}
+	for i, v := range vs {
+		at := int64(10 * i)
+		lo, hi := at-rng.Int64N(2000), at+rng.Int64N(2000)
+		switch i % 7 {
+		case 3:
+			lo = -Inf
+		case 5:
+			hi = Inf
+		}
+		mustAdd(net, Constraint{ID: fmt.Sprintf("date:%d", i), Tier: Tier(i % 3), Alts: []Alt{{Zero, v, lo, hi}}})
+		if i > 0 {
+			gap := Alt{vs[i-1], v, 1, Inf}
+			if i%5 == 0 {
+				gap.Hi = 40
+			}
+			mustAdd(net, Constraint{ID: fmt.Sprintf("order:%d", i), Alts: []Alt{gap}})
+		}
+	}
+	return net
+}
+
+// denseInstance has n events, each bounded, and 8n difference constraints
+// between random pairs, all met by a hidden solution.
+func denseInstance(n int) *Network {
+	rng := rand.New(rand.NewPCG(uint64(n), 2))
+	net := New()
+	hidden := make([]int64, n+1)
+	for i := 1; i <= n; i++ {
+		net.AddVar(fmt.Sprintf("e%d", i))
+		hidden[i] = rng.Int64N(100_000)
+		mustAdd(net, Constraint{ID: fmt.Sprintf("date:%d", i), Alts: []Alt{{Zero, Var(i), hidden[i] - 5000 - rng.Int64N(5000), hidden[i] + 5000 + rng.Int64N(5000)}}})
+	}
+	for k := 0; k < 8*n && n > 1; k++ {
+		a, b := Var(1+rng.IntN(n)), Var(1+rng.IntN(n))
+		if a == b {
+			continue
+		}
+		d := hidden[b] - hidden[a]
+		mustAdd(net, Constraint{ID: fmt.Sprintf("rel:%d", k), Tier: Tier(k % 3), Alts: []Alt{{a, b, d - rng.Int64N(3000), d + rng.Int64N(3000)}}})
+	}
+	return net
+}
+
+// disjunctiveInstance is an ordered series of n items where every tenth
+// item has a one-of date (two or three runs) and every tenth gap is a
+// choice between a short and a long lapse, all met by a hidden solution.
+func disjunctiveInstance(n int) *Network {
+	rng := rand.New(rand.NewPCG(uint64(n), 3))
+	net := New()
+	vs := make([]Var, n)
+	hidden := make([]int64, n)
+	for i := range vs {
+		vs[i] = net.AddVar(fmt.Sprintf("item%d", i))
+		hidden[i] = int64(100*i) + rng.Int64N(50)
+	}
+	for i, v := range vs {
+		h := hidden[i]
+		alts := []Alt{{Zero, v, h - 500 - rng.Int64N(500), h + 500 + rng.Int64N(500)}}
+		if i%10 == 4 {
+			alts = []Alt{{Zero, v, h - 20, h + 20}, {Zero, v, h + 300, h + 400}}
+			if i%20 == 4 {
+				alts = append(alts, Alt{Zero, v, h - 400, h - 300})
+			}
+		}
+		mustAdd(net, Constraint{ID: fmt.Sprintf("date:%d", i), Alts: alts})
+		if i > 0 {
+			d := h - hidden[i-1]
+			gap := []Alt{{vs[i-1], v, 1, Inf}}
+			if i%10 == 7 {
+				gap = []Alt{{vs[i-1], v, 1, d + 10}, {vs[i-1], v, d + 200, d + 300}}
+			}
+			mustAdd(net, Constraint{ID: fmt.Sprintf("order:%d", i), Alts: gap})
+		}
+	}
+	return net
+}
+
+func mustAdd(n *Network, c Constraint) {
+	if err := n.Add(c); err != nil {
+		panic(err)
+	}
+}
+
+var instances = []struct {
+	name string
+	make func(int) *Network
+}{
+	{"Chain", chainInstance},
+	{"Dense", denseInstance},
+	{"Disjunctive", disjunctiveInstance},
+}
+
+// solveAll solves at the soft tier and reads every window with its
+// explanation, as the reasoner does.
+func solveAll(tb testing.TB, n *Network) int {
+	r, err := n.Solve(context.Background(), Soft, Options{})
+	if err != nil {
+		tb.Fatal(err)
+	}
+	if !r.Consistent {
+		tb.Fatal("benchmark instance is inconsistent")
+	}
+	steps := 0
+	for v := Var(1); int(v) < n.NumVars(); v++ {
+		steps += len(r.Earliest(v).Because) + len(r.Latest(v).Because)
+	}
+	return steps
+}
+
+func BenchmarkSolveChain(b *testing.B)       { benchSolve(b, chainInstance) }
+func BenchmarkSolveDense(b *testing.B)       { benchSolve(b, denseInstance) }
+func BenchmarkSolveDisjunctive(b *testing.B) { benchSolve(b, disjunctiveInstance) }
+
+func benchSolve(b *testing.B, mk func(int) *Network) {
+	for _, size := range benchSizes {
+		b.Run(fmt.Sprint(size), func(b *testing.B) {
+			n := mk(size)
+			b.ReportAllocs()
+			b.ResetTimer()
+			for b.Loop() {
+				solveAll(b, n)
+			}
+		})
+	}
+}
