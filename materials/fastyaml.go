@@ -47,6 +47,28 @@ type fastParser struct {
 	lines []fastLine
 	i     int
 	slab  []node // nodes are taken from here, a chunk at a time
+	// The children of the collections being read wait on stack; when a
+	// collection ends they move to a slice of their own size, cut from ptrs.
+	stack, ptrs []*node
+}
+
+func (p *fastParser) push(n ...*node) { p.stack = append(p.stack, n...) }
+
+// collect takes the children pushed since base.
+func (p *fastParser) collect(base int) []*node {
+	k := len(p.stack) - base
+	if k == 0 {
+		return nil
+	}
+	if cap(p.ptrs)-len(p.ptrs) < k {
+		p.ptrs = make([]*node, 0, max(2048, k))
+	}
+	n := len(p.ptrs)
+	out := p.ptrs[n : n+k : n+k]
+	copy(out, p.stack[base:])
+	p.ptrs = p.ptrs[:n+k]
+	p.stack = p.stack[:base]
+	return out
 }
 
 // node returns a new node from the current chunk.
@@ -151,6 +173,7 @@ func isDash(s string) bool { return s == "-" || strings.HasPrefix(s, "- ") }
 func (p *fastParser) sequence(col int) (*node, bool) {
 	l := p.cur()
 	seq := p.node(seqNode, l.num, col)
+	base := len(p.stack)
 	for p.i < len(p.lines) {
 		l = p.cur()
 		if l.col < col {
@@ -173,8 +196,9 @@ func (p *fastParser) sequence(col int) (*node, bool) {
 		if !ok {
 			return nil, false
 		}
-		seq.content = append(seq.content, item)
+		p.push(item)
 	}
+	seq.content = p.collect(base)
 	return seq, true
 }
 
@@ -205,6 +229,7 @@ func (p *fastParser) noContinuation(col int) bool {
 func (p *fastParser) mapping(col int) (*node, bool) {
 	l := p.cur()
 	m := p.node(mapNode, l.num, col)
+	base := len(p.stack)
 	for p.i < len(p.lines) {
 		l = p.cur()
 		if l.col < col {
@@ -217,7 +242,7 @@ func (p *fastParser) mapping(col int) (*node, bool) {
 		if !isKey {
 			return nil, false
 		}
-		m.content = append(m.content, k)
+		p.push(k)
 		// The value: on this line after ": ", or a block on the next lines.
 		rest := l.text[after:]
 		trimmed := strings.TrimLeft(rest, " ")
@@ -233,13 +258,13 @@ func (p *fastParser) mapping(col int) (*node, bool) {
 				if !ok {
 					return nil, false
 				}
-				m.content = append(m.content, v)
+				p.push(v)
 			case next.col == col && isDash(next.text[next.off:]):
 				v, ok := p.sequence(col)
 				if !ok {
 					return nil, false
 				}
-				m.content = append(m.content, v)
+				p.push(v)
 			default:
 				return nil, false
 			}
@@ -251,12 +276,13 @@ func (p *fastParser) mapping(col int) (*node, bool) {
 		if !ok {
 			return nil, false
 		}
-		m.content = append(m.content, v)
+		p.push(v)
 		p.i++
 		if !p.noContinuation(col) {
 			return nil, false
 		}
 	}
+	m.content = p.collect(base)
 	return m, true
 }
 
@@ -499,9 +525,7 @@ func (f *flow) node() (*node, bool) {
 			kind, end = mapNode, '}'
 		}
 		n := f.p.node(kind, f.line, col)
-		if kind == mapNode {
-			n.content = make([]*node, 0, 2*(strings.Count(f.s[f.i:], ",")+1))
-		}
+		base := len(f.p.stack)
 		f.i++
 		f.space()
 		if f.i < len(f.s) && f.s[f.i] == end {
@@ -527,13 +551,13 @@ func (f *flow) node() (*node, bool) {
 				if !ok {
 					return nil, false
 				}
-				n.content = append(n.content, item, v)
+				f.p.push(item, v)
 				f.space()
 			} else {
 				if f.i < len(f.s) && f.s[f.i] == ':' {
 					return nil, false // a one-pair mapping inside a list
 				}
-				n.content = append(n.content, item)
+				f.p.push(item)
 			}
 			if f.i >= len(f.s) {
 				return nil, false
@@ -547,6 +571,7 @@ func (f *flow) node() (*node, bool) {
 				}
 			case end:
 				f.i++
+				n.content = f.p.collect(base)
 				return n, true
 			default:
 				return nil, false
