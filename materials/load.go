@@ -139,12 +139,16 @@ type fileDigest struct {
 }
 
 // finish builds the indexes, file list and digest of a dataset.
-func (d *Dataset) finish() {
+func (d *Dataset) finish() { d.finishWith(nil) }
+
+// finishWith is finish with the map of folded names to materials already
+// made (by the checks across files), or nil.
+func (d *Dataset) finishWith(names map[string]*Material) {
 	d.sources = make(map[string]int, len(d.Sources))
 	for i, s := range d.Sources {
 		d.sources[s.Key] = i
 	}
-	d.index = buildIndex(d.Materials)
+	d.index = buildIndex(d.Materials, names)
 	h := sha256.New()
 	d.Files = d.Files[:0]
 	for _, f := range d.fileData {
@@ -247,7 +251,8 @@ func loadFiles(files []rawFile, base *Dataset) (*Dataset, error) {
 		d.Materials = append(d.Materials, p.materials...)
 		d.fileData = append(d.fileData, fileDigest{name: files[i].name, sum: sha256.Sum256(files[i].data)})
 	}
-	errs = append(errs, crossCheck(d, base)...)
+	cross, names := crossCheck(d, base)
+	errs = append(errs, cross...)
 	if len(errs) > 0 {
 		errs.sort()
 		if len(errs) > maxErrors {
@@ -255,13 +260,14 @@ func loadFiles(files []rawFile, base *Dataset) (*Dataset, error) {
 		}
 		return nil, errs
 	}
-	d.finish()
+	d.finishWith(names)
 	return d, nil
 }
 
 // crossCheck finds the problems that span files: duplicate source keys,
-// cited keys never defined, duplicate ids and names.
-func crossCheck(d *Dataset, base *Dataset) ErrorList {
+// cited keys never defined, duplicate ids and names. It also returns the
+// folded names it mapped to their materials, for the lookup index.
+func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 	var errs ErrorList
 	keys := map[string]Source{}
 	for _, s := range d.Sources {
@@ -345,7 +351,7 @@ func crossCheck(d *Dataset, base *Dataset) ErrorList {
 			}
 		}
 	}
-	return errs
+	return errs, names
 }
 
 // nearestWords returns up to n of words within a small edit distance of w,

@@ -19,8 +19,15 @@ type nameRef struct {
 	key, shown string
 }
 
-func buildIndex(ms []*Material) *index {
-	ix := &index{names: map[string]*Material{}, ci: map[string][]*Material{}, cas: map[string][]*Material{}}
+// buildIndex indexes ms; names, when not nil, already maps every folded id
+// and name to its material (the first to have it).
+func buildIndex(ms []*Material, names map[string]*Material) *index {
+	ix := &index{names: names, ci: map[string][]*Material{}, cas: map[string][]*Material{}}
+	ix.all = make([]nameRef, 0, 8*len(ms))
+	fill := names == nil
+	if fill {
+		ix.names = make(map[string]*Material, 8*len(ms))
+	}
 	addMulti := func(m map[string][]*Material, k string, mat *Material) {
 		if k == "" || slices.Contains(m[k], mat) {
 			return
@@ -39,7 +46,7 @@ func buildIndex(ms []*Material) *index {
 			if k == "" {
 				continue
 			}
-			if _, ok := ix.names[k]; !ok {
+			if _, ok := ix.names[k]; !ok && fill {
 				ix.names[k] = m
 			}
 			ix.all = append(ix.all, nameRef{k, n})
@@ -63,7 +70,7 @@ func buildIndex(ms []*Material) *index {
 func (d *Dataset) Lookup(name string) (*Material, error) {
 	ix := d.index
 	if ix == nil {
-		ix = buildIndex(d.Materials)
+		ix = buildIndex(d.Materials, nil)
 	}
 	k := fold(name)
 	if m, ok := ix.names[k]; ok {
