@@ -29,6 +29,12 @@
 // column, with a hint where one fits. A file with several problems yields an
 // [ErrorList] holding each of them.
 //
+// The dataset files keep to a plain subset of YAML (block mappings and
+// lists, one-line flow lists and mappings, quoted and plain scalars); a
+// quick reader takes that subset and hands anything else to the general
+// YAML decoder, which gives the same tree. TOML files are read into the
+// same tree, with the line of each table and key.
+//
 // The built-in dataset is embedded in the binary and parsed once, on first
 // use, by [Builtin]; after that it is only read. A user's own file is laid
 // over it with [Dataset.Extend] or [Overlay]: an entry with the same id
