@@ -45,7 +45,7 @@ the built-in one); it may be given several times.`,
 		newMaterialsListCmd(s, load),
 		newMaterialsShowCmd(s, load),
 		newMaterialsSourcesCmd(s, load),
-		newMaterialsLintCmd(s),
+		newMaterialsLintCmd(s, &files),
 		newMaterialsStatsCmd(s, load),
 	)
 	return cmd
@@ -505,14 +505,14 @@ func plural(n int, one, many string) string {
 	return many
 }
 
-func newMaterialsLintCmd(s IO) *cobra.Command {
+func newMaterialsLintCmd(s IO, overlays *[]string) *cobra.Command {
 	return &cobra.Command{
 		Use:   "lint FILE...",
 		Short: "Check materials files: schema, dates, sources and the order of milestones",
 		Long: `Check materials files as one set: the schema (unknown keys, bad dates,
 unknown places, kinds and bases), every milestone citing a source that
-exists (in the files or the built-in bibliography), every source of the
-files cited, no name shared by two materials, and milestones in a possible
+exists (in the files, the built-in bibliography or a --materials file),
+every source of the files cited, no name shared by two materials, and milestones in a possible
 order (sold not before made, withdrawn not before sold). Prints each
 problem with its file and line, then the counts of documented and
 from-memory milestones. Exit status 1 when there are problems.`,
@@ -520,9 +520,11 @@ from-memory milestones. Exit status 1 when there are problems.`,
   terminus materials lint materials/data/*.yaml`,
 		Args: cobra.MinimumNArgs(1),
 		RunE: func(c *cobra.Command, args []string) error {
-			base, err := materials.Builtin()
+			// Sources the files cite may come from the built-in set and any
+			// --materials files; if those do not load, the files stand alone.
+			base, _, err := datasetWith(*overlays)
 			if err != nil {
-				base = nil // lint the files on their own
+				base = nil
 			}
 			d, problems, err := materials.LintFiles(base, args...)
 			if err != nil {
@@ -621,7 +623,11 @@ func statsText(w io.Writer, ds *materials.Dataset, st materials.Stats) error {
 	fmt.Fprintf(tw, "milestones\t%d\n", st.Milestones)
 	fmt.Fprintf(tw, "  by kind\t%s\n", counts(st.ByKind, func(k materials.Kind) string { return string(k) }))
 	fmt.Fprintf(tw, "  documented\t%d (%s)\n", st.Documented, percent(st.DocumentedShare()))
-	fmt.Fprintf(tw, "  from memory\t%d (%s)\n", st.FromMemory, percent(1-st.DocumentedShare()))
+	fromMemory := 0.0
+	if st.Milestones > 0 {
+		fromMemory = float64(st.FromMemory) / float64(st.Milestones)
+	}
+	fmt.Fprintf(tw, "  from memory\t%d (%s)\n", st.FromMemory, percent(fromMemory))
 	fmt.Fprintf(tw, "  documented with page or section\t%d (%s of documented)\n", st.DocumentedLocated, percent(st.LocatedShare()))
 	fmt.Fprintf(tw, "arrived\t%d in %d places\n", st.ByKind[materials.KindArrived], len(st.ArrivedByPlace))
 	fmt.Fprintf(tw, "  by region\t%s\n", counts(st.ArrivedByRegion, region))

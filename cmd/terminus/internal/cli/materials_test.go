@@ -272,6 +272,25 @@ func TestMaterialsLint(t *testing.T) {
 		t.Errorf("lint order: exit %d, got %q", code, out)
 	}
 
+	// A source defined in a --materials file may be cited by the linted one.
+	lib := writeFile(t, "library.yaml", `sources:
+  - key: my-own-notes
+    cite: "Gettens, R. J. and Stout, G. L., Painting Materials: A Short Encyclopaedia, D. Van Nostrand, New York, 1942, p. 165"
+materials:
+  - id: library-only
+    class: pigment
+    origin: mineral
+    milestones:
+      - {kind: made, date: "1271", source: my-own-notes, basis: documented}
+`)
+	cites := writeFile(t, "cites.yaml", strings.Replace(cliGood, "source: artists-pigments-2", "source: my-own-notes", 1))
+	if code, out, _ = runTerminus(t, "materials", "lint", cites); code != 1 || !strings.Contains(out, `"my-own-notes"`) {
+		t.Errorf("lint without the library: exit %d, %q", code, out)
+	}
+	if code, out, _ = runTerminus(t, "materials", "lint", "--materials", lib, cites); code != 0 {
+		t.Errorf("lint with the library: exit %d, %q", code, out)
+	}
+
 	code, _, errw = runTerminus(t, "materials", "lint", filepath.Join(t.TempDir(), "absent.yaml"))
 	if code != 2 || !strings.Contains(errw, "terminus: error: ") {
 		t.Errorf("lint absent: exit %d, stderr %q", code, errw)
