@@ -163,6 +163,11 @@ func (u Duration) spanRange() (int64, int64) {
 	}
 	cycles := n / 4800
 	r := n % 4800
+	if r%12 == 0 {
+		lo, hi := yearSpans(r / 12)
+		base := cycles*146097 + fixed
+		return lo + base, hi + base
+	}
 	ys, ms := int64(2000), 1 // the start month
 	yt, mt := ys+r/12, 1+int(r%12)
 	s := int64(Gregorian(ys, ms, 1))
@@ -192,6 +197,34 @@ func (u Duration) spanRange() (int64, int64) {
 	}
 	base := cycles*146097 + fixed
 	return lo + base, hi + base
+}
+
+// leapsBefore counts the Gregorian leap years from year 1 up to year x
+// (negative for x < 0); leapsBefore(b) − leapsBefore(a−1) counts those of
+// a..b.
+func leapsBefore(x int64) int64 {
+	return floorDiv(x, 4) - floorDiv(x, 100) + floorDiv(x, 400)
+}
+
+// yearSpans gives the least and greatest span of k whole years (k <
+// 400). From a day in January or February the span holds the 29
+// Februaries of the k years from its own year on, from a later day those
+// of the k years after it: 365k days plus the leap years among k
+// consecutive years. From 29 February to a year without one the day
+// becomes 28 February, a day less.
+func yearSpans(k int64) (int64, int64) {
+	if k == 0 {
+		return 0, 0
+	}
+	lo, hi := int64(1)<<62, int64(-1)<<62
+	for a := int64(2000); a < 2400; a++ {
+		l := leapsBefore(a+k-1) - leapsBefore(a-1)
+		lo, hi = min(lo, l), max(hi, l)
+		if IsLeap(a) && !IsLeap(a+k) {
+			lo = min(lo, l-1)
+		}
+	}
+	return 365*k + lo, 365*k + hi
 }
 
 // monthDays holds the lengths of the months of a common year, from index 1.

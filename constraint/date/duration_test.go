@@ -118,6 +118,12 @@ func TestMinMaxDaysBruteForce(t *testing.T) {
 		{Duration{Years: 400}, 146097, 146097},    // the Gregorian cycle (common practice)
 		{Duration{Years: 401, Months: 1, Weeks: 1, Days: 1}, -1, -1},
 		{Duration{Weeks: 2, Days: 3}, 17, 17},
+		{Duration{Years: 5}, 1825, 1827},  // one or two 29 Februaries in five years; from a 29 February one day less
+		{Duration{Years: 25}, 9130, 9132}, // 5 to 7 leap days (brute force; 2100 is no leap year)
+		{Duration{Years: 80}, -1, -1},
+		{Duration{Years: 399}, -1, -1},
+		{Duration{Years: 800, Months: 12}, -1, -1},
+		{Duration{Years: 3, Months: 24}, -1, -1},
 		{Duration{}, 0, 0},
 	}
 	start := Gregorian(2000, 3, 1)

@@ -128,6 +128,12 @@ func appendPoint(b []byte, pt point, role int, sep string) []byte {
 	if pt.partial {
 		return appendPartial(b, pt)
 	}
+	b = appendPlain(b, pt)
+	return appendQual(b, pt.approx, pt.uncert)
+}
+
+// appendPlain writes a Gregorian point without its qualifiers.
+func appendPlain(b []byte, pt point) []byte {
 	b = appendYearSign(b, pt.year, pt.yx, pt.neg)
 	if pt.sig > 0 {
 		b = append(b, 'S')
@@ -155,8 +161,7 @@ func appendPoint(b []byte, pt point, role int, sep string) []byte {
 			}
 		}
 	}
-	b = append(b, pt.time...)
-	return appendQual(b, pt.approx, pt.uncert)
+	return append(b, pt.time...)
 }
 
 func appendMember(b []byte, m member, inSet bool) []byte {
@@ -415,9 +420,8 @@ func qualChar(q uint8) byte {
 func appendPartial(b []byte, pt point) []byte {
 	n := pt.parts()
 	q := pt.q
-	plain := pt
-	plain.partial, plain.approx, plain.uncert = false, false, false
-	text := appendPoint(nil, plain, roleSingle, "/")
+	var tbuf [32]byte
+	text := appendPlain(tbuf[:0], pt)
 	// the parts of the plain text: year, month, day
 	var cuts [3]int // where each part ends in text
 	k := 0
