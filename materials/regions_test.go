@@ -175,3 +175,45 @@ func TestParseRegionsErrors(t *testing.T) {
 		}
 	}
 }
+
+// TestRegionCounts counts the countries and areas filed directly under each
+// M49 area. Want values: the M49 code list as of December 2021, as given in
+// the Wikipedia article "UN M49" (section Code lists: World 248 entries,
+// Eastern Asia 7, Northern Europe 16 …). The table adds Taiwan (TW), which
+// has an ISO 3166-1 code but no M49 entry, to Eastern Asia; Northern Europe
+// counts the Channel Islands' Guernsey and Jersey.
+func TestRegionCounts(t *testing.T) {
+	r, err := BuiltinRegions()
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := map[string]int{}
+	countries := 0
+	for _, c := range r.Codes() {
+		if r.IsArea(c) {
+			continue
+		}
+		countries++
+		p := r.Parent(c)
+		if p == "830" { // the Channel Islands lie in Northern Europe
+			p = r.Parent(p)
+		}
+		got[p]++
+	}
+	want := map[string]int{
+		"015": 7, "011": 17, "017": 9, "014": 22, "018": 5, // Africa
+		"029": 28, "013": 8, "005": 16, "021": 5, // Americas
+		"143": 5, "030": 7 + 1, "034": 9, "035": 11, "145": 18, // Asia (+ TW)
+		"154": 16, "155": 9, "151": 10, "039": 16, // Europe
+		"054": 5, "053": 6, "057": 8, "061": 10, // Oceania
+		"001": 1, // Antarctica
+	}
+	for area, n := range want {
+		if got[area] != n {
+			t.Errorf("%s (%s): %d countries or areas, want %d", area, r.Name(area), got[area], n)
+		}
+	}
+	if countries != 248+1 {
+		t.Errorf("%d countries or areas, want 248 of M49 and TW", countries)
+	}
+}
