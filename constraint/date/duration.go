@@ -340,3 +340,21 @@ func (d Date) Widen(c Circa) Date {
 	d.widened = true
 	return d
 }
+
+// WidenBy returns how far [Date.Widen] with policy c moves the start and
+// the end of d (of the first member's start and the last member's end in a
+// set): the policy for the precision of an approximate end, P0D for an end
+// that is not approximate or is open.
+func (d Date) WidenBy(c Circa) (start, end Duration) {
+	if len(d.members) == 0 {
+		return
+	}
+	first, last := d.members[0], d.members[len(d.members)-1]
+	if first.kind&(openStart|unknownStart) == 0 && first.start.approx {
+		start = c.For(first.start.widenPrec())
+	}
+	if last.kind&(openEnd|unknownEnd) == 0 && last.end.approx {
+		end = c.For(last.end.widenPrec())
+	}
+	return start, end
+}

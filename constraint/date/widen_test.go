@@ -146,3 +146,25 @@ func TestSmallAccessors(t *testing.T) {
 		t.Error("the zero Date is not empty")
 	}
 }
+
+func TestWidenBy(t *testing.T) {
+	c := DefaultCirca()
+	for _, tt := range []struct {
+		in         string
+		start, end string
+	}{
+		{"1870~", "P5Y", "P5Y"},
+		{"1870~/1879-05", "P5Y", "P0D"},
+		{"1870/1879-05~", "P0D", "P1M"},
+		{"2004-06~-11", "P1M", "P1M"}, // the finest approximate part is the month
+		{"?2004-06-~11", "P7D", "P7D"},
+		{"187X~", "P5Y", "P5Y"},
+		{"../1900~", "P0D", "P5Y"},
+		{"1870?", "P0D", "P0D"},
+	} {
+		s, e := mustParse(t, tt.in).WidenBy(c)
+		if s.String() != tt.start || e.String() != tt.end {
+			t.Errorf("%s: WidenBy = %s, %s; want %s, %s", tt.in, s, e, tt.start, tt.end)
+		}
+	}
+}

@@ -171,7 +171,18 @@ func writeDatesText(w io.Writer, ds []date.Date, circa date.Circa) error {
 			wd := d.Widen(circa)
 			f, fok := wd.Earliest()
 			l, lok := wd.Latest()
-			row("circa", dayText(f, fok)+" to "+dayText(l, lok)+" (default policy: "+circa.For(d.Precision).String()+" for a "+d.Precision.String()+")")
+			by := ""
+			switch bs, be := d.WidenBy(circa); {
+			case bs == be:
+				by = bs.String() + " each side"
+			case bs == date.Duration{}:
+				by = be.String() + " at the end"
+			case be == date.Duration{}:
+				by = bs.String() + " at the start"
+			default:
+				by = bs.String() + " at the start, " + be.String() + " at the end"
+			}
+			row("circa", dayText(f, fok)+" to "+dayText(l, lok)+" (default policy: "+by+")")
 		}
 	}
 	_, err := io.WriteString(w, b.String())
