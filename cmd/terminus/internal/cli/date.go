@@ -91,6 +91,7 @@ type dateJSON struct {
 	End          endJSON      `json:"end"`
 	Alternatives [][2]*string `json:"alternatives,omitempty"`
 	Widened      *[2]*string  `json:"widened,omitempty"`
+	WidenedBy    *[2]string   `json:"widened_by,omitempty"`
 }
 
 func isoOrNil(d date.Day, ok bool) *string {
@@ -125,6 +126,8 @@ func newDateJSON(d date.Date, circa date.Circa) dateJSON {
 	if d.Approximate {
 		w := d.Widen(circa)
 		j.Widened = &[2]*string{isoOrNil(w.Earliest()), isoOrNil(w.Latest())}
+		bs, be := d.WidenBy(circa)
+		j.WidenedBy = &[2]string{bs.String(), be.String()}
 	}
 	return j
 }

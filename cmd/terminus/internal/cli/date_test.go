@@ -63,6 +63,12 @@ func TestDateJSON(t *testing.T) {
 	if bce.EDTF != "-1199" || str(bce.First) != "-1199-01-01" || str(bce.Last) != "-1199-12-31" || bce.Precision != "year" {
 		t.Errorf("1200 BCE = %+v", bce)
 	}
+	if !strings.Contains(out, `"widened_by": [
+        "P5Y",
+        "P5Y"
+      ]`) {
+		t.Errorf("JSON lacks widened_by for c. 1870:\n%s", out)
+	}
 	c := got.Dates[1]
 	if !c.Approximate || c.Uncertain || len(c.Widened) != 2 || str(c.Widened[0]) != "1864-12-31" {
 		t.Errorf("c. 1870 = %+v", c)
