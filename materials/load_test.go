@@ -332,3 +332,111 @@ func TestArrival(t *testing.T) {
 		})
 	}
 }
+
+func TestOverlaySourceNote(t *testing.T) {
+	base, err := LoadFile("testdata/good.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	user, err := Load(mapFS(map[string]string{"mine.toml": `
+[[sources]]
+key = "handbook-b"
+cite = "Gettens, R. J. and Stout, G. L., Painting Materials: A Short Encyclopaedia, Dover reprint, New York, 1966, p. 158"
+`}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	d, notes := Overlay(base, user)
+	if len(notes) != 1 || !strings.Contains(notes[0], `source "handbook-b" from mine.toml replaces the built-in entry`) {
+		t.Errorf("notes: got %q", notes)
+	}
+	if s, _ := d.Source("handbook-b"); !strings.Contains(s.Cite, "Dover") {
+		t.Errorf("source after overlay: got %q", s.Cite)
+	}
+	if len(d.Sources) != 2 || len(d.Files) != 2 {
+		t.Errorf("sources %d, files %q", len(d.Sources), d.Files)
+	}
+	// The same cite again is no replacement worth a note.
+	same, err := Load(mapFS(map[string]string{"same.yaml": "sources:\n  - key: handbook-a\n    cite: \"" +
+		"Feller, R. L. (ed.), Artists' Pigments: A Handbook of Their History and Characteristics, vol. 1, National Gallery of Art, Washington, 1986, pp. 191-217\"\n"}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	if _, notes := Overlay(base, same); len(notes) != 0 {
+		t.Errorf("identical source: notes %q", notes)
+	}
+}
+
+func TestTOMLErrorLines(t *testing.T) {
+	_, err := Load(mapFS(map[string]string{"m.toml": `[[sources]]
+key = "k"
+cite = "Gettens, R. J. and Stout, G. L., Painting Materials, 1942, p. 1"
+
+[[materials]]
+id = "vermilion"
+class = "pigment"
+origin = "mineral"
+
+[[materials.milestones]]
+kind = "made"
+date = "07XX~"
+source = "k"
+basis = "documented"
+
+[[materials.milestones]]
+kind = "arrived"
+place = "Europe"
+date = "0800"
+source = "k"
+basis = "documented"
+
+[[materials.milestones]]
+kind = "made"
+date = "not a date"
+source = "k"
+basis = "read"
+`}))
+	var got []string
+	for _, e := range errorsAsList(err) {
+		got = append(got, e.Error())
+	}
+	want := []string{
+		`m.toml:18:1: unknown place "Europe"`,
+		`m.toml:25:1: bad date "not a date"`,
+		`m.toml:27:1: unknown basis "read"`,
+	}
+	if len(got) != len(want) {
+		t.Fatalf("got %d problems, want %d:\n%s", len(got), len(want), strings.Join(got, "\n"))
+	}
+	for i := range want {
+		if !strings.HasPrefix(got[i], want[i]) {
+			t.Errorf("problem %d: got %q, want %q", i, got[i], want[i])
+		}
+	}
+	if h := errorsAsList(err)[0].Hint(); !strings.Contains(h, "'150'") {
+		t.Errorf("hint for Europe: got %q, want it to suggest 150", h)
+	}
+}
+
+func TestLintFilesListsSchemaProblems(t *testing.T) {
+	b, err := os.ReadFile("testdata/bad/unknown-key.yaml")
+	if err != nil {
+		t.Fatal(err)
+	}
+	p := filepath.Join(t.TempDir(), "two.yaml")
+	text := string(b) + "      - {kind: maked, date: \"1710\", source: handbook-a, basis: from-memory}\n"
+	if err := os.WriteFile(p, []byte(text), 0o644); err != nil {
+		t.Fatal(err)
+	}
+	d, ps, err := LintFiles(nil, p)
+	if err != nil || d != nil {
+		t.Fatalf("LintFiles: %v, %v", d, err)
+	}
+	if len(ps) != 2 || !strings.Contains(ps[0].Msg, "did you mean 'basis'") ||
+		!strings.HasPrefix(ps[1].String(), p+":11:16: unknown milestone kind") {
+		t.Errorf("problems: got %v", ps)
+	}
+	if _, _, err := LintFiles(nil, "testdata/absent.yaml"); err == nil {
+		t.Errorf("LintFiles(absent): no error")
+	}
+}
