@@ -227,3 +227,13 @@ func TestHandMadeDataset(t *testing.T) {
 		t.Errorf("Arrival without regions: got %v %q", c, area)
 	}
 }
+
+func TestSchemaKeysFit(t *testing.T) {
+	k := newSchemaKeys()
+	var fs fieldSet
+	for _, keys := range [][]string{k.top, k.source, k.material, k.colourIndex, k.milestone} {
+		if len(keys) > len(fs.f) {
+			t.Errorf("%d keys %q do not fit a field set of %d", len(keys), keys, len(fs.f))
+		}
+	}
+}

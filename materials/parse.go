@@ -27,10 +27,26 @@ type parser struct {
 	file    string
 	regions *Regions
 	errs    ErrorList
+	keys    schemaKeys
+}
+
+// schemaKeys are the keys each kind of mapping may have.
+type schemaKeys struct {
+	top, source, material, colourIndex, milestone []string
+}
+
+func newSchemaKeys() schemaKeys {
+	return schemaKeys{
+		top:         []string{"sources", "materials"},
+		source:      []string{"key", "cite", "url"},
+		material:    []string{"id", "names", "class", "origin", "colour_index", "cas", "formula", "note", "milestones"},
+		colourIndex: []string{"name", "number"},
+		milestone:   []string{"kind", "date", "place", "source", "basis", "note", "allowance"},
+	}
 }
 
 func parseFile(f rawFile, regions *Regions) *fileResult {
-	p := &parser{file: f.name, regions: regions}
+	p := &parser{file: f.name, regions: regions, keys: newSchemaKeys()}
 	var root *node
 	if f.toml {
 		root = p.tomlTree(f.data)
@@ -234,7 +250,7 @@ func (p *parser) top(root *node) ([]Source, []*Material) {
 	if root.kind == scalarNode && root.null {
 		return nil, nil
 	}
-	fs := p.fields(root, "materials file", []string{"sources", "materials"})
+	fs := p.fields(root, "materials file", p.keys.top)
 	var sources []Source
 	var mats []*Material
 	if f, ok := fs.given("sources"); ok {
@@ -266,11 +282,9 @@ func (p *parser) list(n *node, what string) []*node {
 	return n.content
 }
 
-var sourceKeys = []string{"key", "cite", "url"}
-
 func (p *parser) source(n *node) (Source, bool) {
 	n = deref(n)
-	fs := p.fields(n, "source", sourceKeys)
+	fs := p.fields(n, "source", p.keys.source)
 	if fs == nil {
 		return Source{}, false
 	}
@@ -290,11 +304,9 @@ func (p *parser) source(n *node) (Source, bool) {
 	return s, s.Key != ""
 }
 
-var materialKeys = []string{"id", "names", "class", "origin", "colour_index", "cas", "formula", "note", "milestones"}
-
 func (p *parser) material(n *node) *Material {
 	n = deref(n)
-	fs := p.fields(n, "material", materialKeys)
+	fs := p.fields(n, "material", p.keys.material)
 	if fs == nil {
 		return nil
 	}
@@ -375,7 +387,7 @@ func (p *parser) oneOf(fs *fieldSet, key, what string, at *node, allowed []strin
 var ciNumber = regexp.MustCompile(`^[0-9]{5}(:[0-9]{1,2})?$`)
 
 func (p *parser) colourIndex(f field, what string) *ColourIndex {
-	fs := p.fields(f.val, "colour_index", []string{"name", "number"})
+	fs := p.fields(f.val, "colour_index", p.keys.colourIndex)
 	if fs == nil {
 		return nil
 	}
@@ -397,11 +409,9 @@ func (p *parser) colourIndex(f field, what string) *ColourIndex {
 	return ci
 }
 
-var milestoneKeys = []string{"kind", "date", "place", "source", "basis", "note", "allowance"}
-
 func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	n = deref(n)
-	fs := p.fields(n, "milestone", milestoneKeys)
+	fs := p.fields(n, "milestone", p.keys.milestone)
 	if fs == nil {
 		return Milestone{}, false
 	}
