@@ -54,8 +54,8 @@ func Load(fsys fs.FS) (*Dataset, error) {
 	return d, nil
 }
 
-// LoadFile reads one materials file (YAML, or TOML by its .toml name) as a
-// dataset of its own.
+// LoadFile reads one materials file as a dataset of its own: TOML when its
+// name ends in .toml, YAML for .yaml, .yml and .json (JSON is YAML).
 func LoadFile(name string) (*Dataset, error) {
 	d, err := loadPaths([]string{name}, nil)
 	if err != nil {
