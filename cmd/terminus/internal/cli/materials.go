@@ -418,7 +418,11 @@ func showText(w io.Writer, ds *materials.Dataset, m *materials.Material, place s
 					where += " (" + n + ")"
 				}
 			}
-			fmt.Fprintf(&b, "  %-9s  %s%s  [%s]\n", ms.Kind, ms.Date.EDTF(), where, ms.Basis)
+			when := ms.Date.EDTF()
+			if people := ms.Date.String(); people != when {
+				when += " (" + people + ")"
+			}
+			fmt.Fprintf(&b, "  %-9s  %s%s  [%s]\n", ms.Kind, when, where, ms.Basis)
 			if ms.Allowance != nil {
 				fmt.Fprintf(&b, "             stocks may have lasted %s more\n", ms.Allowance.String())
 			}
