@@ -336,7 +336,7 @@ func (d Date) Widen(c Circa) Date {
 			iv.Last += by(m.end.widenPrec())
 		}
 		return iv
-	})
+	}, nil)
 	d.widened = true
 	return d
 }

@@ -24,7 +24,7 @@ func (p *parser) bound(lo, hi int) ([]member, bool, error) {
 		if err != nil {
 			return nil, true, err
 		}
-		return []member{{start: m.start, kind: ranged | openEnd | friendly}}, true, nil
+		return p.one(member{start: m.start, kind: ranged | openEnd | friendly}), true, nil
 	case word("not after"), word("no later than"), word("by"), word("until"):
 		n := len("not after")
 		switch {
@@ -39,7 +39,7 @@ func (p *parser) bound(lo, hi int) ([]member, bool, error) {
 		if err != nil {
 			return nil, true, err
 		}
-		return []member{{end: m.end, kind: ranged | openStart | friendly}}, true, nil
+		return p.one(member{end: m.end, kind: ranged | openStart | friendly}), true, nil
 	case word("before"):
 		m, err := p.pointish(lo+len("before"), hi)
 		if err != nil {
@@ -49,7 +49,7 @@ func (p *parser) bound(lo, hi int) ([]member, bool, error) {
 		if e.time == "" {
 			e = p.pointAt(m.start.first-1, m.start)
 		}
-		return []member{{end: e, kind: ranged | openStart | friendly}}, true, nil
+		return p.one(member{end: e, kind: ranged | openStart | friendly}), true, nil
 	case word("after"):
 		m, err := p.pointish(lo+len("after"), hi)
 		if err != nil {
@@ -59,7 +59,7 @@ func (p *parser) bound(lo, hi int) ([]member, bool, error) {
 		if st.time == "" {
 			st = p.pointAt(m.end.last+1, m.end)
 		}
-		return []member{{start: st, kind: ranged | openEnd | friendly}}, true, nil
+		return p.one(member{start: st, kind: ranged | openEnd | friendly}), true, nil
 	case word("between"):
 		b := lo + len("between")
 		k := indexFold(s[b:hi], " and ")
@@ -67,7 +67,7 @@ func (p *parser) bound(lo, hi int) ([]member, bool, error) {
 			return nil, true, p.fail(hi, `expected "between X and Y"`)
 		}
 		m, err := p.span(lo+len("between"), b+k, b+k+len(" and "), hi)
-		return []member{m}, true, err
+		return p.one(m), true, err
 	}
 	return nil, false, nil
 }

@@ -82,7 +82,19 @@ func (m member) interval() Interval {
 type parser struct {
 	in   string
 	cal  Calendar
-	era2 int // an era that a bare year takes from the other end of a range
+	era2 int        // an era that a bare year takes from the other end of a range
+	ivs  []Interval // room for the alternatives of a single member
+}
+
+// one returns a single member in one allocation that also holds room for
+// its interval, which finish then uses.
+func (p *parser) one(m member) []member {
+	box := &struct {
+		m  [1]member
+		iv [1]Interval
+	}{m: [1]member{m}}
+	p.ivs = box.iv[:0]
+	return box.m[:]
 }
 
 func (p *parser) fail(pos int, msg string) *ParseError {
@@ -185,14 +197,14 @@ func (p *parser) top(lo, hi int) ([]member, bool, error) {
 	}
 	if k := strings.IndexByte(s[lo:hi], '/'); k >= 0 {
 		m, err := p.interval(lo, lo+k, hi)
-		return []member{m}, false, err
+		return p.one(m), false, err
 	}
 	if a, b, ok := p.rangeSplit(lo, hi); ok {
 		m, err := p.span(lo, a, b, hi)
-		return []member{m}, false, err
+		return p.one(m), false, err
 	}
 	m, err := p.pointish(lo, hi)
-	return []member{m}, false, err
+	return p.one(m), false, err
 }
 
 func (p *parser) ordered(m member, pos int) error {
@@ -923,16 +935,19 @@ func (p *parser) finish(ms []member, oneOf bool) Date {
 	} else {
 		d.Precision = ms[0].start.prec
 	}
-	d.Alternatives = alternatives(ms, nil)
+	d.Alternatives = alternatives(ms, nil, p.ivs)
 	d.edtf = p.canonical(ms, oneOf)
 	return d
 }
 
 // alternatives returns the sorted, merged intervals of ms, each moved out
-// by the function w when it is not nil. A single date with scattered X
+// by the function w when it is not nil, in room when it is large enough. A single date with scattered X
 // digits gives one interval per run of days.
-func alternatives(ms []member, w func(m member, iv Interval) Interval) []Interval {
-	out := make([]Interval, 0, len(ms))
+func alternatives(ms []member, w func(m member, iv Interval) Interval, room []Interval) []Interval {
+	out := room[:0]
+	if cap(out) < len(ms) {
+		out = make([]Interval, 0, len(ms))
+	}
 	for _, m := range ms {
 		if m.kind&ranged == 0 && m.start.scattered {
 			m.start.eachRun(func(first, last Day) {
