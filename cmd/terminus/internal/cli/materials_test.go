@@ -351,3 +351,37 @@ func TestMaterialsOverlay(t *testing.T) {
 		t.Errorf("overlay did not change the dataset's digest and version: %v", ds)
 	}
 }
+
+func TestMaterialsShowText(t *testing.T) {
+	user := writeFile(t, "mine.yaml", cliGood)
+	code, out, errw := runTerminus(t, "materials", "show", "--materials", user, "smalt for the test")
+	if code != 0 {
+		t.Fatalf("exit %d, stderr %q", code, errw)
+	}
+	people := func(s string) string {
+		d, err := date.Parse(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		if d.String() == d.EDTF() {
+			return d.EDTF()
+		}
+		return d.EDTF() + " (" + d.String() + ")"
+	}
+	ap2, ok := builtinForCLI(t).Source("artists-pigments-2")
+	if !ok {
+		t.Fatal("the built-in bibliography has no artists-pigments-2")
+	}
+	want := "smalt for the test (smalt-test)\n" +
+		"  class          pigment, synthetic\n" +
+		"  defined at     " + user + ":5\n" +
+		"\n" +
+		"milestones (2)\n" +
+		"  made       " + people("1540/1560") + "  [documented]\n" +
+		"             source handbook-x: Gettens, R. J. and Stout, G. L., Painting Materials: A Short Encyclopaedia, D. Van Nostrand, New York, 1942, p. 158\n" +
+		"  sold       " + people("16XX") + "  [from-memory]\n" +
+		"             source artists-pigments-2: " + ap2.Cite + "\n"
+	if out != want {
+		t.Errorf("show:\n got:\n%s\nwant:\n%s", out, want)
+	}
+}
