@@ -27,7 +27,8 @@
 // is the unit the X digits leave: 187X is a decade, 18XX a century,
 // 1985-XX a year, 1985-04-XX a month (EDTF's own wording calls 201X "year
 // precision"; here the decade is meant, so that "c. 1870s" widens by the
-// decade policy).
+// decade policy). For scattered X digits it is the unit of each run
+// (156X-12-25: day).
 //
 // # EDTF
 //
@@ -98,7 +99,6 @@
 //	until 1900                                  ../1900  (inclusive)
 //	not before 1850, no earlier than 1850,
 //	from 1850, since 1850                       1850/..  (inclusive)
-//
 //	May 1874, 21 May 1874, May 21, 1874, Sept. 1874
 //	                                            1874-05, 1874-05-21, 1874-09
 //
