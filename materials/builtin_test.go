@@ -278,11 +278,11 @@ materials:
 		got = append(got, p.String())
 	}
 	want := []string{
-		`a.yaml:3: source "unused" is never cited`,
+		`a.yaml:3:5: source "unused" is never cited`,
 		`a.yaml:10:9: sold milestone of "early-sale" (1840) lies wholly before its earliest made claim`,
 		`a.yaml:11:9: withdrawn milestone of "early-sale" (1830) lies wholly before its earliest sold claim`,
 		`a.yaml:19:9: arrived milestone of "disagreeing-but-fine" (1700) lies wholly before its earliest made claim`,
-		`a.yaml:20: material "never-made" has no made milestone`,
+		`a.yaml:20:5: material "never-made" has no made milestone`,
 	}
 	if len(got) != len(want) {
 		t.Fatalf("got %d problems, want %d:\n%s", len(got), len(want), strings.Join(got, "\n"))

@@ -81,7 +81,7 @@ func lint(d *Dataset, known func(key string) bool) []Problem {
 	keys := map[string]Source{}
 	for _, s := range d.Sources {
 		if prev, dup := keys[s.Key]; dup {
-			add(s.File, s.Line, 0, "source key %q is already defined at %s:%d", s.Key, prev.File, prev.Line)
+			add(s.File, s.Line, s.col, "source key %q is already defined at %s:%d", s.Key, prev.File, prev.Line)
 			continue
 		}
 		keys[s.Key] = s
@@ -90,13 +90,13 @@ func lint(d *Dataset, known func(key string) bool) []Problem {
 	names := map[string]*Material{}
 	for _, m := range d.Materials {
 		if prev, dup := ids[m.ID]; dup {
-			add(m.File, m.Line, 0, "id %q is already used at %s:%d", m.ID, prev.File, prev.Line)
+			add(m.File, m.Line, m.col, "id %q is already used at %s:%d", m.ID, prev.File, prev.Line)
 		}
 		ids[m.ID] = m
 		for _, n := range append([]string{m.ID}, m.Names...) {
 			k := fold(n)
 			if other, ok := names[k]; ok && other != m {
-				add(m.File, m.Line, 0, "name %q of %q is also a name of %q (%s:%d)", n, m.ID, other.ID, other.File, other.Line)
+				add(m.File, m.Line, m.col, "name %q of %q is also a name of %q (%s:%d)", n, m.ID, other.ID, other.File, other.Line)
 				continue
 			}
 			names[k] = m
@@ -114,7 +114,7 @@ func lint(d *Dataset, known func(key string) bool) []Problem {
 	}
 	for _, s := range d.Sources {
 		if !cited[s.Key] {
-			add(s.File, s.Line, 0, "source %q is never cited; cite it or remove it", s.Key)
+			add(s.File, s.Line, s.col, "source %q is never cited; cite it or remove it", s.Key)
 		}
 	}
 	slices.SortStableFunc(ps, func(a, b Problem) int {
@@ -135,7 +135,7 @@ func lintOrder(m *Material) []Problem {
 	var ps []Problem
 	made := m.Claims(KindMade, "")
 	if len(made) == 0 {
-		return []Problem{{File: m.File, Line: m.Line, Msg: fmt.Sprintf("material %q has no made milestone", m.ID)}}
+		return []Problem{{File: m.File, Line: m.Line, Column: m.col, Msg: fmt.Sprintf("material %q has no made milestone", m.ID)}}
 	}
 	firstMade, okMade := earliestStart(made)
 	check := func(claims []Milestone, after date.Day, ok bool, what string) {

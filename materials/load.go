@@ -272,7 +272,7 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 	keys := map[string]Source{}
 	for _, s := range d.Sources {
 		if prev, dup := keys[s.Key]; dup {
-			errs = append(errs, &Error{File: s.File, Line: s.Line, Column: 0,
+			errs = append(errs, &Error{File: s.File, Line: s.Line, Column: s.col,
 				Msg:        fmt.Sprintf("source key %q is already defined at %s:%d", s.Key, prev.File, prev.Line),
 				Suggestion: "source keys are unique across the dataset; cite the existing entry or give this one a new key"})
 			continue
@@ -302,7 +302,7 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 	names := make(map[string]*Material, 8*len(d.Materials))
 	for _, m := range d.Materials {
 		if prev, dup := ids[m.ID]; dup {
-			errs = append(errs, &Error{File: m.File, Line: m.Line, Column: 0,
+			errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
 				Msg:        fmt.Sprintf("id %q is already used at %s:%d", m.ID, prev.File, prev.Line),
 				Suggestion: "ids are unique; if this is another material, give it its own id"})
 		} else {
@@ -314,7 +314,7 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 				n = m.Names[i-1]
 			}
 			if other, dup := names[k]; dup && other != m && other.ID != m.ID {
-				errs = append(errs, &Error{File: m.File, Line: m.Line,
+				errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
 					Msg:        fmt.Sprintf("name %q of %q is also a name of %q (%s:%d)", n, m.ID, other.ID, other.File, other.Line),
 					Suggestion: "a name may belong to one material only; keep it on the one it describes best"})
 				continue
@@ -345,7 +345,7 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 				if _, replaced := ids[other.ID]; replaced {
 					continue
 				}
-				errs = append(errs, &Error{File: m.File, Line: m.Line,
+				errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
 					Msg:        fmt.Sprintf("name %q of %q already names the built-in material %q", n, m.ID, other.ID),
 					Suggestion: fmt.Sprintf("to replace the built-in entry, give yours the id %q", other.ID)})
 			}

@@ -103,6 +103,8 @@ type Source struct {
 
 	File string // where it was defined
 	Line int
+
+	col int
 }
 
 // ColourIndex is a Colour Index International generic name and constitution
@@ -143,6 +145,7 @@ type Material struct {
 	File string
 	Line int
 
+	col  int      // column of the entry, for messages
 	keys []string // folded id and names, as the loader computed them
 }
 

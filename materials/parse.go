@@ -288,7 +288,7 @@ func (p *parser) source(n *node) (Source, bool) {
 	if fs == nil {
 		return Source{}, false
 	}
-	s := Source{File: p.file, Line: int(n.line)}
+	s := Source{File: p.file, Line: int(n.line), col: int(n.col)}
 	s.Key = p.required(fs, "key", words("a source"), n)
 	s.Cite = p.required(fs, "cite", func() string { return fmt.Sprintf("source %q", s.Key) }, n)
 	if f, ok := fs.given("url"); ok {
@@ -310,7 +310,7 @@ func (p *parser) material(n *node) *Material {
 	if fs == nil {
 		return nil
 	}
-	m := &Material{File: p.file, Line: int(n.line)}
+	m := &Material{File: p.file, Line: int(n.line), col: int(n.col)}
 	m.ID = p.required(fs, "id", words("a material"), n)
 	if m.ID != "" && !validID(m.ID) {
 		p.errAt(fs.at("id").val, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
