@@ -116,7 +116,7 @@
 // "Before" and "after" are strict at the precision written: before
 // 1900-05 is ../1900-04, after 1881-24 (winter) is 1882-03/..; a date
 // with a time of day keeps its own day ("before 1985-04-12T10:00:00" is
-// ../1985-04-12). The qualifiers of the date carry over: before c. 1900
+// ../1985-04-12T10:00:00, up to and with that day). The qualifiers of the date carry over: before c. 1900
 // is ../1899~.
 //
 // # Calendars
