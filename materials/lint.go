@@ -106,7 +106,11 @@ func lint(d *Dataset, known func(key string) bool) []Problem {
 			case ms.Source == "":
 				add(ms.File, ms.Line, ms.Column, "%s milestone of %q has no source", ms.Kind, m.ID)
 			case !hasKey(keys, ms.Source) && (known == nil || !known(ms.Source)):
-				add(ms.File, ms.Line, ms.Column, "%s milestone of %q cites %q, which is not in the bibliography", ms.Kind, m.ID, ms.Source)
+				line, col := ms.Line, ms.Column
+				if ms.sourceLine > 0 {
+					line, col = ms.sourceLine, ms.sourceCol
+				}
+				add(ms.File, line, col, "%s milestone of %q cites %q, which is not in the bibliography", ms.Kind, m.ID, ms.Source)
 			}
 			cited[ms.Source] = true
 		}

@@ -324,7 +324,11 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 		for i := range m.Milestones {
 			ms := &m.Milestones[i]
 			if ms.Source != "" && !known(ms.Source) {
-				e := &Error{File: ms.File, Line: ms.Line, Column: ms.Column,
+				line, col := ms.Line, ms.Column
+				if ms.sourceLine > 0 {
+					line, col = ms.sourceLine, ms.sourceCol
+				}
+				e := &Error{File: ms.File, Line: line, Column: col,
 					Msg: fmt.Sprintf("milestone of %q cites source %q, which is not in the bibliography", m.ID, ms.Source)}
 				if s := nearestWords(ms.Source, all, 3); len(s) > 0 {
 					e.Suggestion = "did you mean " + orList(s) + "? (or add the source under 'sources:')"

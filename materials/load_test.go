@@ -104,7 +104,7 @@ func TestLoadErrors(t *testing.T) {
 		{"unknown-key.toml", "20:1", `unknown key "sorce" in a milestone`, "did you mean 'source'"},
 		{"unknown-top.yaml", "1:1", `unknown key "source" in a materials file`, "did you mean 'sources'"},
 		{"bad-date.yaml", "10:", `bad date "17x6"`, "EDTF"},
-		{"unknown-source.yaml", "10:9", `cites source "handbok-a", which is not in the bibliography`, "did you mean 'handbook-a'"},
+		{"unknown-source.yaml", "10:44", `cites source "handbok-a", which is not in the bibliography`, "did you mean 'handbook-a'"},
 		{"unknown-place.yaml", "11:32", `unknown place "Japan"`, "did you mean 'JP'"},
 		{"place-number.yaml", "11:32", `unknown place "30"`, "did you mean '030'"},
 		{"bad-kind.yaml", "10:16", `unknown milestone kind "maked"`, "did you mean 'made'"},
@@ -181,10 +181,10 @@ materials:
 		got = append(got, e.Error())
 	}
 	want := []string{
-		"a.yaml:5:12: ", // the class
-		"a.yaml:8:",     // the date (its column is the date parser's)
-		"a.yaml:13:9: ", // the unknown source
-		"b.yaml:2:",     // the duplicate key
+		"a.yaml:5:12: ",  // the class
+		"a.yaml:8:",      // the date (its column is the date parser's)
+		"a.yaml:13:44: ", // the unknown source, at its key
+		"b.yaml:2:",      // the duplicate key
 	}
 	if len(got) != len(want) {
 		t.Fatalf("got %d problems, want %d:\n%s", len(got), len(want), strings.Join(got, "\n"))

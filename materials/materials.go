@@ -128,6 +128,8 @@ type Milestone struct {
 
 	File         string
 	Line, Column int
+
+	sourceLine, sourceCol int // where the source key is written
 }
 
 // Material is one entry of the dataset.

@@ -484,6 +484,7 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	}
 	if f, has := fs.given("source"); has {
 		ms.Source = strings.TrimSpace(p.str(f, "a source key"))
+		ms.sourceLine, ms.sourceCol = int(f.val.line), int(f.val.col)
 	}
 	if ms.Source == "" && !fs.at("source").typo {
 		p.errAt(n, where()+" cites no source", "every milestone names a source key from the bibliography; write 'from-memory' as its basis if you could not check it")

@@ -260,7 +260,7 @@ func TestMaterialsLint(t *testing.T) {
 	if code != 1 {
 		t.Errorf("lint bad: exit %d, want 1", code)
 	}
-	for _, want := range []string{bad + ":12:5: name \"smalt for the test\"", bad + ":17:9: ", "source \"nowhere\"", "2 problems\n"} {
+	for _, want := range []string{bad + ":12:5: name \"smalt for the test\"", bad + ":17:44: ", "source \"nowhere\"", "2 problems\n"} {
 		if !strings.Contains(out, want) {
 			t.Errorf("lint bad: output lacks %q:\n%s", want, out)
 		}
