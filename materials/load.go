@@ -249,7 +249,7 @@ func loadFiles(files []rawFile, base *Dataset) (*Dataset, error) {
 		errs = append(errs, p.errs...)
 		d.Sources = append(d.Sources, p.sources...)
 		d.Materials = append(d.Materials, p.materials...)
-		d.fileData = append(d.fileData, fileDigest{name: files[i].name, sum: sha256.Sum256(files[i].data)})
+		d.fileData = append(d.fileData, fileDigest{name: files[i].name, sum: p.sum})
 	}
 	cross, names := crossCheck(d, base)
 	errs = append(errs, cross...)

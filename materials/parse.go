@@ -2,6 +2,7 @@ package materials
 
 import (
 	"bytes"
+	"crypto/sha256"
 	"errors"
 	"fmt"
 	"io"
@@ -20,6 +21,7 @@ type fileResult struct {
 	sources   []Source
 	materials []*Material
 	errs      ErrorList
+	sum       [32]byte // SHA-256 of the file's bytes
 }
 
 // parser checks one file's node tree against the schema.
@@ -53,7 +55,7 @@ func parseFile(f rawFile, regions *Regions) *fileResult {
 	} else {
 		root = p.yamlTree(f.data)
 	}
-	res := &fileResult{}
+	res := &fileResult{sum: sha256.Sum256(f.data)}
 	if root != nil {
 		res.sources, res.materials = p.top(root)
 	}
