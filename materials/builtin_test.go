@@ -315,3 +315,18 @@ func BenchmarkLookup(b *testing.B) {
 		}
 	}
 }
+
+func TestCINameShape(t *testing.T) {
+	for _, tc := range []struct {
+		name string
+		ok   bool
+	}{
+		{"Pigment Blue 27", true}, {"Pigment Red 48:2", true}, {"Fluorescent Brightener 28", true}, {"Natural Red 4", true},
+		{"Pigment Blue27", false}, {"pigment blue 27", false}, {"Pigment Blue 27:", false}, {"Pigment  Blue 27", false},
+		{"PB27", false}, {"Pigment Blue 2a", false}, {"", false},
+	} {
+		if got := ciNameShape(tc.name); got != tc.ok {
+			t.Errorf("ciNameShape(%q): got %v, want %v", tc.name, got, tc.ok)
+		}
+	}
+}

@@ -4,6 +4,7 @@ import (
 	"cmp"
 	"fmt"
 	"slices"
+	"strings"
 
 	"terminus/constraint/date"
 )
@@ -46,7 +47,8 @@ func Problems(err error) []Problem {
 //   - every milestone names a source, and every source key cited exists;
 //   - every source in the bibliography is cited by some milestone;
 //   - no name (folded as [Dataset.Lookup] folds it) belongs to two materials;
-//   - ids and source keys are unique.
+//   - ids and source keys are unique;
+//   - a Colour Index name has the usual shape ("Pigment Blue 27").
 //
 // Problems are sorted by file and line.
 func Lint(d *Dataset) []Problem { return lint(d, nil) }
@@ -114,6 +116,9 @@ func lint(d *Dataset, known func(key string) bool) []Problem {
 			}
 			cited[ms.Source] = true
 		}
+		if ci := m.ColourIndex; ci != nil && ci.Name != "" && !ciNameShape(ci.Name) {
+			add(m.File, m.Line, m.col, "Colour Index name %q of %q is not of the form 'Pigment Blue 27'", ci.Name, m.ID)
+		}
 		ps = append(ps, lintOrder(m)...)
 	}
 	for _, s := range d.Sources {
@@ -179,4 +184,38 @@ func earliestStart(ms []Milestone) (date.Day, bool) {
 		}
 	}
 	return best, len(ms) > 0
+}
+
+// ciNameShape reports whether a Colour Index generic name has the usual
+// shape: capitalised words, then a number with an optional ":n"
+// ("Pigment Blue 27", "Pigment Red 48:2", "Fluorescent Brightener 28").
+func ciNameShape(name string) bool {
+	f := strings.Split(name, " ")
+	if len(f) < 2 {
+		return false
+	}
+	for _, w := range f[:len(f)-1] {
+		if w == "" || w[0] < 'A' || w[0] > 'Z' {
+			return false
+		}
+		for i := 1; i < len(w); i++ {
+			if w[i] < 'a' || w[i] > 'z' {
+				return false
+			}
+		}
+	}
+	num, suffix, hasSuffix := strings.Cut(f[len(f)-1], ":")
+	if num == "" || !allDigitsText(num) {
+		return false
+	}
+	return !hasSuffix || suffix != "" && allDigitsText(suffix)
+}
+
+func allDigitsText(s string) bool {
+	for i := 0; i < len(s); i++ {
+		if s[i] < '0' || s[i] > '9' {
+			return false
+		}
+	}
+	return true
 }

@@ -187,6 +187,9 @@ func ciShort(name string) string {
 	}
 	num := f[len(f)-1]
 	colour, ok := ciColour(f[len(f)-2])
+	if !ok && strings.EqualFold(f[len(f)-3]+" "+f[len(f)-2], "Fluorescent Brightener") {
+		return "FB" + num // Fluorescent Brightener 28 is FB28: common practice
+	}
 	if !ok || num == "" || num[0] < '0' || num[0] > '9' {
 		return ""
 	}

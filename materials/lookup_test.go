@@ -52,6 +52,7 @@ func TestCIShort(t *testing.T) {
 		{"Pigment Red 48:2", "PR48:2"},
 		{"Solvent Yellow", ""},
 		{"Pigment Mauve 1", ""},
+		{"Fluorescent Brightener 28", "FB28"},
 		{"", ""},
 	} {
 		if got := ciShort(tc.in); got != tc.want {
