@@ -61,6 +61,7 @@ func BenchmarkSurvey(b *testing.B) {
 		for _, mode := range []string{"check", "parse-only", "check+sensitivity"} {
 			b.Run(fmt.Sprintf("%s/%s", format, mode), func(b *testing.B) {
 				b.ReportAllocs()
+				cpu0 := cpuTime()
 				for b.Loop() {
 					in, err := Open(path, nil, "")
 					if err != nil {
@@ -73,6 +74,9 @@ func BenchmarkSurvey(b *testing.B) {
 					}
 				}
 				b.ReportMetric(float64(b.Elapsed().Nanoseconds())/float64(b.N*n), "ns/record")
+				if cpu := cpuTime() - cpu0; cpu > 0 {
+					b.ReportMetric(float64(cpu.Nanoseconds())/float64(b.N*n), "cpu-ns/record")
+				}
 			})
 		}
 	}
