@@ -41,15 +41,10 @@ func writeTemp(b testing.TB, name string, data []byte) string {
 	return p
 }
 
-type discard struct{}
-
-func (discard) Render(o *Outcome) error { return nil }
-func (discard) Write(o *Outcome) error  { return nil }
-func (discard) Close(Counts) error      { return nil }
-
 // BenchmarkSurvey runs whole surveys of 1000 records: read, parse, check
 // (without the sensitivity re-solves, the survey's default) and write
-// JSON Lines, against a parse-only pass over the same input (the floor).
+// JSON Lines (or, in check-csv-out, the csv summary), against a
+// parse-only pass over the same input (the floor).
 func BenchmarkSurvey(b *testing.B) {
 	ds, err := materials.Builtin()
 	if err != nil {
@@ -58,7 +53,7 @@ func BenchmarkSurvey(b *testing.B) {
 	const n = 1000
 	for _, format := range []Format{JSONL, CSV} {
 		path := writeTemp(b, "c."+string(format), benchCollection(n, format == CSV))
-		for _, mode := range []string{"check", "parse-only", "check+sensitivity"} {
+		for _, mode := range []string{"check", "check-csv-out", "parse-only", "check+sensitivity"} {
 			b.Run(fmt.Sprintf("%s/%s", format, mode), func(b *testing.B) {
 				b.ReportAllocs()
 				cpu0 := cpuTime()
@@ -68,7 +63,11 @@ func BenchmarkSurvey(b *testing.B) {
 						b.Fatal(err)
 					}
 					opt := Options{Dataset: ds, ParseOnly: mode == "parse-only", Analyze: constraint.Options{NoSensitivity: mode != "check+sensitivity"}}
-					c, err := Run(context.Background(), []*Input{in}, NewJSONLWriter(io.Discard, nil), opt)
+					var w Writer = NewJSONLWriter(io.Discard, nil)
+					if mode == "check-csv-out" {
+						w = NewCSVWriter(io.Discard, in.Free)
+					}
+					c, err := Run(context.Background(), []*Input{in}, w, opt)
 					if err != nil || c.Records != n || c.Errors() != 0 {
 						b.Fatalf("%v %+v", err, c)
 					}
