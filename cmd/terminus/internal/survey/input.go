@@ -204,8 +204,16 @@ func normColumn(s string) string {
 	return strings.NewReplacer(" ", "_", "-", "_").Replace(s)
 }
 
-// columnAliases are other spellings of the known columns.
-var columnAliases = map[string]string{"material": colMaterials, "claims": colClaim, "claimed": colClaim}
+// columnAlias returns the known column for another spelling of it.
+func columnAlias(n string) (string, bool) {
+	switch n {
+	case "material":
+		return colMaterials, true
+	case "claims", "claimed":
+		return colClaim, true
+	}
+	return "", false
+}
 
 func (in *Input) readHeader() error {
 	for {
@@ -230,7 +238,7 @@ func (in *Input) readHeader() error {
 		known := Columns()
 		for i, f := range in.split.fields {
 			n := normColumn(f.Text)
-			if a, ok := columnAliases[n]; ok {
+			if a, ok := columnAlias(n); ok {
 				n = a
 			}
 			if contains(known, n) {

@@ -188,15 +188,27 @@ func (r *ReportWriter) Write(o *Outcome) error {
 	return r.sections[o.Summary.Status].write(o.Out)
 }
 
-var sectionTitles = map[Status]string{
-	StatusExcluded:     "Excluded: a claim contradicts hard evidence",
-	StatusUndetermined: "Undetermined: the hard evidence contradicts itself",
-	StatusImprobable:   "Improbable: a claim contradicts firm evidence",
-	StatusDoubtful:     "Doubtful: a claim contradicts only soft evidence",
-	StatusError:        "Record errors: not checked",
-	StatusConsistent:   "Consistent",
-	StatusNoClaim:      "No claim to judge",
-	StatusParsed:       "Read (parse-only pass, not checked)",
+// sectionTitle heads a status's section of the report.
+func sectionTitle(s Status) string {
+	switch s {
+	case StatusExcluded:
+		return "Excluded: a claim contradicts hard evidence"
+	case StatusUndetermined:
+		return "Undetermined: the hard evidence contradicts itself"
+	case StatusImprobable:
+		return "Improbable: a claim contradicts firm evidence"
+	case StatusDoubtful:
+		return "Doubtful: a claim contradicts only soft evidence"
+	case StatusError:
+		return "Record errors: not checked"
+	case StatusConsistent:
+		return "Consistent"
+	case StatusNoClaim:
+		return "No claim to judge"
+	case StatusParsed:
+		return "Read (parse-only pass, not checked)"
+	}
+	return string(s)
 }
 
 // Cleanup removes the temporary files, if any; Close does it too. Call it
@@ -249,7 +261,7 @@ func (r *ReportWriter) closeMarkdown(w *bufio.Writer, c Counts) error {
 		if sec.n == 0 {
 			continue
 		}
-		fmt.Fprintf(w, "## %s (%d)\n\n", sectionTitles[s], sec.n)
+		fmt.Fprintf(w, "## %s (%d)\n\n", sectionTitle(s), sec.n)
 		if s == StatusError {
 			fmt.Fprint(w, "| id | where | error | hint |\n|---|---|---|---|\n")
 		} else {
@@ -350,7 +362,7 @@ func (r *ReportWriter) closeHTML(w *bufio.Writer, c Counts) error {
 			Class, Title string
 			N            int
 			Errors       bool
-		}{class, sectionTitles[s], sec.n, s == StatusError}); err != nil {
+		}{class, sectionTitle(s), sec.n, s == StatusError}); err != nil {
 			return err
 		}
 		if err := sec.copyTo(w); err != nil {
