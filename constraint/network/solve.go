@@ -3,6 +3,7 @@ package network
 import (
 	"context"
 	"fmt"
+	"maps"
 	"slices"
 	"strings"
 )
@@ -416,6 +417,16 @@ type search struct {
 	early, late []Bound
 	memo        [][]string
 	extended    []bool
+
+	// lookahead
+	tlo, tup      []int64
+	count, cstamp []int32
+	stamp         int32
+	touched       []change
+	queue         []int32
+	refined       map[int32]Set
+	laChanges     [][][]change // per choice left open, per alternative
+	laSure        []bool
 }
 
 func (sr *search) init() {
@@ -487,6 +498,19 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 			}
 		}
 		open = next
+		if changed {
+			continue
+		}
+		if len(open) == 0 {
+			break
+		}
+		// Look one alternative ahead: drop the alternatives whose bounds
+		// propagation fails, fix a choice with one left.
+		var dead bool
+		open, fixed, changed, dead = sr.lookahead(open, fixed)
+		if dead {
+			return nil
+		}
 		if !changed {
 			break
 		}
@@ -501,7 +525,7 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 	if !sr.record && sr.found {
 		return nil
 	}
-	if sr.record && sr.dominated(open) {
+	if sr.record && sr.dominated() {
 		return nil
 	}
 	best := 0
@@ -513,7 +537,19 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 	rest := make([][]calt, 0, len(open)-1)
 	rest = append(rest, open[:best]...)
 	rest = append(rest, open[best+1:]...)
-	for _, a := range open[best] {
+	// Keep what the lookahead knows of each child, to skip a child whose
+	// windows are already covered without solving it.
+	var pre *preview
+	if sr.record && sr.laSure[best] {
+		pre = &preview{
+			lo: slices.Clone(g.lo[:len(sr.p.vars)]), up: slices.Clone(g.up[:len(sr.p.vars)]),
+			refined: maps.Clone(sr.refined), changes: sr.laChanges[best],
+		}
+	}
+	for ai, a := range open[best] {
+		if pre != nil && sr.childDominated(pre, ai) {
+			continue
+		}
 		if err := sr.node(append(fixed[:len(fixed):len(fixed)], a), rest); err != nil {
 			return err
 		}
@@ -522,6 +558,45 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 		}
 	}
 	return nil
+}
+
+// preview is what the lookahead of a node learnt about its children.
+type preview struct {
+	lo, up  []int64
+	refined map[int32]Set
+	changes [][]change // per alternative of the branching choice
+}
+
+// childDominated reports whether the windows of a child, as propagation
+// predicts them, are all covered already.
+func (sr *search) childDominated(pre *preview, alt int) bool {
+	ch := pre.changes[alt]
+	old := make([]change, len(ch))
+	for j, c := range ch {
+		old[j] = change{c.v, pre.lo[c.v], pre.up[c.v]}
+		pre.lo[c.v], pre.up[c.v] = c.lo, c.hi
+	}
+	covered := true
+	for i := 1; i < len(pre.lo) && covered; i++ {
+		if inside(sr.dom[i], pre.lo[i], pre.up[i]) {
+			continue
+		}
+		vals, ok := pre.refined[int32(i)]
+		if !ok {
+			covered = false
+			break
+		}
+		for _, iv := range intersectSets(vals, Set{{pre.lo[i], pre.up[i]}}) {
+			if !inside(sr.dom[i], iv.Lo, iv.Hi) {
+				covered = false
+				break
+			}
+		}
+	}
+	for _, c := range old {
+		pre.lo[c.v], pre.up[c.v] = c.lo, c.hi
+	}
+	return covered
 }
 
 // diffRange bounds to − from by the current bounds of both nodes.
@@ -538,38 +613,18 @@ func diffRange(g *stn, from, to int32) (int64, int64) {
 
 // dominated reports whether every variable's values at this node lie
 // inside the union found so far; deeper choices could only narrow them.
-// A variable's values are over-approximated by its window, cut, for each
-// open choice that touches it, by the union over the alternatives of the
-// window one propagation step would give (so that a gap an open choice
-// will open does not defeat the test).
-func (sr *search) dominated(open [][]calt) bool {
+// A variable's values are over-approximated by its window, cut by the
+// union, over the alternatives of each open choice, of the windows that
+// bounds propagation gives (so that a gap an open choice will open does
+// not defeat the test).
+func (sr *search) dominated() bool {
 	g := &sr.g
 	for i := 1; i < len(sr.p.vars); i++ {
 		if inside(sr.dom[i], g.lo[i], g.up[i]) {
 			continue
 		}
-		x := int32(i)
-		vals := Set{{g.lo[i], g.up[i]}}
-		touched := false
-		for _, alts := range open {
-			var u Set
-			hit := false
-			for _, a := range alts {
-				if a.from != x && a.to != x {
-					continue
-				}
-				hit = true
-				lo, hi := oneStep(g, a, x)
-				if lo <= hi {
-					u = union(u, Interval{lo, hi})
-				}
-			}
-			if hit {
-				touched = true
-				vals = intersectSets(vals, u)
-			}
-		}
-		if !touched {
+		vals, ok := sr.refined[int32(i)]
+		if !ok {
 			return false
 		}
 		for _, iv := range vals {
@@ -581,38 +636,178 @@ func (sr *search) dominated(open [][]calt) bool {
 	return true
 }
 
-// oneStep bounds x (an end of a) after adding a to the current bounds.
-func oneStep(g *stn, a calt, x int32) (int64, int64) {
-	f, t := a.from, a.to
-	if x == t {
-		return max(g.lo[t], addInf(g.lo[f], a.lo, -Inf)), min(g.up[t], addInf(g.up[f], a.hi, Inf))
-	}
-	return max(g.lo[f], addInf(g.lo[t], neg(a.hi), -Inf)), min(g.up[f], addInf(g.up[t], neg(a.lo), Inf))
+// change is a variable's window after propagating one alternative.
+type change struct {
+	v      int32
+	lo, hi int64
 }
 
-// addInf adds two values either of which may be infinite towards side.
-func addInf(a, b, side int64) int64 {
-	if a <= -Inf || a >= Inf || b <= -Inf || b >= Inf {
-		return side
+// lookahead propagates the bounds of every alternative of every open
+// choice from the current node. It drops the alternatives that fail,
+// fixes the choices left with one, and records in sr.refined, for each
+// variable that every alternative of some choice narrows, the union of
+// those narrowed windows (intersected over the choices).
+func (sr *search) lookahead(open [][]calt, fixed []calt) (next [][]calt, fx []calt, changed, dead bool) {
+	g := &sr.g
+	k := len(sr.p.vars)
+	sr.tlo = append(sr.tlo[:0], g.lo[:k]...)
+	sr.tup = append(sr.tup[:0], g.up[:k]...)
+	if cap(sr.count) < k {
+		sr.count = make([]int32, k)
+		sr.cstamp = make([]int32, k)
 	}
-	return a + b
+	sr.count, sr.cstamp = sr.count[:k], sr.cstamp[:k]
+	clear(sr.refined)
+	if sr.refined == nil {
+		sr.refined = map[int32]Set{}
+	}
+	fx = fixed
+	sr.laChanges, sr.laSure = sr.laChanges[:0], sr.laSure[:0]
+	for _, alts := range open {
+		var kept []calt
+		var changes [][]change
+		known := true
+		for _, a := range alts {
+			ok, sure, ch := sr.propagate(a)
+			if !ok {
+				continue
+			}
+			kept = append(kept, a)
+			changes = append(changes, ch)
+			known = known && sure
+		}
+		switch len(kept) {
+		case 0:
+			return nil, nil, false, true
+		case 1:
+			fx = append(fx[:len(fx):len(fx)], kept[0])
+			changed = true
+			continue
+		}
+		next = append(next, kept)
+		sr.laChanges = append(sr.laChanges, changes)
+		sr.laSure = append(sr.laSure, known)
+		if !known {
+			continue
+		}
+		// Variables narrowed by every alternative.
+		sr.stamp++
+		for _, ch := range changes {
+			for _, c := range ch {
+				if sr.cstamp[c.v] != sr.stamp {
+					sr.cstamp[c.v], sr.count[c.v] = sr.stamp, 0
+				}
+				sr.count[c.v]++
+			}
+		}
+		u := map[int32]Set{}
+		for _, ch := range changes {
+			for _, c := range ch {
+				if sr.count[c.v] == int32(len(kept)) {
+					u[c.v] = union(u[c.v], Interval{c.lo, c.hi})
+				}
+			}
+		}
+		for v, set := range u {
+			if old, ok := sr.refined[v]; ok {
+				set = intersectSets(old, set)
+			}
+			sr.refined[v] = set
+		}
+	}
+	if changed {
+		clear(sr.refined)
+	}
+	return next, fx, changed, false
 }
 
-func intersectSets(a, b Set) Set {
-	var out Set
-	i, j := 0, 0
-	for i < len(a) && j < len(b) {
-		lo, hi := max(a[i].Lo, b[j].Lo), min(a[i].Hi, b[j].Hi)
-		if lo <= hi {
-			out = append(out, Interval{lo, hi})
+// propagate adds alternative a to the current bounds and propagates them
+// along the arcs. It returns false when the bounds cross (a cannot hold),
+// and sure = false when it gave up after its step budget; the changes are
+// the new windows of the variables it narrowed.
+func (sr *search) propagate(a calt) (ok, sure bool, changes []change) {
+	g := &sr.g
+	lo, up := sr.tlo, sr.tup
+	k := len(sr.p.vars)
+	floor := -int64(k+1) * Limit // no consistent bound lies beyond
+	sr.touched = sr.touched[:0]
+	sr.queue = sr.queue[:0]
+	sr.stamp++
+	mark := func(v int32) {
+		if sr.cstamp[v] != sr.stamp {
+			sr.cstamp[v] = sr.stamp
+			sr.touched = append(sr.touched, change{v, lo[v], up[v]})
 		}
-		if a[i].Hi < b[j].Hi {
-			i++
-		} else {
-			j++
+		sr.queue = append(sr.queue, v)
+	}
+	setUp := func(v int32, x int64) {
+		if x < up[v] {
+			mark(v)
+			up[v] = x
 		}
 	}
-	return out
+	setLo := func(v int32, x int64) {
+		if x > lo[v] {
+			mark(v)
+			lo[v] = x
+		}
+	}
+	alt := func() {
+		f, t := a.from, a.to
+		if a.hi < Inf {
+			if up[f] < Inf {
+				setUp(t, up[f]+a.hi)
+			}
+			if lo[t] > -Inf {
+				setLo(f, lo[t]-a.hi)
+			}
+		}
+		if a.lo > -Inf {
+			if up[t] < Inf {
+				setUp(f, up[t]-a.lo)
+			}
+			if lo[f] > -Inf {
+				setLo(t, lo[f]+a.lo)
+			}
+		}
+	}
+	alt()
+	ok, sure = true, true
+	budget := 4*k + 64
+	for qi := 0; qi < len(sr.queue); qi++ {
+		y := sr.queue[qi]
+		if lo[y] > up[y] || up[y] < floor || lo[y] > -floor {
+			ok = false
+			break
+		}
+		if qi > budget {
+			sure = false
+			break
+		}
+		if up[y] < Inf {
+			for j := g.start[y]; j < g.start[y+1]; j++ {
+				e := &g.arcs[j]
+				setUp(e.to, up[y]+e.w)
+			}
+		}
+		if lo[y] > -Inf {
+			for j := g.rstart[y]; j < g.rstart[y+1]; j++ {
+				e := &g.arcs[g.rarcs[j]]
+				setLo(e.from, lo[y]-e.w)
+			}
+		}
+		if y == a.from || y == a.to {
+			alt()
+		}
+	}
+	// Report and undo.
+	for _, c := range sr.touched {
+		if ok && sure {
+			changes = append(changes, change{c.v, lo[c.v], up[c.v]})
+		}
+		lo[c.v], up[c.v] = c.lo, c.hi
+	}
+	return ok, sure, changes
 }
 
 func inside(s Set, lo, hi int64) bool {
@@ -738,4 +933,21 @@ func appendMerge(s Set, iv Interval) Set {
 		return s
 	}
 	return append(s, iv)
+}
+
+func intersectSets(a, b Set) Set {
+	var out Set
+	i, j := 0, 0
+	for i < len(a) && j < len(b) {
+		lo, hi := max(a[i].Lo, b[j].Lo), min(a[i].Hi, b[j].Hi)
+		if lo <= hi {
+			out = append(out, Interval{lo, hi})
+		}
+		if a[i].Hi < b[j].Hi {
+			i++
+		} else {
+			j++
+		}
+	}
+	return out
 }
