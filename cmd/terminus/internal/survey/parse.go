@@ -43,9 +43,12 @@ func onLine(err error, file string, line int) error {
 	var ce *constraint.Error
 	if errors.As(err, &ce) {
 		ce.File = file
-		if ce.Line <= 1 {
-			ce.Line = line
+		if ce.Line > 1 {
+			// A character the YAML reader counts as a line break (U+0085,
+			// U+2028 inside a string): the column is not the input's.
+			ce.Column = 0
 		}
+		ce.Line = line
 	}
 	return err
 }
@@ -70,6 +73,11 @@ func parseJSONLine(r rawRecord, p parsed) (parsed, error) {
 			msg += ": " + err.Error()
 		}
 		return p, recordErr(name, r.line, col, msg, `each line holds one case as a JSON object, e.g. {"id": "inv-1", "findings": [{"material": "smalt"}], "claims": [{"date": "1650"}]}`)
+	}
+	if bytes.IndexByte(text, '\r') >= 0 {
+		// Valid JSON has carriage returns only as white space, which the
+		// YAML reader would count as line breaks.
+		text = bytes.ReplaceAll(text, []byte("\r"), []byte(" "))
 	}
 	id, rest, err := takeID(text)
 	if err != nil {
