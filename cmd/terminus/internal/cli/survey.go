@@ -46,7 +46,7 @@ func isTerminal(w io.Writer) bool {
 // settings back. A survey's live heap is small and bounded (the reorder
 // window), so the default target of 100 % makes the collector run every
 // few hundred records: at 400 % it takes about a third less CPU time.
-// A soft memory limit of 128 MiB keeps the peak flat however long the
+// A soft memory limit of 64 MiB keeps the peak flat however long the
 // input: the live heap stays near 10 MiB, so the limit is never tight
 // enough to make the collector thrash.
 func tuneGC() func() {
@@ -54,7 +54,7 @@ func tuneGC() func() {
 		return func() {}
 	}
 	oldPercent := debug.SetGCPercent(400)
-	oldLimit := debug.SetMemoryLimit(128 << 20)
+	oldLimit := debug.SetMemoryLimit(64 << 20)
 	return func() {
 		debug.SetGCPercent(oldPercent)
 		debug.SetMemoryLimit(oldLimit)
@@ -98,7 +98,7 @@ sources disagree) is off by default here: it multiplies the work by the number
 of disagreements, and a collection is screened first, then its flagged records
 checked one by one. --sensitivity turns it on. Memory stays bounded however
 long the input; unless GOGC or GOMEMLIMIT is set, the survey runs the garbage
-collector at a 400 % target under a 128 MiB soft limit.
+collector at a 400 % target under a 64 MiB soft limit.
 
 Exit status: 0 when every record was checked and all are consistent; 1 when a
 claim is not consistent or the evidence conflicts at the --fail-on tier or a
