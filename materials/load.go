@@ -124,9 +124,13 @@ func Overlay(base, user *Dataset) (*Dataset, []string) {
 	}
 	out.Sources = append(out.Sources, user.Sources...)
 	out.fileData = append(slices.Clone(base.fileData), user.fileData...)
-	out.Version = base.Version + "+local"
-	if base.Version == "" {
+	switch v := base.Version; {
+	case v == "" || v == "local":
 		out.Version = "local"
+	case strings.HasSuffix(v, "+local"):
+		out.Version = v
+	default:
+		out.Version = v + "+local"
 	}
 	out.finish()
 	return out, notes
