@@ -263,8 +263,15 @@ func TestExtendAndOverlay(t *testing.T) {
 	if _, err := d.Lookup("Berlin blue"); err == nil {
 		t.Errorf("a name of the replaced entry still resolves")
 	}
-	if d.SHA256 == base.SHA256 || d.Version == base.Version {
-		t.Errorf("overlay kept the base digest or version: %s %s", d.SHA256, d.Version)
+	if d.SHA256 == base.SHA256 || d.Version != "local" {
+		t.Errorf("overlay of a local set: digest %s (base %s), version %q", d.SHA256, base.SHA256, d.Version)
+	}
+	versioned := *base
+	versioned.Version = DataVersion
+	if o, _ := Overlay(&versioned, d); o.Version != DataVersion+"+local" {
+		t.Errorf("overlay of the built-in version: got %q", o.Version)
+	} else if o2, _ := Overlay(o, d); o2.Version != o.Version {
+		t.Errorf("overlay of an overlay: got %q", o2.Version)
 	}
 	if len(base.Materials) != 2 || base.Materials[0].Names[1] != "Berlin blue" {
 		t.Errorf("Extend changed the base")
