@@ -142,13 +142,13 @@ func TestUncertainMilestoneLowersTier(t *testing.T) {
 }
 
 func TestApproximateMilestoneWidens(t *testing.T) {
-	// fixture red: made "1868~". With circa year P2Y the start moves back by
-	// MaxDays(P2Y) = 731 days: 1868-01-01 − 731 = 1865-12-31.
+	// fixture red: made "1868~". With circa year P2Y the start moves back two
+	// calendar years: 1866-01-01.
 	r := analyze(t, "circa: {year: P2Y}\nfindings:\n  - {material: fixture red}\n")
-	wantWindow(t, r, "making", network.Hard, "1865-12-31", "")
-	// The default policy (year P5Y) moves it by 1827 days: 1862-12-31.
+	wantWindow(t, r, "making", network.Hard, "1866-01-01", "")
+	// The default policy (year P5Y) moves it back five: 1863-01-01.
 	r = analyze(t, "findings:\n  - {material: fixture red}\n")
-	wantWindow(t, r, "making", network.Hard, "1862-12-31", "")
+	wantWindow(t, r, "making", network.Hard, "1863-01-01", "")
 }
 
 func TestWithdrawnWithAllowance(t *testing.T) {

@@ -307,9 +307,11 @@ func ParseCircaKey(name string) (Precision, error) {
 
 // Widen returns d with every approximate end moved out by the policy c
 // for the precision that end was written in (for qualifiers on single
-// parts, the finest approximate part): the start of the end's run
-// of days earlier by c's MaxDays, its last day later by MaxDays (the
-// conservative choice both ways). A single approximate date ("1870~")
+// parts, the finest approximate part), on the calendar: the first day of
+// the end's run of days goes back by the duration, its last day forward
+// by it ("1870~" with P5Y is 1865-01-01 to 1875-12-31; a day of the month
+// that the target month lacks becomes its last day, as in
+// [Duration.AddTo]). A single approximate date ("1870~")
 // widens at both sides; an interval "1870~/1879" only at its start. Open
 // ends stay open; uncertain ("?") ends do not move. Widen always starts
 // from the date as written, so widening twice is widening once with the
@@ -318,27 +320,28 @@ func (d Date) Widen(c Circa) Date {
 	if len(d.members) == 0 {
 		return d
 	}
-	var memo [PrecisionMillennium + 1]int64 // MaxDays per precision, +1 so that 0 means not yet
-	by := func(p Precision) Day {
+	by := func(p Precision) Duration {
 		if p > PrecisionMillennium {
 			p = PrecisionMillennium
 		}
-		if memo[p] == 0 {
-			memo[p] = c.For(p).MaxDays() + 1
-		}
-		return Day(memo[p] - 1)
+		return c.For(p)
 	}
 	d.Alternatives = alternatives(d.members, func(m member, iv Interval) Interval {
 		if !iv.OpenStart && m.start.approx {
-			iv.First -= by(m.start.widenPrec())
+			iv.First = by(m.start.widenPrec()).negated().AddTo(iv.First)
 		}
 		if !iv.OpenEnd && m.end.approx {
-			iv.Last += by(m.end.widenPrec())
+			iv.Last = by(m.end.widenPrec()).AddTo(iv.Last)
 		}
 		return iv
 	}, nil)
 	d.widened = true
 	return d
+}
+
+// negated is u pointing backwards: AddTo with it goes back in time.
+func (u Duration) negated() Duration {
+	return Duration{Years: -u.Years, Months: -u.Months, Weeks: -u.Weeks, Days: -u.Days}
 }
 
 // WidenBy returns how far [Date.Widen] with policy c moves the start and

@@ -258,14 +258,14 @@ func TestEDTFLevel2Qualification(t *testing.T) {
 	}{
 		// Group Qualification example 1: "year, month, and day uncertain and approximate".
 		{"L2 Group Qualification ex1", "2004-06-11%", "c. 11 June 2004?", true, true, "2004-06-04→2004-06-18"},
-		// Example 2: "year and month approximate" (widened by the month policy, 31 days).
-		{"L2 Group Qualification ex2", "2004-06~-11", "11 June 2004 (year approximate, month approximate)", true, false, "2004-05-11→2004-07-12"},
+		// Example 2: "year and month approximate" (widened by the month policy, one calendar month each way).
+		{"L2 Group Qualification ex2", "2004-06~-11", "11 June 2004 (year approximate, month approximate)", true, false, "2004-05-11→2004-07-11"},
 		// Example 3: "year uncertain" (nothing widens).
 		{"L2 Group Qualification ex3", "2004?-06-11", "11 June 2004 (year uncertain)", false, true, "2004-06-11→2004-06-11"},
 		// Qualification of Individual Component example 4: "year uncertain; month known; day approximate".
 		{"L2 Individual Component ex4", "?2004-06-~11", "11 June 2004 (year uncertain, day approximate)", true, true, "2004-06-04→2004-06-18"},
 		// Example 5: "month uncertain and approximate; year and day known".
-		{"L2 Individual Component ex5", "2004-%06-11", "11 June 2004 (month approximate and uncertain)", true, true, "2004-05-11→2004-07-12"},
+		{"L2 Individual Component ex5", "2004-%06-11", "11 June 2004 (month approximate and uncertain)", true, true, "2004-05-11→2004-07-11"},
 		// Interval example 1: "An interval in June 2004 beginning approximately the first and ending approximately the 20th".
 		{"L2 Interval ex1", "2004-06-~01/2004-06-~20", "1 June 2004 (day approximate) to 20 June 2004 (day approximate)", true, false, "2004-05-25→2004-06-27"},
 	}

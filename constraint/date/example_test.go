@@ -49,7 +49,7 @@ func ExampleDate_Widen() {
 	last, _ := w.Latest()
 	fmt.Println(first.ISO(), last.ISO())
 	// Output:
-	// 1864-12-31 1879-12-31
+	// 1865-01-01 1879-12-31
 }
 
 func ExampleDuration_MinDays() {

@@ -47,22 +47,25 @@ func TestWiden(t *testing.T) {
 		circa  Circa
 		widest []string
 	}{
-		// Year P5Y: the most days five years can span is 1827 (five years
-		// holding two 29 Februaries), at each side.
-		{"1870~", c, []string{"1864-12-31→1876-01-01"}},
-		{"1870~/1879", c, []string{"1864-12-31→1879-12-31"}},
+		// Year P5Y: five calendar years earlier at the start, five later at
+		// the end (1870-01-01 back to 1865-01-01, 1870-12-31 on to 1875-12-31).
+		{"1870~", c, []string{"1865-01-01→1875-12-31"}},
+		{"1870~/1879", c, []string{"1865-01-01→1879-12-31"}},
 		{"1870/1879~", c, []string{"1870-01-01→1884-12-31"}},
 		{"1870?", c, []string{"1870-01-01→1870-12-31"}},
 		{"1870", c, []string{"1870-01-01→1870-12-31"}},
-		{"1874-05~", c, []string{"1874-03-31→1874-07-01"}},
+		// Month P1M: May widens to April–June, its last day to the last of June.
+		{"1874-05~", c, []string{"1874-04-01→1874-06-30"}},
 		{"1874-05-21~", c, []string{"1874-05-14→1874-05-28"}},
-		{"187X~", c, []string{"1864-12-31→1884-12-31"}},
-		{"../1900~", c, []string{"..→1906-01-01"}},
-		{"1870~", Circa{PrecisionYear: {Years: 1}}, []string{"1868-12-31→1872-01-01"}},
+		{"187X~", c, []string{"1865-01-01→1884-12-31"}},
+		{"../1900~", c, []string{"..→1905-12-31"}},
+		{"1870~", Circa{PrecisionYear: {Years: 1}}, []string{"1869-01-01→1871-12-31"}},
 		{"1870~", Circa{PrecisionYear: {}}, []string{"1870-01-01→1870-12-31"}},
+		// A month end moved back a month: 31 March to the last day of February.
+		{"1870-03-31~", Circa{PrecisionDay: {Months: 1}}, []string{"1870-02-28→1870-04-30"}},
 		// Members of a set widen on their own and merge when they meet.
-		{"[1870~,1880]", c, []string{"1864-12-31→1876-01-01", "1880-01-01→1880-12-31"}},
-		{"[1870~,1878~]", c, []string{"1864-12-31→1884-01-01"}},
+		{"[1870~,1880]", c, []string{"1865-01-01→1875-12-31", "1880-01-01→1880-12-31"}},
+		{"[1870~,1878~]", c, []string{"1865-01-01→1883-12-31"}},
 	}
 	for _, tt := range tests {
 		t.Run(tt.in, func(t *testing.T) {

@@ -14,8 +14,8 @@ func TestDateText(t *testing.T) {
 	for _, want := range []string{
 		"c. 1870\n  EDTF         1870~\n  reads as     c. 1870\n  first day    1870-01-01\n  last day     1870-12-31\n  precision    year\n  qualifiers   approximate\n",
 		// The default circa policy: P5Y spans at most 1827 days each side.
-		"  circa        1864-12-31 to 1876-01-01 (default policy: P5Y each side)\n",
-		"  qualifiers   start approximate, end exact\n  circa        1864-12-31 to 1879-12-31 (default policy: P5Y at the start)\n",
+		"  circa        1865-01-01 to 1875-12-31 (default policy: P5Y each side)\n",
+		"  qualifiers   start approximate, end exact\n  circa        1865-01-01 to 1879-12-31 (default policy: P5Y at the start)\n",
 		"  one of       1667-01-01 to 1668-12-31\n               1670-01-01 to 1672-12-31\n",
 		// Julian 1582-10-04 is the day before Gregorian 1582-10-15.
 		"  EDTF         1582-10-14\n  reads as     4 October 1582 (Julian)\n  calendar     Julian, converted to Gregorian days\n",
@@ -70,7 +70,7 @@ func TestDateJSON(t *testing.T) {
 		t.Errorf("JSON lacks widened_by for c. 1870:\n%s", out)
 	}
 	c := got.Dates[1]
-	if !c.Approximate || c.Uncertain || len(c.Widened) != 2 || str(c.Widened[0]) != "1864-12-31" {
+	if !c.Approximate || c.Uncertain || len(c.Widened) != 2 || str(c.Widened[0]) != "1865-01-01" {
 		t.Errorf("c. 1870 = %+v", c)
 	}
 	set := got.Dates[2]
