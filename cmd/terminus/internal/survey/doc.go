@@ -36,7 +36,9 @@
 // unquoted field is kept as text.
 //
 // A line or a CSV record longer than [MaxLine] bytes is a record error, so
-// that one runaway line cannot exhaust the memory.
+// that one runaway line cannot exhaust the memory; a quoted field that runs
+// on past the limit is cut there, and reading goes on at the next line. A
+// quote left open at the end of a file is an error at the line it opens.
 //
 // # Records and errors
 //

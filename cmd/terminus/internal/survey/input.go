@@ -347,7 +347,7 @@ func (in *Input) next() (rawRecord, error) {
 		if !in.split.open && len(bytes.TrimSpace(text)) == 0 {
 			continue
 		}
-		if tooLong || in.split.size+len(text) > MaxLine {
+		if tooLong || (in.split.open && in.split.size+len(text) > MaxLine) {
 			start := line
 			if in.split.open {
 				start = in.split.start.Line

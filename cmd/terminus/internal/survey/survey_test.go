@@ -373,3 +373,31 @@ func TestProgress(t *testing.T) {
 		t.Errorf("no progress line with a bar (the input's size is known): %q", s)
 	}
 }
+
+func TestCSVLongRecords(t *testing.T) {
+	big := strings.Repeat("x", MaxLine*3/5)
+	// Two records of 0.6 MiB each are fine; a quoted field that runs on
+	// past the limit is an error at its first line, and the reader goes on.
+	text := "id,notes\na," + big + "\nb," + big + "\nc,\"" + big + "\n" + big + "\nmore\"\nd,ok\n"
+	in := openText(t, "long.csv", text)
+	var got []string
+	for {
+		r, err := in.next()
+		if errors.Is(err, io.EOF) {
+			break
+		}
+		if err != nil {
+			t.Fatal(err)
+		}
+		s := fmt.Sprint(r.line)
+		if _, err := parse(r); err != nil {
+			s += " error"
+		}
+		got = append(got, s)
+	}
+	// Line 6, the rest of the runaway field, is read as a row of its own,
+	// with one field too few.
+	if want := "[2 3 4 error 6 error 7]"; fmt.Sprint(got) != want {
+		t.Errorf("records %v, want %s", got, want)
+	}
+}
