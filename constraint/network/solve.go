@@ -360,7 +360,7 @@ func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
 	for _, pr := range p.problems {
 		sr := &search{solver: s, p: pr, record: true}
 		sr.init()
-		if err := sr.node(nil, pr.choices); err != nil {
+		if err := sr.node(nil, pr.choices, nil, nil); err != nil {
 			return false, nil, err
 		}
 		if !sr.found {
@@ -387,7 +387,7 @@ func (s *solver) consistent(active []int32) (bool, []int32, error) {
 	}
 	for _, pr := range p.problems {
 		sr := &search{solver: s, p: pr}
-		if err := sr.node(nil, pr.choices); err != nil {
+		if err := sr.node(nil, pr.choices, nil, nil); err != nil {
 			return false, nil, err
 		}
 		if !sr.found {
@@ -427,6 +427,9 @@ type search struct {
 	refined       map[int32]Set
 	laChanges     [][][]change // per choice left open, per alternative
 	laSure        []bool
+	failVar       int32 // a variable the last dominance test found uncovered
+	saveLo        []int64
+	saveUp        []int64
 }
 
 func (sr *search) init() {
@@ -441,8 +444,11 @@ func (sr *search) init() {
 }
 
 // node solves the network of the base arcs and the fixed alternatives,
-// propagates the open choices and branches on the narrowest one.
-func (sr *search) node(fixed []calt, open [][]calt) error {
+// propagates the open choices and branches on the narrowest one. When the
+// parent's lookahead already knows this node's bounds (lo, up not nil),
+// the node skips the full solve; a leaf always gets one, for its
+// explanations and to rule out a negative cycle propagation missed.
+func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
 	sr.nodes++
 	if sr.nodes > sr.opt.maxNodes() {
 		return fmt.Errorf("solve: %d nodes: %w", sr.nodes, ErrLimit)
@@ -454,22 +460,23 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 	}
 	g := &sr.g
 	root := fixed == nil
+	exact := false
 	for {
 		sr.arcs = append(sr.arcs[:0], sr.p.base...)
 		for _, a := range fixed {
 			sr.arcs = a.arcs(sr.arcs)
 		}
 		g.build(len(sr.p.vars), sr.arcs)
-		ok, cyc := g.potential()
-		if !ok {
-			if root && len(open) == len(sr.p.choices) {
-				for _, k := range cyc {
-					sr.seed = append(sr.seed, g.arcs[k].tag)
-				}
+		if lo != nil {
+			g.lo = append(g.lo[:0], lo...)
+			g.up = append(g.up[:0], up...)
+			lo, up = nil, nil
+		} else {
+			if !sr.solveNode(root && len(open) == len(sr.p.choices)) {
+				return nil
 			}
-			return nil
+			exact = true
 		}
-		g.bounds()
 		changed := false
 		var next [][]calt
 		for _, alts := range open {
@@ -516,6 +523,9 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 		}
 	}
 	if len(open) == 0 {
+		if !exact && !sr.solveNode(false) {
+			return nil
+		}
 		sr.found = true
 		if sr.record {
 			sr.leaf()
@@ -528,10 +538,25 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 	if sr.record && sr.dominated() {
 		return nil
 	}
-	best := 0
-	for i, alts := range open {
-		if len(alts) < len(open[best]) {
-			best = i
+	if sr.record && sr.dive(fixed, open) && sr.dominated() {
+		return nil
+	}
+	// Branch on a choice that moves the window found uncovered, so that
+	// the search settles what matters to it first; else on the narrowest.
+	best := -1
+	if sr.record && sr.failVar > 0 {
+		for i, alts := range open {
+			if sr.laSure[i] && touches(sr.laChanges[i], sr.failVar) && (best < 0 || len(alts) < len(open[best])) {
+				best = i
+			}
+		}
+	}
+	if best < 0 {
+		best = 0
+		for i, alts := range open {
+			if len(alts) < len(open[best]) {
+				best = i
+			}
 		}
 	}
 	rest := make([][]calt, 0, len(open)-1)
@@ -540,17 +565,24 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 	// Keep what the lookahead knows of each child, to skip a child whose
 	// windows are already covered without solving it.
 	var pre *preview
-	if sr.record && sr.laSure[best] {
+	if sr.laSure[best] {
 		pre = &preview{
 			lo: slices.Clone(g.lo[:len(sr.p.vars)]), up: slices.Clone(g.up[:len(sr.p.vars)]),
 			refined: maps.Clone(sr.refined), changes: sr.laChanges[best],
 		}
 	}
 	for ai, a := range open[best] {
-		if pre != nil && sr.childDominated(pre, ai) {
-			continue
+		var clo, cup []int64
+		if pre != nil {
+			if sr.record && sr.childDominated(pre, ai) {
+				continue
+			}
+			clo, cup = slices.Clone(pre.lo), slices.Clone(pre.up)
+			for _, c := range pre.changes[ai] {
+				clo[c.v], cup[c.v] = c.lo, c.hi
+			}
 		}
-		if err := sr.node(append(fixed[:len(fixed):len(fixed)], a), rest); err != nil {
+		if err := sr.node(append(fixed[:len(fixed):len(fixed)], a), rest, clo, cup); err != nil {
 			return err
 		}
 		if !sr.record && sr.found {
@@ -558,6 +590,52 @@ func (sr *search) node(fixed []calt, open [][]calt) error {
 		}
 	}
 	return nil
+}
+
+// dive fixes every open choice to its first alternative and solves that
+// scenario in one step; a consistent one is a leaf like any other. When
+// the open choices do not touch the windows still uncovered, that leaf
+// covers them and spares the descent through every level below.
+func (sr *search) dive(fixed []calt, open [][]calt) bool {
+	g := &sr.g
+	k := len(sr.p.vars)
+	sr.saveLo = append(sr.saveLo[:0], g.lo[:k]...)
+	sr.saveUp = append(sr.saveUp[:0], g.up[:k]...)
+	sr.arcs = append(sr.arcs[:0], sr.p.base...)
+	for _, a := range fixed {
+		sr.arcs = a.arcs(sr.arcs)
+	}
+	for _, alts := range open {
+		sr.arcs = alts[0].arcs(sr.arcs)
+	}
+	sr.nodes++
+	g.build(k, sr.arcs)
+	ok := sr.solveNode(false)
+	if ok {
+		sr.found = true
+		sr.leaf()
+	}
+	g.lo = append(g.lo[:0], sr.saveLo...)
+	g.up = append(g.up[:0], sr.saveUp...)
+	return ok
+}
+
+// solveNode computes the potential and the bounds of the graph built; on
+// a negative cycle it returns false and, when asked, keeps the cycle's
+// constraints as a seed for the conflicts.
+func (sr *search) solveNode(keepSeed bool) bool {
+	g := &sr.g
+	ok, cyc := g.potential()
+	if !ok {
+		if keepSeed {
+			for _, k := range cyc {
+				sr.seed = append(sr.seed, g.arcs[k].tag)
+			}
+		}
+		return false
+	}
+	g.bounds()
+	return true
 }
 
 // preview is what the lookahead of a node learnt about its children.
@@ -623,6 +701,7 @@ func (sr *search) dominated() bool {
 		if inside(sr.dom[i], g.lo[i], g.up[i]) {
 			continue
 		}
+		sr.failVar = int32(i)
 		vals, ok := sr.refined[int32(i)]
 		if !ok {
 			return false
@@ -633,7 +712,20 @@ func (sr *search) dominated() bool {
 			}
 		}
 	}
+	sr.failVar = 0
 	return true
+}
+
+// touches reports whether some alternative's changes move variable v.
+func touches(changes [][]change, v int32) bool {
+	for _, ch := range changes {
+		for _, c := range ch {
+			if c.v == v {
+				return true
+			}
+		}
+	}
+	return false
 }
 
 // change is a variable's window after propagating one alternative.
