@@ -385,10 +385,9 @@ func tomlValue(v any, loc *tomlLocator, path string, index int, line, col int) *
 		}
 		n.Line = start
 		type kv struct {
-			k       string
-			v       any
-			l, c    int
-			isTable bool
+			k    string
+			v    any
+			l, c int
 		}
 		var kvs []kv
 		for k, val := range x {

@@ -116,13 +116,14 @@ func (d Date) Latest() (Day, bool) {
 // Calendar returns the calendar d was written in: [CalendarJulian] when
 // it was marked or read as Julian (its days are converted all the same).
 func (d Date) Calendar() Calendar {
-	for _, m := range d.members {
-		if m.kind&(openStart|unknownStart) == 0 {
-			return m.start.cal
-		}
+	if len(d.members) == 0 {
+		return CalendarGregorian
+	}
+	if m := d.members[0]; m.kind&(openStart|unknownStart) == 0 {
+		return m.start.cal
+	} else {
 		return m.end.cal
 	}
-	return CalendarGregorian
 }
 
 // Widened reports whether d is the result of [Date.Widen].
