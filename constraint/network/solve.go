@@ -461,22 +461,36 @@ func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
 	g := &sr.g
 	root := fixed == nil
 	exact := false
+	var seeds []int32 // ends of the alternatives fixed since the last bounds
 	for {
 		sr.arcs = append(sr.arcs[:0], sr.p.base...)
 		for _, a := range fixed {
 			sr.arcs = a.arcs(sr.arcs)
 		}
 		g.build(len(sr.p.vars), sr.arcs)
-		if lo != nil {
+		switch {
+		case lo != nil:
 			g.lo = append(g.lo[:0], lo...)
 			g.up = append(g.up[:0], up...)
 			lo, up = nil, nil
-		} else {
+		case seeds != nil && !exact:
+			// The bounds before the last fixes are valid labels: carry
+			// on from them.
+			ok, sure := sr.repropagate(seeds)
+			if !ok {
+				return nil
+			}
+			if !sure && !sr.solveNode(false) {
+				return nil
+			}
+			exact = exact && sure
+		default:
 			if !sr.solveNode(root && len(open) == len(sr.p.choices)) {
 				return nil
 			}
 			exact = true
 		}
+		seeds = seeds[:0]
 		changed := false
 		var next [][]calt
 		for _, alts := range open {
@@ -499,6 +513,7 @@ func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
 				return nil
 			case len(kept) == 1:
 				fixed = append(fixed[:len(fixed):len(fixed)], kept[0])
+				seeds = append(seeds, kept[0].from, kept[0].to)
 				changed = true
 			default:
 				next = append(next, kept)
@@ -514,9 +529,13 @@ func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
 		// Look one alternative ahead: drop the alternatives whose bounds
 		// propagation fails, fix a choice with one left.
 		var dead bool
+		nf := len(fixed)
 		open, fixed, changed, dead = sr.lookahead(open, fixed)
 		if dead {
 			return nil
+		}
+		for _, a := range fixed[nf:] {
+			seeds = append(seeds, a.from, a.to)
 		}
 		if !changed {
 			break
@@ -610,14 +629,81 @@ func (sr *search) dive(fixed []calt, open [][]calt) bool {
 	}
 	sr.nodes++
 	g.build(k, sr.arcs)
-	ok := sr.solveNode(false)
+	ok, _ := g.potential()
 	if ok {
-		sr.found = true
-		sr.leaf()
+		// Bounds by label correcting from the node's; the shortest-path
+		// trees only when the leaf adds something.
+		var seeds []int32
+		for _, alts := range open {
+			seeds = append(seeds, alts[0].from, alts[0].to)
+		}
+		var sure bool
+		ok, sure = sr.repropagate(seeds)
+		if ok && (!sure || sr.adds()) {
+			g.bounds()
+			sr.leaf()
+		}
+		sr.found = sr.found || ok
 	}
 	g.lo = append(g.lo[:0], sr.saveLo...)
 	g.up = append(g.up[:0], sr.saveUp...)
 	return ok
+}
+
+// repropagate brings the bounds up to date after arcs were added at the
+// seed nodes, by label correcting from the current bounds along the
+// graph. It returns false when the bounds cross, and sure = false when it
+// gave up after its step budget (the bounds are then to be recomputed).
+func (sr *search) repropagate(seeds []int32) (ok, sure bool) {
+	g := &sr.g
+	lo, up := g.lo, g.up
+	k := len(sr.p.vars)
+	floor := -int64(k+1) * Limit
+	q := append(sr.queue[:0], seeds...)
+	budget := 4*k + 2*len(seeds) + 64
+	for qi := 0; qi < len(q); qi++ {
+		if qi > budget {
+			sr.queue = q
+			return true, false
+		}
+		y := q[qi]
+		if lo[y] > up[y] || up[y] < floor || lo[y] > -floor {
+			sr.queue = q
+			return false, true
+		}
+		if up[y] < Inf {
+			for j := g.start[y]; j < g.start[y+1]; j++ {
+				e := &g.arcs[j]
+				if x := up[y] + e.w; x < up[e.to] {
+					up[e.to] = x
+					q = append(q, e.to)
+				}
+			}
+		}
+		if lo[y] > -Inf {
+			for j := g.rstart[y]; j < g.rstart[y+1]; j++ {
+				e := &g.arcs[g.rarcs[j]]
+				if x := lo[y] - e.w; x > lo[e.from] {
+					lo[e.from] = x
+					q = append(q, e.from)
+				}
+			}
+		}
+	}
+	sr.queue = q
+	return true, true
+}
+
+// adds reports whether the current bounds would add to the domains or
+// improve a bound.
+func (sr *search) adds() bool {
+	g := &sr.g
+	for i := 1; i < len(sr.p.vars); i++ {
+		if g.lo[i] < sr.early[i].Value || g.up[i] > sr.late[i].Value || !inside(sr.dom[i], g.lo[i], g.up[i]) {
+			return true
+		}
+	}
+	return false
 }
 
 // solveNode computes the potential and the bounds of the graph built; on
@@ -939,6 +1025,17 @@ func (sr *search) leaf() {
 				val, b = g.up[v], &sr.late[v]
 				old = b.Value
 				if val < old {
+					continue
+				}
+			}
+			if val == old {
+				// A tie with an earlier scenario: only a shorter
+				// explanation replaces the first found.
+				hops := g.upHops[v]
+				if pass == 0 {
+					hops = g.loHops[v]
+				}
+				if int(hops) >= len(b.Because) {
 					continue
 				}
 			}

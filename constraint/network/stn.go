@@ -36,6 +36,8 @@ type stn struct {
 	up, lo       []int64 // d(0→v) and −d(v→0), ±Inf when unbounded
 	upArc, loArc []int32 // arc into v on the tree (index into arcs), -1 at the root or when unbounded
 	hops         []int32
+	upHops       []int32 // steps of the path that sets up, and lo
+	loHops       []int32
 	heap         []hentry
 	rank         []int32 // constraint index → rank of its id, for ties
 }
@@ -253,7 +255,9 @@ func (g *stn) bounds() {
 	g.loArc = resize32(g.loArc, n)
 	g.hops = resize32(g.hops, n)
 	g.dijkstra(false)
+	g.upHops = append(g.upHops[:0], g.hops...)
 	g.dijkstra(true)
+	g.loHops = append(g.loHops[:0], g.hops...)
 }
 
 // dijkstra runs from node 0 over the arcs (reverse: against them) with the
