@@ -12,6 +12,9 @@ import (
 // tier. It fails only when ctx is done or a search exceeds
 // [Options.MaxNodes]; an inconsistent network is a Result, not an error.
 func (n *Network) Solve(ctx context.Context, tier Tier, opt Options) (*Result, error) {
+	if err := ctx.Err(); err != nil {
+		return nil, fmt.Errorf("solve: %w", err)
+	}
 	s := n.newSolver(ctx, opt)
 	var active []int32
 	for i, c := range n.cons {
@@ -381,6 +384,9 @@ func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
 // consistent reports whether the given constraints are consistent, and on
 // an inconsistent simple network the constraints of a negative cycle.
 func (s *solver) consistent(active []int32) (bool, []int32, error) {
+	if err := s.ctx.Err(); err != nil {
+		return false, nil, fmt.Errorf("solve: %w", err)
+	}
 	p := s.prepare(active)
 	if p.empty >= 0 {
 		return false, nil, nil

@@ -1,0 +1,72 @@
+package network_test
+
+import (
+	"context"
+	"fmt"
+
+	"terminus/constraint/network"
+)
+
+// A painting (making) and a later retouching, in days from an arbitrary
+// origin: a pigment available only from day 100, a document that puts the
+// retouching before day 400, and the retouching at least 30 days after the
+// painting.
+func Example() {
+	n := network.New()
+	making := n.AddVar("making")
+	retouch := n.AddVar("retouch")
+	for _, c := range []network.Constraint{
+		{ID: "pigment", Tier: network.Hard, Alts: []network.Alt{{From: network.Zero, To: making, Lo: 100, Hi: network.Inf}}},
+		{ID: "inventory", Tier: network.Firm, Alts: []network.Alt{{From: network.Zero, To: retouch, Lo: -network.Inf, Hi: 400}}},
+		{ID: "order", Tier: network.Hard, Alts: []network.Alt{{From: making, To: retouch, Lo: 30, Hi: network.Inf}}},
+	} {
+		if err := n.Add(c); err != nil {
+			fmt.Println(err)
+			return
+		}
+	}
+	r, err := n.Solve(context.Background(), network.Firm, network.Options{})
+	if err != nil {
+		fmt.Println(err)
+		return
+	}
+	for _, v := range []network.Var{making, retouch} {
+		lo, hi := r.Earliest(v), r.Latest(v)
+		fmt.Printf("%s: %d %v .. %d %v\n", n.Name(v), lo.Value, lo.Because, hi.Value, hi.Because)
+	}
+	// Output:
+	// making: 100 [pigment] .. 370 [inventory order]
+	// retouch: 130 [pigment order] .. 400 [inventory]
+}
+
+// Two pieces of evidence that cannot both hold: the conflict and the
+// cheapest correction (the soft one goes).
+func ExampleResult_Conflicts() {
+	n := network.New()
+	x := n.AddVar("making")
+	_ = n.Add(network.Constraint{ID: "pigment", Tier: network.Hard, Alts: []network.Alt{{From: network.Zero, To: x, Lo: 100, Hi: network.Inf}}})
+	_ = n.Add(network.Constraint{ID: "style", Tier: network.Soft, Alts: []network.Alt{{From: network.Zero, To: x, Lo: -network.Inf, Hi: 50}}})
+	for _, tier := range []network.Tier{network.Hard, network.Soft} {
+		r, _ := n.Solve(context.Background(), tier, network.Options{})
+		fmt.Println(tier, r.Consistent, r.Conflicts, r.ConflictsComplete, r.Correction)
+	}
+	// Output:
+	// hard true [] false []
+	// soft false [[pigment style]] true [style]
+}
+
+// One-of dates on one variable merge into an interval set.
+func ExampleResult_Domain() {
+	n := network.New()
+	x := n.AddVar("letter")
+	_ = n.Add(network.Constraint{ID: "one-of", Alts: []network.Alt{
+		{From: network.Zero, To: x, Lo: 10, Hi: 19},
+		{From: network.Zero, To: x, Lo: 40, Hi: 49},
+		{From: network.Zero, To: x, Lo: 70, Hi: 79},
+	}})
+	_ = n.Add(network.Constraint{ID: "after", Alts: []network.Alt{{From: network.Zero, To: x, Lo: 15, Hi: network.Inf}}})
+	r, _ := n.Solve(context.Background(), network.Soft, network.Options{})
+	fmt.Println(r.Domain(x), r.Earliest(x).Because)
+	// Output:
+	// [{15 19} {40 49} {70 79}] [after]
+}
