@@ -235,6 +235,12 @@ func TestHasLocator(t *testing.T) {
 		{"Encyclopaedia, 11th ed., 1911, s.v. madder", true},
 		{"Author, Title, ch. 5", true},
 		{"Author, Title, § 4", true},
+		{"Wikipedia contributors, \"Lead-tin yellow\", sections Nomenclature and History", true},
+		{"Author, \"A paper\", Heritage Science 6, 2018, abstract", true},
+		{"Getty AAT, \"red lead (pigment)\", scope note", true},
+		{"Rosetti, The Plictho, recipe 94", true},
+		{"Wikipedia-Autoren, \"Paul Böttiger\", whole article", true},
+		{"Baty, P., Orr's Zinc White, a blog, 7 April 2012", false},
 		{"Author, Title, vol. 1, Publisher, 1986", false},
 		{"Journal of the American Institute for Conservation 44 (1), 2005", false},
 	} {

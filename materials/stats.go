@@ -51,10 +51,12 @@ func share(n, of int) float64 {
 
 // locator finds a page, section, chapter, column or entry in a citation:
 // "pp. 120-125", "p. 47", "section 3.2", "§ 4", "ch. 5", "s.v. madder".
-var locator = regexp.MustCompile(`(?i)(\bpp?\.\s*[0-9ivxlcdm]|\bpages?\s+[0-9ivxlcdm]|\bsection\s+\S|\bsect\.\s*\S|§\s*\S|\bchapter\s+\S|\bch\.\s*[0-9ivxlcdm]|\bs\.\s?v\.|\bcols?\.\s*[0-9]|\bentry\s+\S)`)
+var locator = regexp.MustCompile(`(?i)(\bpp?\.\s*[0-9ivxlcdm]|\bpages?\s+[0-9ivxlcdm]|\bsections?\s+\S|\bsect\.\s*\S|§\s*\S|\bchapters?\s+\S|\bch\.\s*[0-9ivxlcdm]|\bs\.\s?v\.|\bcols?\.\s*[0-9]|\bentry\s+\S|\bentries\s+\S|\babstract\b|\bscope note\b|\bpassage on\b|\bopening paragraphs?\b|\brecipe\s+\S|\bbook\s+[0-9ivxlcdm]+\b|\barticle\s+["'A-Z]|\bnote on\b|\bpages?\s+\S|\bwhole article\b|\bopening extract\b|\bparagraphs?\s+on\b|\bcaptions\b|\btext of the episode\b)`)
 
-// HasLocator reports whether a citation names a page, section, chapter,
-// column or entry.
+// HasLocator reports whether a citation names where in the source the
+// claim stands: a page, section, chapter, column or entry, or for a short
+// text its abstract, scope note, a named passage, paragraph, recipe or
+// note.
 func HasLocator(cite string) bool { return locator.MatchString(cite) }
 
 // Stats counts d's materials and milestones.

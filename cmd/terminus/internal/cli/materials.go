@@ -632,7 +632,7 @@ func statsText(w io.Writer, ds *materials.Dataset, st materials.Stats) error {
 		fromMemory = float64(st.FromMemory) / float64(st.Milestones)
 	}
 	fmt.Fprintf(tw, "  from memory\t%d (%s)\n", st.FromMemory, percent(fromMemory))
-	fmt.Fprintf(tw, "  documented with page or section\t%d (%s of documented)\n", st.DocumentedLocated, percent(st.LocatedShare()))
+	fmt.Fprintf(tw, "  documented with page or section\t%d (%s of documented, %s of all milestones)\n", st.DocumentedLocated, percent(st.LocatedShare()), percent(float64(st.DocumentedLocated)/float64(max(st.Milestones, 1))))
 	fmt.Fprintf(tw, "arrived\t%d in %d places\n", st.ByKind[materials.KindArrived], len(st.ArrivedByPlace))
 	fmt.Fprintf(tw, "  by region\t%s\n", counts(st.ArrivedByRegion, region))
 	fmt.Fprintf(tw, "  by place\t%s\n", counts(st.ArrivedByPlace, plain))
