@@ -76,6 +76,9 @@ func (c *CSVWriter) Write(o *Outcome) error {
 	return err
 }
 
+// Flush hands on the rows written so far.
+func (c *CSVWriter) Flush() error { return c.w.Flush() }
+
 // Close writes the header if no record came, and flushes.
 func (c *CSVWriter) Close(Counts) error {
 	if !c.header {

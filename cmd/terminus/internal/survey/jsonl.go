@@ -88,5 +88,8 @@ func (j *JSONLWriter) Write(o *Outcome) error {
 	return err
 }
 
+// Flush hands on the records written so far.
+func (j *JSONLWriter) Flush() error { return j.w.Flush() }
+
 // Close flushes the output.
 func (j *JSONLWriter) Close(Counts) error { return j.w.Flush() }

@@ -39,7 +39,10 @@ type Outcome struct {
 // A Writer turns outcomes into output. Render is called from many workers
 // at once, each with its own outcome, and does the costly part (encoding);
 // Write is called once per record, in input order, from one goroutine;
-// Close once at the end with the totals.
+// Close once at the end with the totals. A writer that streams may also
+// have a Flush() error method, which Run calls when the survey stops
+// early (canceled, or an input failed), so that the records written so far
+// reach the output.
 type Writer interface {
 	Render(o *Outcome) error
 	Write(o *Outcome) error
@@ -230,6 +233,13 @@ func Run(ctx context.Context, inputs []*Input, w Writer, opt Options) (Counts, e
 		}
 	}
 	stopProgress()
+	if writeErr != nil || renderErr != nil || readErr != nil || ctx.Err() != nil {
+		// Stopped early: the records written so far are whole; let a
+		// streaming writer hand them on.
+		if f, ok := w.(interface{ Flush() error }); ok && writeErr == nil {
+			_ = f.Flush()
+		}
+	}
 	switch {
 	case writeErr != nil:
 		return counts, writeErr

@@ -276,7 +276,41 @@ func TestRunCanceled(t *testing.T) {
 	if c.Records >= 500 {
 		t.Errorf("all %d records were written after the cancel", c.Records)
 	}
+	// A streaming writer's records so far reach the output, each whole.
+	in = openText(t, "c.jsonl", string(benchCollection(500, false)))
+	ctx, cancel = context.WithCancel(context.Background())
+	var out bytes.Buffer
+	jw := NewJSONLWriter(&out, nil)
+	c, err = Run(ctx, []*Input{in}, &cancelAt{Writer: jw, line: 30, cancel: cancel}, Options{Dataset: builtin(t), Workers: 2})
+	if !errors.Is(err, context.Canceled) {
+		t.Fatalf("error %v, want context.Canceled", err)
+	}
+	lines := strings.Split(strings.TrimSuffix(out.String(), "\n"), "\n")
+	if len(lines) != c.Records || c.Records < 29 {
+		t.Fatalf("%d lines on the output for %d records written", len(lines), c.Records)
+	}
+	for i, l := range lines {
+		if !json.Valid([]byte(l)) {
+			t.Fatalf("output line %d is not whole JSON", i+1)
+		}
+	}
 }
+
+// cancelAt cancels the survey when it writes a given line.
+type cancelAt struct {
+	Writer
+	line   int
+	cancel func()
+}
+
+func (c *cancelAt) Write(o *Outcome) error {
+	if o.Line == c.line {
+		c.cancel()
+	}
+	return c.Writer.Write(o)
+}
+
+func (c *cancelAt) Flush() error { return c.Writer.(*JSONLWriter).Flush() }
 
 type failWriter struct{ probe }
 
