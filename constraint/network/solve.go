@@ -434,6 +434,7 @@ type search struct {
 	laChanges     [][][]change // per choice left open, per alternative
 	laSure        []bool
 	failVar       int32 // a variable the last dominance test found uncovered
+	inq           []bool
 	saveLo        []int64
 	saveUp        []int64
 }
@@ -665,24 +666,40 @@ func (sr *search) repropagate(seeds []int32) (ok, sure bool) {
 	lo, up := g.lo, g.up
 	k := len(sr.p.vars)
 	floor := -int64(k+1) * Limit
-	q := append(sr.queue[:0], seeds...)
-	budget := 4*k + 2*len(seeds) + 64
-	for qi := 0; qi < len(q); qi++ {
-		if qi > budget {
-			sr.queue = q
-			return true, false
+	if cap(sr.inq) < k {
+		sr.inq = make([]bool, k)
+	}
+	inq := sr.inq[:k]
+	q := sr.queue[:0]
+	push := func(v int32) {
+		if !inq[v] {
+			inq[v] = true
+			q = append(q, v)
 		}
+	}
+	for _, v := range seeds {
+		push(v)
+	}
+	budget := 4*k + 2*len(seeds) + 64
+	ok, sure = true, true
+	qi := 0
+	for ; qi < len(q); qi++ {
 		y := q[qi]
+		inq[y] = false
+		if qi > budget {
+			sure = false
+			break
+		}
 		if lo[y] > up[y] || up[y] < floor || lo[y] > -floor {
-			sr.queue = q
-			return false, true
+			ok = false
+			break
 		}
 		if up[y] < Inf {
 			for j := g.start[y]; j < g.start[y+1]; j++ {
 				e := &g.arcs[j]
 				if x := up[y] + e.w; x < up[e.to] {
 					up[e.to] = x
-					q = append(q, e.to)
+					push(e.to)
 				}
 			}
 		}
@@ -691,13 +708,16 @@ func (sr *search) repropagate(seeds []int32) (ok, sure bool) {
 				e := &g.arcs[g.rarcs[j]]
 				if x := lo[y] - e.w; x > lo[e.from] {
 					lo[e.from] = x
-					q = append(q, e.from)
+					push(e.from)
 				}
 			}
 		}
 	}
+	for _, v := range q[min(qi, len(q)):] {
+		inq[v] = false
+	}
 	sr.queue = q
-	return true, true
+	return ok, sure
 }
 
 // adds reports whether the current bounds would add to the domains or
@@ -917,12 +937,19 @@ func (sr *search) propagate(a calt) (ok, sure bool, changes []change) {
 	sr.touched = sr.touched[:0]
 	sr.queue = sr.queue[:0]
 	sr.stamp++
+	if cap(sr.inq) < k {
+		sr.inq = make([]bool, k)
+	}
+	inq := sr.inq[:k]
 	mark := func(v int32) {
 		if sr.cstamp[v] != sr.stamp {
 			sr.cstamp[v] = sr.stamp
 			sr.touched = append(sr.touched, change{v, lo[v], up[v]})
 		}
-		sr.queue = append(sr.queue, v)
+		if !inq[v] {
+			inq[v] = true
+			sr.queue = append(sr.queue, v)
+		}
 	}
 	setUp := func(v int32, x int64) {
 		if x < up[v] {
@@ -958,8 +985,10 @@ func (sr *search) propagate(a calt) (ok, sure bool, changes []change) {
 	alt()
 	ok, sure = true, true
 	budget := 4*k + 64
-	for qi := 0; qi < len(sr.queue); qi++ {
+	qi := 0
+	for ; qi < len(sr.queue); qi++ {
 		y := sr.queue[qi]
+		inq[y] = false
 		if lo[y] > up[y] || up[y] < floor || lo[y] > -floor {
 			ok = false
 			break
@@ -983,6 +1012,9 @@ func (sr *search) propagate(a calt) (ok, sure bool, changes []change) {
 		if y == a.from || y == a.to {
 			alt()
 		}
+	}
+	for _, v := range sr.queue[min(qi, len(sr.queue)):] {
+		inq[v] = false
 	}
 	// Report and undo.
 	for _, c := range sr.touched {
