@@ -646,9 +646,13 @@ func (sr *search) dive(fixed []calt, open [][]calt) bool {
 		}
 		var sure bool
 		ok, sure = sr.repropagate(seeds)
-		if ok && (!sure || sr.adds()) {
+		switch {
+		case !ok:
+		case !sure || sr.improves():
 			g.bounds()
 			sr.leaf()
+		default:
+			sr.unite()
 		}
 		sr.found = sr.found || ok
 	}
@@ -720,16 +724,26 @@ func (sr *search) repropagate(seeds []int32) (ok, sure bool) {
 	return ok, sure
 }
 
-// adds reports whether the current bounds would add to the domains or
-// improve a bound.
-func (sr *search) adds() bool {
+// improves reports whether the current bounds would move an earliest or
+// a latest; only then are shortest-path trees needed for a leaf.
+func (sr *search) improves() bool {
 	g := &sr.g
 	for i := 1; i < len(sr.p.vars); i++ {
-		if g.lo[i] < sr.early[i].Value || g.up[i] > sr.late[i].Value || !inside(sr.dom[i], g.lo[i], g.up[i]) {
+		if g.lo[i] < sr.early[i].Value || g.up[i] > sr.late[i].Value {
 			return true
 		}
 	}
 	return false
+}
+
+// unite adds the current windows to the domains.
+func (sr *search) unite() {
+	g := &sr.g
+	for v := 1; v < len(sr.p.vars); v++ {
+		if !inside(sr.dom[v], g.lo[v], g.up[v]) {
+			sr.dom[v] = union(sr.dom[v], Interval{g.lo[v], g.up[v]})
+		}
+	}
 }
 
 // solveNode computes the potential and the bounds of the graph built; on
@@ -1084,9 +1098,7 @@ func (sr *search) leaf() {
 			*b = Bound{Value: val, Because: why[:len(why):len(why)]}
 		}
 	}
-	for v := 1; v < k; v++ {
-		sr.dom[v] = union(sr.dom[v], Interval{g.lo[v], g.up[v]})
-	}
+	sr.unite()
 }
 
 // path returns the constraint ids on the tree path from the reference
