@@ -72,7 +72,9 @@
 // contradicts itself), the deciding evidence, conflicts, error and hint.
 // [ReportWriter] (Markdown or HTML): the counts by status, then the
 // records by status, the ones that need a look first, each with its
-// windows and deciding evidence, and the cautions.
+// windows and deciding evidence, and the cautions; they leave the free
+// columns out (the csv summary keeps them). Output is deterministic: the
+// same input gives the same bytes, however many workers.
 //
 // # Limits
 //
