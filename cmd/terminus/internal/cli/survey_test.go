@@ -232,18 +232,18 @@ func synthetic(n int) string {
 func TestSurveyOrderIsDeterministic(t *testing.T) {
 	const n = 400
 	in := synthetic(n)
-	var first string
+	first := map[string]string{}
 	for _, jobs := range []string{"1", "2", "8", "8"} {
-		for _, format := range []string{"jsonl", "csv"} {
+		for _, format := range []string{"jsonl", "csv", "md"} {
 			out, errs, code := executeIn(t, in, "survey", "--materials", fixture, "--jobs", jobs, "--format", format, "-")
 			if code != 1 {
 				t.Fatalf("--jobs %s: exit %d: %s", jobs, code, errs)
 			}
-			if format == "csv" {
-				if first == "" {
-					first = out
-				} else if out != first {
-					t.Fatalf("--jobs %s: the csv output differs from --jobs 1:\n%s", jobs, lineDiff(first, out))
+			if format != "jsonl" {
+				if first[format] == "" {
+					first[format] = out
+				} else if out != first[format] {
+					t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, lineDiff(first[format], out))
 				}
 				continue
 			}
