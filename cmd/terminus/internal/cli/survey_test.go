@@ -239,12 +239,12 @@ func TestSurveyOrderIsDeterministic(t *testing.T) {
 			if code != 1 {
 				t.Fatalf("--jobs %s: exit %d: %s", jobs, code, errs)
 			}
+			if first[format] == "" {
+				first[format] = out
+			} else if out != first[format] {
+				t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, lineDiff(first[format], out))
+			}
 			if format != "jsonl" {
-				if first[format] == "" {
-					first[format] = out
-				} else if out != first[format] {
-					t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, lineDiff(first[format], out))
-				}
 				continue
 			}
 			recs := parseSurveyJSONL(t, out)
