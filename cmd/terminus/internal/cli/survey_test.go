@@ -413,3 +413,42 @@ func TestIsTerminal(t *testing.T) {
 		}
 	}
 }
+
+func TestSurveyResultIsCheckJSON(t *testing.T) {
+	// The same case through check --format json and through survey (with
+	// the sensitivity re-solves check makes) gives the same document, but
+	// for the file it names.
+	caseJSON := `{"title": "Blue box", "place": "NL", "findings": [{"id": "f-blue", "material": "fixture blue"}, {"material": "fixture yellow", "confidence": "probable"}], "claims": [{"date": "1700/1720"}]}`
+	c := writeCase(t, "case.yaml", caseJSON+"\n")
+	want, errs, code := execute(t, "check", "--materials", fixture, "--format", "json", c)
+	if code == 2 {
+		t.Fatalf("check: %s", errs)
+	}
+	out, errs, code := executeIn(t, `{"id": "box-1", `+caseJSON[1:]+"\n", "survey", "--materials", fixture, "--sensitivity", "-")
+	if code == 2 {
+		t.Fatalf("survey: %s", errs)
+	}
+	var line struct {
+		Result map[string]any `json:"result"`
+	}
+	var doc map[string]any
+	if err := json.Unmarshal([]byte(out), &line); err != nil {
+		t.Fatal(err)
+	}
+	if err := json.Unmarshal([]byte(want), &doc); err != nil {
+		t.Fatal(err)
+	}
+	if line.Result["file"] != "stdin" || doc["file"] != c {
+		t.Errorf("files %v and %v", line.Result["file"], doc["file"])
+	}
+	delete(line.Result, "file")
+	delete(doc, "file")
+	a, _ := json.Marshal(line.Result)
+	b, _ := json.Marshal(doc)
+	if string(a) != string(b) {
+		t.Errorf("the survey's result differs from check's:\n%s\n%s", a, b)
+	}
+	if !strings.Contains(string(b), `"disagreements":[{`) {
+		t.Errorf("the case should show the fixture's disagreement on fixture blue: %s", b)
+	}
+}
