@@ -23,55 +23,89 @@
 // set of integer solutions on each variable, a sorted union of disjoint
 // intervals; [Result.Earliest] and [Result.Latest] are its ends, each with
 // the ids of the constraints that force it, in order from the reference
-// point to the variable (the shortest path of the distance graph that
-// yields the bound; a disjunction is named when its chosen alternative lies
-// on that path). Among equally tight paths the one with fewer steps wins,
-// then the one whose last step has the smaller constraint id, so results
-// are deterministic.
+// point to the variable: the shortest path of the distance graph that
+// yields the bound (for a chain Zero → a → b: the bound on a, then the
+// step from a to b). A disjunction is named when its chosen alternative
+// lies on that path, and a one-of set by the constraint that sets the end
+// of its run. Among equally tight paths of one scenario the one with fewer
+// steps wins, then the one whose last step has the smaller constraint id;
+// between scenarios that give the same bound the first found stays unless
+// a later one is shorter. Results are deterministic. Because slices may
+// share storage with each other; treat them as read-only.
 //
-// For an inconsistent network, [Result.Conflicts] lists minimal conflict
-// sets (inconsistent, and every proper subset consistent), found with
-// QuickXplain (Junker, "QuickXplain: preferred explanations and relaxations
-// for over-constrained problems", AAAI 2004) and completed by hitting-set
-// duality (Reiter, "A theory of diagnosis from first principles",
-// Artificial Intelligence 32, 1987): the list is known to be complete when
-// the complement of every minimal hitting set of the conflicts found is
-// consistent. [Result.Correction] is a cheapest set of constraints whose
-// removal restores consistency, a minimum-cost hitting set of all
-// conflicts, with costs soft 1, firm 1,000 and hard 1,000,000.
+// For an inconsistent network the domains are empty, and
+// [Result.Conflicts] lists minimal conflict sets (inconsistent, and every
+// proper subset consistent), found with QuickXplain (U. Junker,
+// "QuickXplain: preferred explanations and relaxations for
+// over-constrained problems", AAAI 2004), started on the constraints of a
+// negative cycle where there is one, and completed by hitting-set duality
+// (R. Reiter, "A theory of diagnosis from first principles", Artificial
+// Intelligence 32, 1987): the list is complete when the complement of
+// every minimal hitting set of the conflicts found is consistent, which
+// [Result.ConflictsComplete] reports. [Result.Correction] is a cheapest set
+// of constraints whose removal restores consistency: a minimum-cost
+// hitting set of all conflicts (costs soft 1, firm 1,000, hard 1,000,000),
+// found by an implicit hitting-set loop that adds conflicts until the
+// cheapest hitting set leaves a consistent network, so it is exact even
+// when the reported list is capped.
 //
 // # Method
 //
 // Constraints whose alternatives all bound the same single variable are
 // merged, without branching, into an interval set on that variable (the
-// intersection of the unions). Variables linked by binary constraints form
+// intersection of the unions); a variable no binary constraint reaches has
+// that set as its domain. Variables linked by binary constraints form
 // components that are solved apart. A component without a choice left is
 // a simple temporal network: a feasible potential is computed with the
-// Goldberg–Radzik label-correcting method (with parent-graph cycle checks
-// to find negative cycles), then the bounds from and to the reference point
-// with Dijkstra's method on reduced costs, keeping predecessors for the
-// explanations. With choices left (binary disjunctions, or a gappy interval
-// set on a linked variable) the solver searches depth first: at every node
-// it solves the network of the choices made so far, drops alternatives that
-// the current bounds exclude, fixes a choice with one alternative left,
-// drops a choice that the current bounds already satisfy, and prunes a
-// node whose bounds lie inside the union already found (deeper choices only
-// shrink them). The domain is the union of the windows of all consistent
-// leaves.
+// Goldberg–Radzik label-correcting method (A. V. Goldberg and T. Radzik,
+// Applied Mathematics Letters 6, 1993), with parent-graph cycle checks to
+// find negative cycles, then the bounds from and to the reference point by
+// Dijkstra's method on reduced costs, keeping the shortest-path trees for
+// the explanations.
+//
+// The choices are the binary (or mixed) disjunctions and the gappy interval
+// sets of linked variables. The search is depth first. At every node it
+// has the bounds of the choices made so far (solved, or carried from the
+// parent by label correcting), drops the alternatives the bounds exclude,
+// drops a choice the bounds already satisfy, and looks one alternative
+// ahead: it propagates the bounds of every alternative of every open
+// choice, drops those that fail and fixes a choice left with one. A node is
+// pruned when every variable's values there, its window cut by the union
+// over each open choice's alternatives of the windows they lead to, lie
+// inside the union already found, since deeper choices only narrow them.
+// Before branching the node dives: it fixes every open choice to its first
+// alternative and solves that scenario at once, which often covers what
+// was missing and lets the node be pruned. Otherwise it branches on a
+// choice that moves a window still uncovered. The domains are the union of
+// the windows of the consistent leaves.
 //
 // # Limits
 //
-// Without choices a solve takes O(m log n) time after the potential, whose
-// cost is O(n m) in the worst case and near linear on ordered series and
-// other shallow graphs; an ordered series of 10,000 events with bounds and
-// explanations solves in about 10 ms on a current machine (see the
-// benchmarks). With k choices of at most a alternatives the search is
-// O(a^k) solves in the worst case; consistency of disjunctive networks is
-// NP-complete, so [Options.MaxNodes] caps the search and Solve fails with
-// [ErrLimit] rather than return an inexact answer. Conflict enumeration is
-// capped by [Options.MaxConflicts]. Finite bounds must lie within
-// ±[Limit] and a network may hold at most [MaxVars] variables, so that no
-// path length overflows.
+// Consistency of disjunctive networks is NP-complete: with k choices of at
+// most a alternatives the search may take O(a^k) nodes, each costing about
+// one network solve. [Options.MaxNodes] caps every search, and Solve then
+// fails with [ErrLimit] rather than return an inexact answer. Conflict
+// enumeration costs a consistency check per minimal hitting set of the
+// conflicts found and is capped by [Options.MaxConflicts]. Finite bounds
+// must lie within ±[Limit] and a network may hold at most [MaxVars]
+// variables, so that no path length overflows int64.
+//
+// Measured (go test -bench Solve -benchmem, one AMD EPYC core, solving at
+// the soft tier and reading every bound with its explanation):
+//
+//	events               10       100      1,000     10,000
+//	ordered series     15 µs    115 µs    1.2 ms     15 ms    ~ n log n
+//	dense (8n pairs)   27 µs    467 µs    6.1 ms     72 ms    ~ n log n
+//	disjunctive        24 µs    2.4 ms    350 ms     ~25 s    ~ n^2
+//
+// The ordered series has a window on every item, the items in order, and
+// every fifth gap bounded; the disjunctive series adds a one-of date to
+// every tenth item and a choice of gap to every tenth step, so its choices
+// grow with n: search nodes grow about linearly (886 nodes at 1,000 items)
+// and each costs O(n). The z3 SMT solver, on the same instances with one
+// process and push/pop, takes about 24 ms for the ordered series of 10 and
+// 2.1 s for 100 (two optimisation queries per variable): 1,500 and 18,000
+// times slower.
 package network
 
 import (

@@ -363,7 +363,7 @@ func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
 	for _, pr := range p.problems {
 		sr := &search{solver: s, p: pr, record: true}
 		sr.init()
-		if err := sr.node(nil, pr.choices, nil, nil); err != nil {
+		if err := sr.node(nil, pr.choices, false); err != nil {
 			return false, nil, err
 		}
 		if !sr.found {
@@ -393,7 +393,7 @@ func (s *solver) consistent(active []int32) (bool, []int32, error) {
 	}
 	for _, pr := range p.problems {
 		sr := &search{solver: s, p: pr}
-		if err := sr.node(nil, pr.choices, nil, nil); err != nil {
+		if err := sr.node(nil, pr.choices, false); err != nil {
 			return false, nil, err
 		}
 		if !sr.found {
@@ -435,6 +435,8 @@ type search struct {
 	laSure        []bool
 	failVar       int32 // a variable the last dominance test found uncovered
 	inq           []bool
+	init0         []int64
+	units         []unit
 	saveLo        []int64
 	saveUp        []int64
 }
@@ -452,10 +454,10 @@ func (sr *search) init() {
 
 // node solves the network of the base arcs and the fixed alternatives,
 // propagates the open choices and branches on the narrowest one. When the
-// parent's lookahead already knows this node's bounds (lo, up not nil),
-// the node skips the full solve; a leaf always gets one, for its
+// parent's lookahead already knows this node's bounds (given: they are in
+// the graph's bound arrays), the node skips the full solve; a leaf always gets one, for its
 // explanations and to rule out a negative cycle propagation missed.
-func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
+func (sr *search) node(fixed []calt, open [][]calt, given bool) error {
 	sr.nodes++
 	if sr.nodes > sr.opt.maxNodes() {
 		return fmt.Errorf("solve: %d nodes: %w", sr.nodes, ErrLimit)
@@ -476,10 +478,8 @@ func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
 		}
 		g.build(len(sr.p.vars), sr.arcs)
 		switch {
-		case lo != nil:
-			g.lo = append(g.lo[:0], lo...)
-			g.up = append(g.up[:0], up...)
-			lo, up = nil, nil
+		case given:
+			given = false
 		case seeds != nil && !exact:
 			// The bounds before the last fixes are valid labels: carry
 			// on from them.
@@ -598,17 +598,17 @@ func (sr *search) node(fixed []calt, open [][]calt, lo, up []int64) error {
 		}
 	}
 	for ai, a := range open[best] {
-		var clo, cup []int64
 		if pre != nil {
 			if sr.record && sr.childDominated(pre, ai) {
 				continue
 			}
-			clo, cup = slices.Clone(pre.lo), slices.Clone(pre.up)
+			g.lo = append(g.lo[:0], pre.lo...)
+			g.up = append(g.up[:0], pre.up...)
 			for _, c := range pre.changes[ai] {
-				clo[c.v], cup[c.v] = c.lo, c.hi
+				g.lo[c.v], g.up[c.v] = c.lo, c.hi
 			}
 		}
-		if err := sr.node(append(fixed[:len(fixed):len(fixed)], a), rest, clo, cup); err != nil {
+		if err := sr.node(append(fixed[:len(fixed):len(fixed)], a), rest, pre != nil); err != nil {
 			return err
 		}
 		if !sr.record && sr.found {
@@ -636,25 +636,38 @@ func (sr *search) dive(fixed []calt, open [][]calt) bool {
 	}
 	sr.nodes++
 	g.build(k, sr.arcs)
-	ok, _ := g.potential()
+	// Bounds by label correcting from the node's; then a potential started
+	// from them (upper bounds meet every arc between bounded nodes), to
+	// rule out a negative cycle they cannot see; the shortest-path trees
+	// only when the leaf moves an earliest or a latest.
+	var seeds []int32
+	for _, alts := range open {
+		seeds = append(seeds, alts[0].from, alts[0].to)
+	}
+	ok, sure := sr.repropagate(seeds)
 	if ok {
-		// Bounds by label correcting from the node's; the shortest-path
-		// trees only when the leaf adds something.
-		var seeds []int32
-		for _, alts := range open {
-			seeds = append(seeds, alts[0].from, alts[0].to)
+		if sure {
+			sr.init0 = sr.init0[:0]
+			for _, x := range g.up[:k] {
+				sr.init0 = append(sr.init0, min(x, 2*int64(k+1)*Limit))
+			}
+			ok, _ = g.potentialFrom(sr.init0)
+		} else {
+			ok, _ = g.potential()
 		}
-		var sure bool
-		ok, sure = sr.repropagate(seeds)
+	}
+	if ok {
 		switch {
-		case !ok:
-		case !sure || sr.improves():
+		case !sure:
+			g.bounds()
+			sr.leaf()
+		case sr.improves():
 			g.bounds()
 			sr.leaf()
 		default:
 			sr.unite()
 		}
-		sr.found = sr.found || ok
+		sr.found = true
 	}
 	g.lo = append(g.lo[:0], sr.saveLo...)
 	g.up = append(g.up[:0], sr.saveUp...)
@@ -854,6 +867,12 @@ func touches(changes [][]change, v int32) bool {
 	return false
 }
 
+// unit is a variable and a set of its values.
+type unit struct {
+	v int32
+	s Set
+}
+
 // change is a variable's window after propagating one alternative.
 type change struct {
 	v      int32
@@ -918,19 +937,28 @@ func (sr *search) lookahead(open [][]calt, fixed []calt) (next [][]calt, fx []ca
 				sr.count[c.v]++
 			}
 		}
-		u := map[int32]Set{}
+		sr.units = sr.units[:0]
 		for _, ch := range changes {
 			for _, c := range ch {
-				if sr.count[c.v] == int32(len(kept)) {
-					u[c.v] = union(u[c.v], Interval{c.lo, c.hi})
+				if sr.count[c.v] != int32(len(kept)) {
+					continue
 				}
+				j := 0
+				for j < len(sr.units) && sr.units[j].v != c.v {
+					j++
+				}
+				if j == len(sr.units) {
+					sr.units = append(sr.units, unit{v: c.v})
+				}
+				sr.units[j].s = union(sr.units[j].s, Interval{c.lo, c.hi})
 			}
 		}
-		for v, set := range u {
-			if old, ok := sr.refined[v]; ok {
+		for _, u := range sr.units {
+			set := u.s
+			if old, ok := sr.refined[u.v]; ok {
 				set = intersectSets(old, set)
 			}
-			sr.refined[v] = set
+			sr.refined[u.v] = set
 		}
 	}
 	if changed {
@@ -1031,6 +1059,9 @@ func (sr *search) propagate(a calt) (ok, sure bool, changes []change) {
 		inq[v] = false
 	}
 	// Report and undo.
+	if ok && sure {
+		changes = make([]change, 0, len(sr.touched))
+	}
 	for _, c := range sr.touched {
 		if ok && sure {
 			changes = append(changes, change{c.v, lo[c.v], up[c.v]})

@@ -98,7 +98,12 @@ func resize64(s []int64, n int) []int64 {
 
 // potential computes a feasible potential (a solution) in g.pi. On a
 // negative cycle it returns false and the arcs of the cycle.
-func (g *stn) potential() (bool, []int32) {
+func (g *stn) potential() (bool, []int32) { return g.potentialFrom(nil) }
+
+// potentialFrom starts the labels from init (nil: all 0) instead; any
+// start works (it is the weight of a virtual source's arc to each node),
+// and a start that already meets most arcs leaves little to do.
+func (g *stn) potentialFrom(init []int64) (bool, []int32) {
 	n := g.n
 	g.pi = resize64(g.pi, n)
 	g.pred = resize32(g.pred, n)
@@ -108,6 +113,9 @@ func (g *stn) potential() (bool, []int32) {
 	}
 	g.inB = g.inB[:n]
 	clear(g.pi)
+	if init != nil {
+		copy(g.pi, init)
+	}
 	clear(g.seen)
 	for i := range g.pred {
 		g.pred[i] = -1
