@@ -103,15 +103,6 @@ func mustAdd(n *Network, c Constraint) {
 	}
 }
 
-var instances = []struct {
-	name string
-	make func(int) *Network
-}{
-	{"Chain", chainInstance},
-	{"Dense", denseInstance},
-	{"Disjunctive", disjunctiveInstance},
-}
-
 // solveAll solves at the soft tier and reads every window with its
 // explanation, as the reasoner does.
 func solveAll(tb testing.TB, n *Network) int {

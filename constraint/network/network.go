@@ -29,8 +29,8 @@
 // lies on that path, and a one-of set by the constraint that sets the end
 // of its run. Among equally tight paths of one scenario the one with fewer
 // steps wins, then the one whose last step has the smaller constraint id;
-// between scenarios that give the same bound the first found stays unless
-// a later one is shorter. Results are deterministic. Because slices may
+// between scenarios that give the same bound the first found is kept (a
+// later, shorter one may replace it). Results are deterministic. Because slices may
 // share storage with each other; treat them as read-only.
 //
 // For an inconsistent network the domains are empty, and

@@ -657,13 +657,14 @@ func (sr *search) dive(fixed []calt, open [][]calt) bool {
 		}
 	}
 	if ok {
+		lower, upper := sr.improves()
 		switch {
 		case !sure:
 			g.bounds()
 			sr.leaf()
-		case sr.improves():
-			g.bounds()
-			sr.leaf()
+		case lower || upper:
+			g.side(lower, upper)
+			sr.leafSides(lower, upper)
 		default:
 			sr.unite()
 		}
@@ -737,16 +738,15 @@ func (sr *search) repropagate(seeds []int32) (ok, sure bool) {
 	return ok, sure
 }
 
-// improves reports whether the current bounds would move an earliest or
-// a latest; only then are shortest-path trees needed for a leaf.
-func (sr *search) improves() bool {
+// improves reports whether the current bounds would move an earliest (a
+// latest); only then is the lower (upper) shortest-path tree needed.
+func (sr *search) improves() (lower, upper bool) {
 	g := &sr.g
 	for i := 1; i < len(sr.p.vars); i++ {
-		if g.lo[i] < sr.early[i].Value || g.up[i] > sr.late[i].Value {
-			return true
-		}
+		lower = lower || g.lo[i] < sr.early[i].Value
+		upper = upper || g.up[i] > sr.late[i].Value
 	}
-	return false
+	return lower, upper
 }
 
 // unite adds the current windows to the domains.
@@ -1081,10 +1081,17 @@ func inside(s Set, lo, hi int64) bool {
 }
 
 // leaf adds the windows of a solved scenario to the domains.
-func (sr *search) leaf() {
+func (sr *search) leaf() { sr.leafSides(true, true) }
+
+// leafSides is leaf for the lower bounds, the upper ones, or both, whose
+// shortest-path trees are up to date.
+func (sr *search) leafSides(lower, upper bool) {
 	g := &sr.g
 	k := len(sr.p.vars)
 	for pass := 0; pass < 2; pass++ {
+		if (pass == 0 && !lower) || (pass == 1 && !upper) {
+			continue
+		}
 		sr.memo = sr.memo[:0]
 		for range k {
 			sr.memo = append(sr.memo, nil)

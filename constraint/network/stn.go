@@ -255,17 +255,24 @@ func (g *stn) parentCycle(from []int32) []int32 {
 
 // bounds computes, from a feasible potential, the upper bounds d(0→v)
 // and the lower bounds −d(v→0) with their shortest-path trees.
-func (g *stn) bounds() {
+func (g *stn) bounds() { g.side(true, true) }
+
+// side computes the lower bounds, the upper ones, or both.
+func (g *stn) side(lower, upper bool) {
 	n := g.n
 	g.up = resize64(g.up, n)
 	g.lo = resize64(g.lo, n)
 	g.upArc = resize32(g.upArc, n)
 	g.loArc = resize32(g.loArc, n)
 	g.hops = resize32(g.hops, n)
-	g.dijkstra(false)
-	g.upHops = append(g.upHops[:0], g.hops...)
-	g.dijkstra(true)
-	g.loHops = append(g.loHops[:0], g.hops...)
+	if upper {
+		g.dijkstra(false)
+		g.upHops = append(g.upHops[:0], g.hops...)
+	}
+	if lower {
+		g.dijkstra(true)
+		g.loHops = append(g.loHops[:0], g.hops...)
+	}
 }
 
 // dijkstra runs from node 0 over the arcs (reverse: against them) with the
