@@ -90,22 +90,28 @@
 // must lie within ±[Limit] and a network may hold at most [MaxVars]
 // variables, so that no path length overflows int64.
 //
-// Measured (go test -bench Solve -benchmem, one AMD EPYC core, solving at
-// the soft tier and reading every bound with its explanation):
+// Measured with go test -bench . -benchmem on a shared two-core AMD EPYC
+// machine (the spread is the load of other work), solving at the soft tier
+// and reading every bound with its explanation:
 //
-//	events               10       100      1,000     10,000
-//	ordered series     15 µs    115 µs    1.2 ms     15 ms    ~ n log n
-//	dense (8n pairs)   27 µs    467 µs    6.1 ms     72 ms    ~ n log n
-//	disjunctive        24 µs    2.4 ms    350 ms     ~25 s    ~ n^2
+//	events              10         100          1,000         10,000
+//	ordered series   8–18 µs    66–157 µs     1.0–1.9 ms     14–20 ms
+//	dense (8n pairs) 20–41 µs   0.26–0.51 ms  4.5–7.1 ms     64–72 ms
+//	disjunctive     25–42 µs    1.4–2.2 ms    185–220 ms     20–25 s
 //
-// The ordered series has a window on every item, the items in order, and
-// every fifth gap bounded; the disjunctive series adds a one-of date to
-// every tenth item and a choice of gap to every tenth step, so its choices
-// grow with n: search nodes grow about linearly (886 nodes at 1,000 items)
-// and each costs O(n). The z3 SMT solver, on the same instances with one
-// process and push/pop, takes about 24 ms for the ordered series of 10 and
-// 2.1 s for 100 (two optimisation queries per variable): 1,500 and 18,000
-// times slower.
+// The ordered series and the dense network grow as n log n. The ordered
+// series has a window on every item (one in seven open on one side), the
+// items in order, and every fifth gap bounded; the disjunctive series adds
+// a one-of date to every tenth item and a choice of gap to every tenth
+// step, so its choices grow with n: its search nodes grow about linearly
+// (84, 886 and about 8,500 nodes for 100, 1,000 and 10,000 items) and each
+// costs O(n), so it grows as n². The z3 SMT solver on the same instances
+// (one process, push/pop, two optimisation queries per variable, answers
+// checked equal) takes 24–34 ms, 47–61 ms and 30–43 ms for the three
+// shapes at 10 events and 1.4–1.9 s, 11.9–14.0 s and 1.7–2.3 s at 100:
+// 1,300 to 4,200 times slower at 10 events on the simple shapes and 800 to
+// 1,700 times on the disjunctive one, 9,000 to 53,000 times at 100 on the
+// simple shapes and 800 to 1,200 on the disjunctive one.
 package network
 
 import (

@@ -361,7 +361,7 @@ func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
 		r.latest[v] = Bound{Value: set[len(set)-1].hi, Because: s.ids(set[len(set)-1].hiTag)}
 	}
 	for _, pr := range p.problems {
-		sr := &search{solver: s, p: pr, record: true}
+		sr := &search{solver: s, p: pr, record: true, arcs: make([]arc, 0, len(pr.base)+2*len(pr.choices)+4)}
 		sr.init()
 		if err := sr.node(nil, pr.choices, false); err != nil {
 			return false, nil, err
@@ -392,7 +392,7 @@ func (s *solver) consistent(active []int32) (bool, []int32, error) {
 		return false, nil, nil
 	}
 	for _, pr := range p.problems {
-		sr := &search{solver: s, p: pr}
+		sr := &search{solver: s, p: pr, arcs: make([]arc, 0, len(pr.base)+2*len(pr.choices)+4)}
 		if err := sr.node(nil, pr.choices, false); err != nil {
 			return false, nil, err
 		}
