@@ -25,11 +25,24 @@ var builtin = sync.OnceValues(func() (*Dataset, error) {
 	return loadBuiltin()
 })
 
+// loadBuiltin reads the built-in dataset from its snapshot when the
+// snapshot was made from the embedded files, and strictly from the YAML
+// files otherwise (see snapshot.go).
 func loadBuiltin() (*Dataset, error) {
 	sub, err := fs.Sub(dataFS, "data")
 	if err != nil {
 		return nil, fmt.Errorf("materials: embedded data: %w", err)
 	}
+	if d, err := decodeSnapshot(builtinSnapshot, sub); err == nil {
+		d.Version = DataVersion
+		return d, nil
+	}
+	return loadBuiltinYAML(sub)
+}
+
+// loadBuiltinYAML reads the built-in dataset strictly from its YAML files
+// (sub is the embedded data folder).
+func loadBuiltinYAML(sub fs.FS) (*Dataset, error) {
 	d, err := loadFS(sub, builtinPrefix, nil)
 	if err != nil {
 		return nil, fmt.Errorf("built-in materials dataset: %w", err)

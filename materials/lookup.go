@@ -22,11 +22,17 @@ type nameRef struct {
 // buildIndex indexes ms; names, when not nil, already maps every folded id
 // and name to its material (the first to have it).
 func buildIndex(ms []*Material, names map[string]*Material) *index {
-	ix := &index{names: names, ci: map[string][]*Material{}, cas: map[string][]*Material{}}
-	ix.all = make([]nameRef, 0, 8*len(ms))
+	nKeys := 0
+	for _, m := range ms {
+		nKeys += len(m.Names) + 1
+	}
+	// Sized for what goes in: a Colour Index name, its short form and its
+	// number per material at most, and one CAS RN.
+	ix := &index{names: names, ci: make(map[string][]*Material, 3*len(ms)), cas: make(map[string][]*Material, len(ms))}
+	ix.all = make([]nameRef, 0, nKeys)
 	fill := names == nil
 	if fill {
-		ix.names = make(map[string]*Material, 8*len(ms))
+		ix.names = make(map[string]*Material, nKeys)
 	}
 	addMulti := func(m map[string][]*Material, k string, mat *Material) {
 		if k == "" || slices.Contains(m[k], mat) {
