@@ -564,7 +564,8 @@ func (sr *search) node(fixed []calt, open [][]calt, given bool) error {
 	if sr.record && sr.dominated() {
 		return nil
 	}
-	if sr.record && sr.dive(fixed, open) && sr.dominated() {
+	if sr.dive(fixed, open) && (!sr.record || sr.dominated()) {
+		// A consistent dive ends a consistency check at once.
 		return nil
 	}
 	// Branch on a choice that moves the window found uncovered, so that
@@ -645,6 +646,13 @@ func (sr *search) dive(fixed []calt, open [][]calt) bool {
 		seeds = append(seeds, alts[0].from, alts[0].to)
 	}
 	ok, sure := sr.repropagate(seeds)
+	if ok && !sr.record {
+		ok, _ = g.potential()
+		sr.found = sr.found || ok
+		g.lo = append(g.lo[:0], sr.saveLo...)
+		g.up = append(g.up[:0], sr.saveUp...)
+		return ok
+	}
 	if ok {
 		if sure {
 			sr.init0 = sr.init0[:0]
