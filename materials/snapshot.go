@@ -117,12 +117,13 @@ func decodeSnapshot(snap string, data fs.FS) (*Dataset, error) {
 	}
 	if n, ok := r.list(12); ok {
 		d.Materials = make([]*Material, n)
+		block := make([]Material, n) // one allocation for them all
 		// Milestones with the same date text share one parsed date: the
 		// dataset is only read, and half of its dates are repeats.
 		dates := make(map[string]*date.Date, 2*n)
 		for i := range d.Materials {
-			m, err := r.material(dates)
-			if err != nil {
+			m := &block[i]
+			if err := r.material(m, dates); err != nil {
 				return nil, err
 			}
 			d.Materials[i] = m
@@ -178,8 +179,8 @@ func checksum(fsys fs.FS, name string, buf []byte) (int, uint32, error) {
 
 // material reads one material; dates holds the dates parsed so far, by
 // their text.
-func (r *snapReader) material(dates map[string]*date.Date) (*Material, error) {
-	m := &Material{ID: r.str()}
+func (r *snapReader) material(m *Material, dates map[string]*date.Date) error {
+	m.ID = r.str()
 	if n, ok := r.list(2); ok {
 		m.Names = make([]string, n)
 		for i := range m.Names {
@@ -211,7 +212,7 @@ func (r *snapReader) material(dates map[string]*date.Date) (*Material, error) {
 			ms.File = r.str()
 			ms.Line, ms.Column, ms.sourceLine, ms.sourceCol = r.int(), r.int(), r.int(), r.int()
 			if r.err != nil {
-				return nil, fmt.Errorf("materials snapshot: %w", r.err)
+				return fmt.Errorf("materials snapshot: %w", r.err)
 			}
 			if dt, ok := dates[text]; ok {
 				ms.Date = *dt
@@ -219,13 +220,13 @@ func (r *snapReader) material(dates map[string]*date.Date) (*Material, error) {
 			}
 			dt, err := date.Parse(text)
 			if err != nil {
-				return nil, fmt.Errorf("materials snapshot: milestone of %q at %s:%d: %w", m.ID, ms.File, ms.Line, err)
+				return fmt.Errorf("materials snapshot: milestone of %q at %s:%d: %w", m.ID, ms.File, ms.Line, err)
 			}
 			ms.Date = dt
 			dates[text] = &ms.Date
 		}
 	}
-	return m, r.err
+	return r.err
 }
 
 // snapReader reads the records of a snapshot: unsigned and zig-zag
