@@ -189,3 +189,37 @@ func benchZ3(b *testing.B, mk func(int) *Network) {
 		})
 	}
 }
+
+// BenchmarkConflicts solves each shape made inconsistent by one soft
+// constraint that puts the first item after its latest day: conflicts
+// (capped at 10, the default) and the cheapest correction.
+func BenchmarkConflicts(b *testing.B) {
+	for _, shape := range []struct {
+		name string
+		mk   func(int) *Network
+	}{{"Chain", chainInstance}, {"Dense", denseInstance}, {"Disjunctive", disjunctiveInstance}} {
+		for _, size := range []int{100, 1000} {
+			b.Run(fmt.Sprintf("%s/%d", shape.name, size), func(b *testing.B) {
+				n := shape.mk(size)
+				r, err := n.Solve(context.Background(), Soft, Options{})
+				if err != nil || r.Latest(1).Value >= Inf {
+					b.Fatalf("instance: %v, latest %d", err, r.Latest(1).Value)
+				}
+				mustAdd(n, Constraint{ID: "zz-too-late", Tier: Soft, Alts: []Alt{{Zero, 1, r.Latest(1).Value + 1, Inf}}})
+				tier := map[string]Tier{}
+				for _, c := range n.cons {
+					tier[c.ID] = c.Tier
+				}
+				b.ReportAllocs()
+				for b.Loop() {
+					r, err := n.Solve(context.Background(), Soft, Options{})
+					// Removing the added soft constraint restores consistency,
+					// so the cheapest correction is one soft constraint.
+					if err != nil || r.Consistent || len(r.Correction) != 1 || tier[r.Correction[0]] != Soft {
+						b.Fatalf("want one soft constraint as the correction: %v %v", r, err)
+					}
+				}
+			})
+		}
+	}
+}
