@@ -16,6 +16,8 @@
 //
 // [Network.Solve] uses every constraint whose tier is at most the requested
 // one, so the windows of the tiers nest: soft within firm within hard.
+// Solve only reads the network, so several goroutines may solve one network
+// at once; [Network.Add] must not run alongside them.
 //
 // # Results
 //

@@ -3,6 +3,7 @@ package network
 import (
 	"context"
 	"errors"
+	"reflect"
 	"strings"
 	"testing"
 )
@@ -153,5 +154,42 @@ func TestConflictCap(t *testing.T) {
 	}
 	if len(r.Conflicts) != 12 || !r.ConflictsComplete {
 		t.Errorf("%d conflicts, complete %v; want 12, complete", len(r.Conflicts), r.ConflictsComplete)
+	}
+}
+
+func TestDeterministicAndConcurrent(t *testing.T) {
+	// The same network solved several times, at once, gives identical
+	// results: no map order or shared state leaks into them.
+	n := disjunctiveInstance(100)
+	mustAdd(n, Constraint{ID: "zz-late", Tier: Soft, Alts: []Alt{{Zero, 1, 1_000_000, Inf}}})
+	results := make([][2]*Result, 4)
+	errs := make(chan error, len(results))
+	for i := range results {
+		go func() {
+			for k, tier := range []Tier{Firm, Soft} {
+				r, err := n.Solve(context.Background(), tier, Options{})
+				if err != nil {
+					errs <- err
+					return
+				}
+				results[i][k] = r
+			}
+			errs <- nil
+		}()
+	}
+	for range results {
+		if err := <-errs; err != nil {
+			t.Fatal(err)
+		}
+	}
+	for i := 1; i < len(results); i++ {
+		for k := range 2 {
+			if !reflect.DeepEqual(results[0][k], results[i][k]) {
+				t.Errorf("solve %d, tier %d differs from solve 0", i, k)
+			}
+		}
+	}
+	if !results[0][0].Consistent || results[0][1].Consistent {
+		t.Errorf("firm consistent %v, soft consistent %v; want true, false", results[0][0].Consistent, results[0][1].Consistent)
 	}
 }
