@@ -251,12 +251,18 @@ func (a *analysis) placeOf(e Event) string {
 	return a.c.Place
 }
 
-// A link ties a network constraint to the evidence it came from.
+// A link ties a network constraint to the evidence it came from. Its
+// texts are made only when a result shows them.
 type link struct {
 	evidence string
-	lower    string // what it says as a lower bound
-	upper    string // what it says as an upper bound
-	general  string // what it says in a conflict
+	lower    func() string // what it says as a lower bound
+	upper    func() string // what it says as an upper bound
+	general  func() string // what it says in a conflict
+}
+
+// same makes a link whose three texts are one.
+func same(evidence string, text func() string) link {
+	return link{evidence: evidence, lower: text, upper: text, general: text}
 }
 
 // built is one network built from the case, and how to read it back.
@@ -323,7 +329,18 @@ type boundItem struct {
 	day   date.Day
 	tier  network.Tier
 	ms    materials.Milestone
-	text  string
+	name  string         // the material's name
+	what  string         // "made", "arrived in …"
+	allow *date.Duration // the stock allowance of an upper bound
+}
+
+// text says where the bound comes from: "chrome yellow: made 1809 [key, documented]".
+func (it *boundItem) text() string {
+	t := fmt.Sprintf("%s: %s %s [%s, %s]", it.name, it.what, it.ms.Date.String(), it.ms.Source, it.ms.Basis)
+	if it.allow != nil {
+		t += fmt.Sprintf(", plus a stock allowance of %s", durationText(*it.allow))
+	}
+	return t
 }
 
 func (a *analysis) confidenceCap(c Confidence) network.Tier {
@@ -440,15 +457,15 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		if kind == materials.KindArrived {
 			what = "arrived in " + a.placeName(area)
 		}
-		text := fmt.Sprintf("%s: %s %s [%s, %s]", name, what, c.ms.Date.String(), c.ms.Source, c.ms.Basis)
+		it := boundItem{upper: upper, day: c.day, tier: t, ms: c.ms, name: name, what: what}
 		if upper {
 			allow := a.allowance
 			if c.ms.Allowance != nil {
 				allow = *c.ms.Allowance
 			}
-			text += fmt.Sprintf(", plus a stock allowance of %s", durationText(allow))
+			it.allow = &allow
 		}
-		items = append(items, boundItem{upper: upper, day: c.day, tier: t, ms: c.ms, text: text})
+		items = append(items, it)
 	}
 	var made, sold, withdrawn []materials.Milestone
 	for _, ms := range m.Milestones {
@@ -605,7 +622,7 @@ func (a *analysis) build(ov override) (*built, error) {
 				text += " (" + o.Note + ")"
 			}
 			c := network.Constraint{ID: o.ID, Tier: o.Strength, Alts: []network.Alt{{From: b.vars[a.eventIdx[o.Event]], To: b.vars[i], Lo: lo, Hi: hi}}}
-			if err := add(c, link{evidence: o.ID, lower: text, upper: text, general: text}); err != nil {
+			if err := add(c, same(o.ID, func() string { return text })); err != nil {
 				return nil, err
 			}
 			row := Evidence{ID: o.ID, Kind: "order", Event: e.ID, What: text}
@@ -648,18 +665,24 @@ func (a *analysis) build(ov override) (*built, error) {
 				if w.hasLo && w.loBy != prevLo {
 					prevLo = w.loBy
 					id := fmt.Sprintf("%s/after@%s", f.ID, t)
-					text := fmt.Sprintf("%s found (%s): not before %s, from %s", f.ID, f.Confidence, dayText(w.lo, false), w.loBy.text)
+					fid, conf, lo, by := f.ID, f.Confidence, w.lo, w.loBy
+					text := func() string {
+						return fmt.Sprintf("%s found (%s): not before %s, from %s", fid, conf, dayText(lo, false), by.text())
+					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: int64(w.lo), Hi: network.Inf}}}
-					if err := add(c, link{evidence: f.ID, lower: text, upper: text, general: text}); err != nil {
+					if err := add(c, same(f.ID, text)); err != nil {
 						return nil, err
 					}
 				}
 				if w.hasHi && w.hiBy != prevHi {
 					prevHi = w.hiBy
 					id := fmt.Sprintf("%s/before@%s", f.ID, t)
-					text := fmt.Sprintf("%s found (%s): not after %s, from %s", f.ID, f.Confidence, dayText(w.hi, true), w.hiBy.text)
+					fid, conf, hi, by := f.ID, f.Confidence, w.hi, w.hiBy
+					text := func() string {
+						return fmt.Sprintf("%s found (%s): not after %s, from %s", fid, conf, dayText(hi, true), by.text())
+					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: -network.Inf, Hi: int64(w.hi)}}}
-					if err := add(c, link{evidence: f.ID, lower: text, upper: text, general: text}); err != nil {
+					if err := add(c, same(f.ID, text)); err != nil {
 						return nil, err
 					}
 				}
@@ -694,30 +717,44 @@ func (a *analysis) build(ov override) (*built, error) {
 			}
 			prev = ws
 			var alts []network.Alt
-			var lowTexts, upTexts []string
+			var kept []window
+			var keptNames []string
 			for i, w := range ws {
 				if w.hasLo && w.hasHi && w.lo > w.hi {
 					b.notes = append(b.notes, fmt.Sprintf("%s: by the dataset, %s was withdrawn before it was available at the %s tier; that alternative is dropped there.", f.ID, names[i], t))
 					continue
 				}
 				alts = append(alts, w.alt(v))
-				if w.loBy != nil {
-					lowTexts = append(lowTexts, w.loBy.text)
-				} else {
-					lowTexts = append(lowTexts, names[i]+": no lower bound")
-				}
-				if w.hiBy != nil {
-					upTexts = append(upTexts, w.hiBy.text)
-				}
+				kept = append(kept, w)
+				keptNames = append(keptNames, names[i])
 			}
 			if len(alts) == 0 {
 				continue
 			}
 			id := fmt.Sprintf("%s@%s", f.ID, t)
-			lowText := fmt.Sprintf("%s found (%s), one of: %s", f.ID, f.Confidence, strings.Join(lowTexts, "; "))
-			upText := fmt.Sprintf("%s found (%s), one of: %s", f.ID, f.Confidence, strings.Join(upTexts, "; "))
-			if len(upTexts) == 0 {
-				upText = lowText
+			fid, conf := f.ID, f.Confidence
+			lowText := func() string {
+				var parts []string
+				for i, w := range kept {
+					if w.loBy != nil {
+						parts = append(parts, w.loBy.text())
+					} else {
+						parts = append(parts, keptNames[i]+": no lower bound")
+					}
+				}
+				return fmt.Sprintf("%s found (%s), one of: %s", fid, conf, strings.Join(parts, "; "))
+			}
+			upText := func() string {
+				var parts []string
+				for _, w := range kept {
+					if w.hiBy != nil {
+						parts = append(parts, w.hiBy.text())
+					}
+				}
+				if len(parts) == 0 {
+					return lowText()
+				}
+				return fmt.Sprintf("%s found (%s), one of: %s", fid, conf, strings.Join(parts, "; "))
 			}
 			c := network.Constraint{ID: id, Tier: t, Alts: alts}
 			if err := add(c, link{evidence: f.ID, lower: lowText, upper: upText, general: lowText}); err != nil {
@@ -788,7 +825,7 @@ func (a *analysis) build(ov override) (*built, error) {
 		if r.Note != "" {
 			general += " (" + r.Note + ")"
 		}
-		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, link{evidence: r.ID, lower: general, upper: general, general: general}); err != nil {
+		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, same(r.ID, func() string { return general })); err != nil {
 			return nil, err
 		}
 		b.evidence = append(b.evidence, Evidence{ID: r.ID, Kind: "record", Event: r.Event, What: what, Bounds: sides, Source: r.Source})
@@ -917,7 +954,7 @@ func (b *built) bound(nb network.Bound, upper bool) Bound {
 		if upper {
 			text = l.upper
 		}
-		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text})
+		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text()})
 	}
 	return out
 }
@@ -933,7 +970,7 @@ func (b *built) explainSet(ids []string) ([]string, []Step) {
 		if !ok {
 			continue
 		}
-		steps = append(steps, Step{Evidence: l.evidence, Text: l.general})
+		steps = append(steps, Step{Evidence: l.evidence, Text: l.general()})
 		if !seen[l.evidence] {
 			seen[l.evidence] = true
 			evs = append(evs, l.evidence)
