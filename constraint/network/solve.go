@@ -415,6 +415,7 @@ type search struct {
 	*solver
 	p      *problem
 	record bool // collect domains (else stop at the first solution)
+	spent  int  // nodes of this search, against Options.MaxNodes
 	found  bool
 	seed   []int32
 	arcs   []arc
@@ -459,8 +460,9 @@ func (sr *search) init() {
 // explanations and to rule out a negative cycle propagation missed.
 func (sr *search) node(fixed []calt, open [][]calt, given bool) error {
 	sr.nodes++
-	if sr.nodes > sr.opt.maxNodes() {
-		return fmt.Errorf("solve: %d nodes: %w", sr.nodes, ErrLimit)
+	sr.spent++
+	if sr.spent > sr.opt.maxNodes() {
+		return fmt.Errorf("solve: %d search nodes: %w", sr.spent, ErrLimit)
 	}
 	if sr.nodes&1023 == 0 {
 		if err := sr.ctx.Err(); err != nil {
@@ -636,6 +638,7 @@ func (sr *search) dive(fixed []calt, open [][]calt) bool {
 		sr.arcs = alts[0].arcs(sr.arcs)
 	}
 	sr.nodes++
+	sr.spent++
 	g.build(k, sr.arcs)
 	// Bounds by label correcting from the node's; then a potential started
 	// from them (upper bounds meet every arc between bounded nodes), to
