@@ -3,7 +3,6 @@ package network
 import (
 	"context"
 	"fmt"
-	"maps"
 	"slices"
 	"strings"
 )
@@ -431,7 +430,10 @@ type search struct {
 	stamp         int32
 	touched       []change
 	queue         []int32
-	refined       map[int32]Set
+	refSets       []Set   // per variable, valid where refMark == refStamp
+	refMark       []int32 // the lookahead's cut of each variable's values
+	refStamp      int32
+	refVars       []int32
 	laChanges     [][][]change // per choice left open, per alternative
 	laSure        []bool
 	failVar       int32 // a variable the last dominance test found uncovered
@@ -597,7 +599,7 @@ func (sr *search) node(fixed []calt, open [][]calt, given bool) error {
 	if sr.laSure[best] {
 		pre = &preview{
 			lo: slices.Clone(g.lo[:len(sr.p.vars)]), up: slices.Clone(g.up[:len(sr.p.vars)]),
-			refined: maps.Clone(sr.refined), changes: sr.laChanges[best],
+			refined: sr.refinedList(), changes: sr.laChanges[best],
 		}
 	}
 	for ai, a := range open[best] {
@@ -791,8 +793,18 @@ func (sr *search) solveNode(keepSeed bool) bool {
 // preview is what the lookahead of a node learnt about its children.
 type preview struct {
 	lo, up  []int64
-	refined map[int32]Set
+	refined []unit // sorted by variable
 	changes [][]change // per alternative of the branching choice
+}
+
+// refinedList copies the lookahead's cuts, sorted by variable.
+func (sr *search) refinedList() []unit {
+	out := make([]unit, 0, len(sr.refVars))
+	for _, v := range sr.refVars {
+		out = append(out, unit{v, sr.refSets[v]})
+	}
+	slices.SortFunc(out, func(a, b unit) int { return int(a.v - b.v) })
+	return out
 }
 
 // childDominated reports whether the windows of a child, as propagation
@@ -809,12 +821,12 @@ func (sr *search) childDominated(pre *preview, alt int) bool {
 		if inside(sr.dom[i], pre.lo[i], pre.up[i]) {
 			continue
 		}
-		vals, ok := pre.refined[int32(i)]
+		j, ok := slices.BinarySearchFunc(pre.refined, int32(i), func(u unit, v int32) int { return int(u.v - v) })
 		if !ok {
 			covered = false
 			break
 		}
-		for _, iv := range intersectSets(vals, Set{{pre.lo[i], pre.up[i]}}) {
+		for _, iv := range intersectSets(pre.refined[j].s, Set{{pre.lo[i], pre.up[i]}}) {
 			if !inside(sr.dom[i], iv.Lo, iv.Hi) {
 				covered = false
 				break
@@ -852,11 +864,10 @@ func (sr *search) dominated() bool {
 			continue
 		}
 		sr.failVar = int32(i)
-		vals, ok := sr.refined[int32(i)]
-		if !ok {
+		if sr.refMark[i] != sr.refStamp {
 			return false
 		}
-		for _, iv := range vals {
+		for _, iv := range sr.refSets[i] {
 			if !inside(sr.dom[i], iv.Lo, iv.Hi) {
 				return false
 			}
@@ -905,10 +916,12 @@ func (sr *search) lookahead(open [][]calt, fixed []calt) (next [][]calt, fx []ca
 		sr.cstamp = make([]int32, k)
 	}
 	sr.count, sr.cstamp = sr.count[:k], sr.cstamp[:k]
-	clear(sr.refined)
-	if sr.refined == nil {
-		sr.refined = map[int32]Set{}
+	if len(sr.refSets) < k {
+		sr.refSets = make([]Set, k)
+		sr.refMark = make([]int32, k)
 	}
+	sr.refStamp++
+	sr.refVars = sr.refVars[:0]
 	fx = fixed
 	sr.laChanges, sr.laSure = sr.laChanges[:0], sr.laSure[:0]
 	for _, alts := range open {
@@ -965,15 +978,18 @@ func (sr *search) lookahead(open [][]calt, fixed []calt) (next [][]calt, fx []ca
 			}
 		}
 		for _, u := range sr.units {
-			set := u.s
-			if old, ok := sr.refined[u.v]; ok {
-				set = intersectSets(old, set)
+			if sr.refMark[u.v] == sr.refStamp {
+				sr.refSets[u.v] = intersectSets(sr.refSets[u.v], u.s)
+				continue
 			}
-			sr.refined[u.v] = set
+			sr.refMark[u.v] = sr.refStamp
+			sr.refSets[u.v] = u.s
+			sr.refVars = append(sr.refVars, u.v)
 		}
 	}
 	if changed {
-		clear(sr.refined)
+		sr.refStamp++ // forget the cuts: the node will be solved again
+		sr.refVars = sr.refVars[:0]
 	}
 	return next, fx, changed, false
 }
