@@ -793,7 +793,7 @@ func (sr *search) solveNode(keepSeed bool) bool {
 // preview is what the lookahead of a node learnt about its children.
 type preview struct {
 	lo, up  []int64
-	refined []unit // sorted by variable
+	refined []unit     // sorted by variable
 	changes [][]change // per alternative of the branching choice
 }
 
