@@ -99,23 +99,23 @@
 //	events              10         100          1,000         10,000
 //	ordered series   8–18 µs    66–157 µs     1.0–1.9 ms     14–20 ms
 //	dense (8n pairs) 20–41 µs   0.26–0.51 ms  4.5–7.1 ms     64–72 ms
-//	disjunctive     25–42 µs    1.4–2.2 ms    185–220 ms     20–25 s
+//	disjunctive     21–45 µs    1.2–2.2 ms    170–220 ms     20–25 s
 //
 // The ordered series and the dense network grow as n log n. The ordered
 // series has a window on every item (one in seven open on one side), the
 // items in order, and every fifth gap bounded; the disjunctive series adds
 // a one-of date to every tenth item and a choice of gap to every tenth
 // step, so its choices grow with n: its search nodes grow about linearly
-// (84, 886 and about 8,500 nodes for 100, 1,000 and 10,000 items) and each
+// (84, 886 and 8,544 nodes for 100, 1,000 and 10,000 items) and each
 // costs O(n), so it grows as n². The z3 SMT solver on the same instances
 // (one process, push/pop, two optimisation queries per variable, answers
 // checked equal) takes 24–34 ms, 47–61 ms and 30–43 ms for the three
-// shapes at 10 events and 1.4–1.9 s, 11.9–14.0 s and 1.7–2.3 s at 100:
-// 1,300 to 4,200 times slower at 10 events on the simple shapes and 800 to
-// 1,700 times on the disjunctive one, 9,000 to 53,000 times at 100 on the
-// simple shapes and 800 to 1,200 on the disjunctive one. Made inconsistent
-// by one soft bound on the first item, the shapes give their conflicts and
-// correction in 0.7–2.8 ms at 100 events and about 20 ms at 1,000
+// shapes at 10 events and 1.4–1.9 s, 11.9–14.0 s and 1.7–2.3 s at 100.
+// Timed in the same runs, that is 1,300–4,200 times slower at 10 events
+// and 9,000–53,000 at 100 on the simple shapes, and 900–1,900 (10) and
+// 1,000–1,800 (100) on the disjunctive one. Made inconsistent by one soft
+// bound on the first item, the shapes give their conflicts and correction
+// in 0.7–2.8 ms at 100 events and about 20 ms at 1,000
 // (BenchmarkConflicts).
 package network
 
