@@ -112,8 +112,8 @@
 // checked equal) takes 24–34 ms, 47–61 ms and 30–43 ms for the three
 // shapes at 10 events and 1.4–1.9 s, 11.9–14.0 s and 1.7–2.3 s at 100.
 // Timed in the same runs, that is 1,300–4,200 times slower at 10 events
-// and 9,000–53,000 at 100 on the simple shapes, and 900–1,900 (10) and
-// 1,000–1,800 (100) on the disjunctive one. Made inconsistent by one soft
+// and 9,000–53,000 at 100 on the simple shapes, and 800–1,700 (10) and
+// 1,000–1,300 (100) on the disjunctive one. Made inconsistent by one soft
 // bound on the first item, the shapes give their conflicts and correction
 // in 0.7–2.8 ms at 100 events and about 20 ms at 1,000
 // (BenchmarkConflicts).
