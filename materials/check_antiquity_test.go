@@ -16,7 +16,7 @@ const antiquityFile = "antiquity-natural.yaml"
 // and the place in it stand beside the value. Dates are EDTF in
 // astronomical years (2000 BCE = -1999).
 func TestAntiquityAgainstSources(t *testing.T) {
-	d := builtinForAntiquity(t)
+	d := checkBuiltin(t)
 	rows := []struct {
 		id    string
 		kind  materials.Kind
@@ -118,13 +118,13 @@ func TestAntiquityAgainstSources(t *testing.T) {
 // TestAntiquityTradeFacts checks facts of the trade (common practice) that
 // the family must carry.
 func TestAntiquityTradeFacts(t *testing.T) {
-	d := builtinForAntiquity(t)
+	d := checkBuiltin(t)
 	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
 
 	t.Run("madder dyed by about 2000 BCE", func(t *testing.T) {
 		// Common practice: madder was used to dye leather and cloth by about 2000 BCE.
-		m := lookup(t, d, "madder")
-		first, ok := earliestClaim(m.Claims(materials.KindMade, ""))
+		m := mustLookup(t, d, "madder")
+		first, ok := earliestOf(m.Claims(materials.KindMade, ""))
 		if !ok {
 			t.Fatal("madder has no bounded made claim")
 		}
@@ -134,7 +134,7 @@ func TestAntiquityTradeFacts(t *testing.T) {
 	})
 	t.Run("cochineal carmine in Japan about 1870", func(t *testing.T) {
 		// Common practice: cochineal carmine reached Japan by about 1870.
-		m := lookup(t, d, "cochineal carmine")
+		m := mustLookup(t, d, "cochineal carmine")
 		claims, area := d.Arrival(m, "JP")
 		if area != "JP" || len(claims) == 0 {
 			t.Fatalf("no arrival in JP (area %q)", area)
@@ -149,7 +149,7 @@ func TestAntiquityTradeFacts(t *testing.T) {
 	})
 	t.Run("lead-tin yellow ends about 1750", func(t *testing.T) {
 		// Common practice: lead-tin yellow vanished about 1750 and was rediscovered in the 20th century.
-		m := lookup(t, d, "lead-tin yellow")
+		m := mustLookup(t, d, "lead-tin yellow")
 		ws := m.Claims(materials.KindWithdrawn, "")
 		if len(ws) == 0 {
 			t.Fatal("no withdrawn claim")
@@ -175,7 +175,7 @@ func TestAntiquityTradeFacts(t *testing.T) {
 // problems that fall in this family's file, and checks that each of its
 // materials resolves by every one of its names.
 func TestAntiquityFileLintsClean(t *testing.T) {
-	d := builtinForAntiquity(t)
+	d := checkBuiltin(t)
 	for _, p := range materials.Lint(d) {
 		if strings.HasSuffix(p.File, antiquityFile) {
 			t.Errorf("lint: %s", p)
@@ -201,34 +201,4 @@ func TestAntiquityFileLintsClean(t *testing.T) {
 	if n < 12 {
 		t.Errorf("only %d materials come from %s", n, antiquityFile)
 	}
-}
-
-func builtinForAntiquity(t *testing.T) *materials.Dataset {
-	t.Helper()
-	d, err := materials.Builtin()
-	if err != nil {
-		t.Fatalf("Builtin: %v", err)
-	}
-	return d
-}
-
-func lookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
-	t.Helper()
-	m, err := d.Lookup(name)
-	if err != nil {
-		t.Fatalf("Lookup(%q): %v", name, err)
-	}
-	return m
-}
-
-// earliestClaim is the earliest bounded start among claims.
-func earliestClaim(claims []materials.Milestone) (date.Day, bool) {
-	var best date.Day
-	ok := false
-	for _, c := range claims {
-		if e, bounded := c.Date.Earliest(); bounded && (!ok || e < best) {
-			best, ok = e, true
-		}
-	}
-	return best, ok
 }

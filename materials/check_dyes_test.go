@@ -16,7 +16,7 @@ const dyesFile = "synthetic-dyes.yaml"
 // named published sources give them. One row per value; the source and the
 // place in it stand beside the value. Rows written from memory say so.
 func TestDyesAgainstSources(t *testing.T) {
-	d := dyesBuiltin(t)
+	d := checkBuiltin(t)
 	rows := []struct {
 		id    string
 		kind  materials.Kind
@@ -164,7 +164,7 @@ func TestDyesAgainstSources(t *testing.T) {
 			if err != nil {
 				t.Fatalf("bad expected date %q: %v", r.want, err)
 			}
-			m := dyesLookup(t, d, r.id)
+			m := mustLookup(t, d, r.id)
 			if !strings.HasSuffix(m.File, dyesFile) {
 				t.Fatalf("%s comes from %s, want %s", r.id, m.File, dyesFile)
 			}
@@ -183,7 +183,7 @@ func TestDyesAgainstSources(t *testing.T) {
 // TestDyesTradeFacts checks facts of the trade (common practice, no source)
 // on this family's entries.
 func TestDyesTradeFacts(t *testing.T) {
-	d := dyesBuiltin(t)
+	d := checkBuiltin(t)
 
 	t.Run("only picric acid is made before 1856, and it says so", func(t *testing.T) {
 		// Common practice: synthetic organic dyes appear from about 1856;
@@ -195,7 +195,7 @@ func TestDyesTradeFacts(t *testing.T) {
 			if m.Origin != "synthetic" {
 				continue
 			}
-			first, ok := dyesEarliest(m.Claims(materials.KindMade, ""))
+			first, ok := earliestOf(m.Claims(materials.KindMade, ""))
 			if !ok || first >= limit {
 				continue
 			}
@@ -224,8 +224,8 @@ func TestDyesTradeFacts(t *testing.T) {
 			{"aniline yellow", "acid yellow (aminoazobenzene sulphonic acid)"},
 		}
 		for _, p := range pairs {
-			a := dyesLookup(t, d, p[0])
-			b := dyesLookup(t, d, p[1])
+			a := mustLookup(t, d, p[0])
+			b := mustLookup(t, d, p[1])
 			if a.ID == b.ID {
 				t.Errorf("%q and %q resolve to the same material %s", p[0], p[1], a.ID)
 			}
@@ -258,9 +258,9 @@ func TestDyesTradeFacts(t *testing.T) {
 	}
 	for _, o := range order {
 		t.Run(o.why, func(t *testing.T) {
-			a, b := dyesLookup(t, d, o.earlier), dyesLookup(t, d, o.later)
-			ea, okA := dyesEarliest(a.Claims(o.kind, ""))
-			eb, okB := dyesEarliest(b.Claims(o.kind, ""))
+			a, b := mustLookup(t, d, o.earlier), mustLookup(t, d, o.later)
+			ea, okA := earliestOf(a.Claims(o.kind, ""))
+			eb, okB := earliestOf(b.Claims(o.kind, ""))
 			if !okA || !okB {
 				t.Fatalf("missing %s claims: %s %v, %s %v", o.kind, a.ID, okA, b.ID, okB)
 			}
@@ -272,9 +272,9 @@ func TestDyesTradeFacts(t *testing.T) {
 
 	t.Run("invention is not availability: synthetic indigo took years to sell", func(t *testing.T) {
 		// Common practice: Baeyer's synthesis and BASF's sale lie about two decades apart.
-		m := dyesLookup(t, d, "synthetic-indigo")
-		made, ok1 := dyesEarliest(m.Claims(materials.KindMade, ""))
-		sold, ok2 := dyesEarliest(m.Claims(materials.KindSold, ""))
+		m := mustLookup(t, d, "synthetic-indigo")
+		made, ok1 := earliestOf(m.Claims(materials.KindMade, ""))
+		sold, ok2 := earliestOf(m.Claims(materials.KindSold, ""))
 		if !ok1 || !ok2 {
 			t.Fatal("synthetic indigo lacks made or sold claims")
 		}
@@ -286,7 +286,7 @@ func TestDyesTradeFacts(t *testing.T) {
 	t.Run("synthetic dyes reached Japan after their first sale", func(t *testing.T) {
 		// Common practice: East Asian printmakers took up the new dyes years after Europe.
 		for _, id := range []string{"fuchsine", "methyl-violet", "eosin", "synthetic-indigo"} {
-			m := dyesLookup(t, d, id)
+			m := mustLookup(t, d, id)
 			claims, area := d.Arrival(m, "JP")
 			if len(claims) == 0 {
 				t.Errorf("%s has no arrival for JP", id)
@@ -295,8 +295,8 @@ func TestDyesTradeFacts(t *testing.T) {
 			if area != "JP" {
 				t.Errorf("%s: arrival for JP comes from area %s, want JP itself", id, area)
 			}
-			sold, ok := dyesEarliest(m.Claims(materials.KindSold, ""))
-			arrived, ok2 := dyesEarliest(claims)
+			sold, ok := earliestOf(m.Claims(materials.KindSold, ""))
+			arrived, ok2 := earliestOf(claims)
 			if !ok || !ok2 {
 				t.Errorf("%s lacks a bounded sold or arrived claim", id)
 				continue
@@ -309,7 +309,7 @@ func TestDyesTradeFacts(t *testing.T) {
 
 	t.Run("an arrival in Japan does not hold for Korea", func(t *testing.T) {
 		// The arrival of a country applies to that country only, not to its neighbours.
-		m := dyesLookup(t, d, "eosin")
+		m := mustLookup(t, d, "eosin")
 		if claims, area := d.Arrival(m, "KR"); len(claims) != 0 {
 			t.Errorf("eosin has arrival claims for KR from %s: %v", area, claims)
 		}
@@ -320,7 +320,7 @@ func TestDyesTradeFacts(t *testing.T) {
 // several regions, withdrawals, disagreeing claims, and that it lints clean
 // and resolves by every name.
 func TestDyesFileShape(t *testing.T) {
-	d := dyesBuiltin(t)
+	d := checkBuiltin(t)
 	for _, p := range materials.Lint(d) {
 		if strings.HasSuffix(p.File, dyesFile) {
 			t.Errorf("lint: %s", p)
@@ -389,15 +389,6 @@ func TestDyesFileShape(t *testing.T) {
 	}
 }
 
-func dyesBuiltin(t *testing.T) *materials.Dataset {
-	t.Helper()
-	d, err := materials.Builtin()
-	if err != nil {
-		t.Fatalf("Builtin: %v", err)
-	}
-	return d
-}
-
 func dyesMaterials(d *materials.Dataset) []*materials.Material {
 	var out []*materials.Material
 	for _, m := range d.Materials {
@@ -406,25 +397,4 @@ func dyesMaterials(d *materials.Dataset) []*materials.Material {
 		}
 	}
 	return out
-}
-
-func dyesLookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
-	t.Helper()
-	m, err := d.Lookup(name)
-	if err != nil {
-		t.Fatalf("Lookup(%q): %v", name, err)
-	}
-	return m
-}
-
-// dyesEarliest is the earliest first day among claims with a bounded start.
-func dyesEarliest(claims []materials.Milestone) (date.Day, bool) {
-	var best date.Day
-	found := false
-	for _, c := range claims {
-		if first, ok := c.Date.Earliest(); ok && (!found || first < best) {
-			best, found = first, true
-		}
-	}
-	return best, found
 }

@@ -17,7 +17,7 @@ const inorganicFile = "inorganic-1700-1900.yaml"
 // and the place in it stand beside the value, and rows taken from memory
 // say so.
 func TestInorganicAgainstSources(t *testing.T) {
-	d := inorganicBuiltin(t)
+	d := checkBuiltin(t)
 	rows := []struct {
 		id    string
 		kind  materials.Kind
@@ -127,7 +127,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 			if err != nil {
 				t.Fatalf("bad expected date %q: %v", r.want, err)
 			}
-			m := inorganicLookup(t, d, r.id)
+			m := mustLookup(t, d, r.id)
 			var got []string
 			for _, ms := range m.Claims(r.kind, r.place) {
 				got = append(got, ms.Date.EDTF())
@@ -144,12 +144,12 @@ func TestInorganicAgainstSources(t *testing.T) {
 // this family must carry, and that the dates practitioners quarrel over are
 // kept as separate claims.
 func TestInorganicTradeFacts(t *testing.T) {
-	d := inorganicBuiltin(t)
+	d := checkBuiltin(t)
 	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
 
 	t.Run("Prussian blue in Japan by about 1830", func(t *testing.T) {
 		// Common practice: Prussian blue was in use in Japan by about 1830.
-		m := inorganicLookup(t, d, "Berlin blue")
+		m := mustLookup(t, d, "Berlin blue")
 		claims, area := d.Arrival(m, "JP")
 		if area != "JP" || len(claims) == 0 {
 			t.Fatalf("no arrival in JP (area %q)", area)
@@ -178,7 +178,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 	}
 	for _, c := range disputes {
 		t.Run(c.name+" keeps both claims", func(t *testing.T) {
-			m := inorganicLookup(t, d, c.name)
+			m := mustLookup(t, d, c.name)
 			have := map[string]string{}
 			for _, ms := range m.Claims(c.kind, "") {
 				have[ms.Date.EDTF()] = ms.Source
@@ -204,7 +204,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 			if !strings.HasSuffix(m.File, inorganicFile) {
 				continue
 			}
-			made, ok := inorganicEarliest(m.Claims(materials.KindMade, ""))
+			made, ok := earliestOf(m.Claims(materials.KindMade, ""))
 			if !ok {
 				continue
 			}
@@ -218,7 +218,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 	t.Run("arsenic greens have an end", func(t *testing.T) {
 		// Common practice: the copper-arsenic greens went out of manufacture.
 		for _, name := range []string{"emerald green", "Scheele's green"} {
-			m := inorganicLookup(t, d, name)
+			m := mustLookup(t, d, name)
 			ws := m.Claims(materials.KindWithdrawn, "")
 			if len(ws) == 0 {
 				t.Errorf("%s: no withdrawn claim", name)
@@ -240,7 +240,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 			{"ultramarine violet", "ultramarine red"},
 		}
 		for _, p := range pairs {
-			a, b := inorganicLookup(t, d, p[0]), inorganicLookup(t, d, p[1])
+			a, b := mustLookup(t, d, p[0]), mustLookup(t, d, p[1])
 			if a.ID == b.ID {
 				t.Errorf("%q and %q resolve to the same material %s", p[0], p[1], a.ID)
 			}
@@ -252,7 +252,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 // problems that fall in this family's file, and checks that each of its
 // materials resolves by every one of its names.
 func TestInorganicFileLintsClean(t *testing.T) {
-	d := inorganicBuiltin(t)
+	d := checkBuiltin(t)
 	for _, p := range materials.Lint(d) {
 		if strings.HasSuffix(p.File, inorganicFile) {
 			t.Errorf("lint: %s", p)
@@ -278,37 +278,4 @@ func TestInorganicFileLintsClean(t *testing.T) {
 	if n < 30 {
 		t.Errorf("only %d materials come from %s", n, inorganicFile)
 	}
-}
-
-func inorganicBuiltin(t *testing.T) *materials.Dataset {
-	t.Helper()
-	d, err := materials.Builtin()
-	if err != nil {
-		for _, p := range materials.Problems(err) {
-			t.Log(p)
-		}
-		t.Fatalf("Builtin: %v", err)
-	}
-	return d
-}
-
-func inorganicLookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
-	t.Helper()
-	m, err := d.Lookup(name)
-	if err != nil {
-		t.Fatalf("Lookup(%q): %v", name, err)
-	}
-	return m
-}
-
-// inorganicEarliest is the earliest bounded start among claims.
-func inorganicEarliest(claims []materials.Milestone) (date.Day, bool) {
-	var best date.Day
-	ok := false
-	for _, c := range claims {
-		if e, bounded := c.Date.Earliest(); bounded && (!ok || e < best) {
-			best, ok = e, true
-		}
-	}
-	return best, ok
 }

@@ -17,7 +17,7 @@ const modernFile = "modern-pigments-inks-other.yaml"
 // the named published sources give them. One row per value; the source and
 // the place in it stand beside the value. Rows written from memory say so.
 func TestModernAgainstSources(t *testing.T) {
-	d := modernBuiltin(t)
+	d := checkBuiltin(t)
 	rows := []struct {
 		id    string
 		kind  materials.Kind
@@ -119,7 +119,7 @@ func TestModernAgainstSources(t *testing.T) {
 			if err != nil {
 				t.Fatalf("bad expected date %q: %v", r.want, err)
 			}
-			m := modernLookup(t, d, r.id)
+			m := mustLookup(t, d, r.id)
 			if !strings.HasSuffix(m.File, modernFile) {
 				t.Fatalf("%s comes from %s, want %s", r.id, m.File, modernFile)
 			}
@@ -138,7 +138,7 @@ func TestModernAgainstSources(t *testing.T) {
 // TestModernOrderOfTheTrade checks facts of the trade that tie materials of
 // this family to each other. Each comparison uses the earliest bounded claim.
 func TestModernOrderOfTheTrade(t *testing.T) {
-	d := modernBuiltin(t)
+	d := checkBuiltin(t)
 	rows := []struct {
 		earlier, later string
 		kind           materials.Kind
@@ -167,8 +167,8 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 	}
 	for _, r := range rows {
 		t.Run(r.earlier+"<"+r.later, func(t *testing.T) {
-			a, okA := modernEarliest(modernLookup(t, d, r.earlier).Claims(r.kind, ""))
-			b, okB := modernEarliest(modernLookup(t, d, r.later).Claims(r.kind, ""))
+			a, okA := earliestOf(mustLookup(t, d, r.earlier).Claims(r.kind, ""))
+			b, okB := earliestOf(mustLookup(t, d, r.later).Claims(r.kind, ""))
 			if !okA || !okB {
 				t.Fatalf("%s: missing %s claim (%v, %v)", r.why, r.kind, okA, okB)
 			}
@@ -180,7 +180,7 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 
 	// Common practice: ballpoint pens first went on sale in 1945, years after
 	// the first patents; no sold claim may be earlier than 1945.
-	first, ok := modernEarliest(modernLookup(t, d, "ballpoint-paste-ink").Claims(materials.KindSold, ""))
+	first, ok := earliestOf(mustLookup(t, d, "ballpoint-paste-ink").Claims(materials.KindSold, ""))
 	if !ok {
 		t.Fatal("ballpoint-paste-ink has no sold claim")
 	}
@@ -190,7 +190,7 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 
 	// Messier et al. 2005: no optical brightener in photographic paper
 	// before 1950, so no made claim may start earlier.
-	obaStart, ok := modernEarliest(modernLookup(t, d, "optical-brightener-photographic-paper").Claims(materials.KindMade, ""))
+	obaStart, ok := earliestOf(mustLookup(t, d, "optical-brightener-photographic-paper").Claims(materials.KindMade, ""))
 	if !ok {
 		t.Fatal("optical-brightener-photographic-paper has no made claim")
 	}
@@ -203,7 +203,7 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 // a made milestone, each milestone names a source of the dataset, each
 // material resolves by all of its names, and the file lints clean.
 func TestModernFileShape(t *testing.T) {
-	d := modernBuiltin(t)
+	d := checkBuiltin(t)
 	for _, p := range materials.Lint(d) {
 		if strings.HasSuffix(p.File, modernFile) {
 			t.Errorf("lint: %s", p)
@@ -268,34 +268,4 @@ func TestModernFileShape(t *testing.T) {
 	if disputed < 5 {
 		t.Errorf("%d materials with disagreeing claims; want at least 5", disputed)
 	}
-}
-
-func modernBuiltin(t *testing.T) *materials.Dataset {
-	t.Helper()
-	d, err := materials.Builtin()
-	if err != nil {
-		t.Fatalf("Builtin: %v", err)
-	}
-	return d
-}
-
-func modernLookup(t *testing.T, d *materials.Dataset, name string) *materials.Material {
-	t.Helper()
-	m, err := d.Lookup(name)
-	if err != nil {
-		t.Fatalf("Lookup(%q): %v", name, err)
-	}
-	return m
-}
-
-// modernEarliest is the earliest bounded first day among claims.
-func modernEarliest(claims []materials.Milestone) (date.Day, bool) {
-	var best date.Day
-	ok := false
-	for _, c := range claims {
-		if e, bounded := c.Date.Earliest(); bounded && (!ok || e < best) {
-			best, ok = e, true
-		}
-	}
-	return best, ok
 }
