@@ -98,7 +98,12 @@ stronger one; 2 for bad input.`,
 		Example: `  terminus check examples/retouched-panel/case.yaml
   terminus check --format md case.yaml > dating-section.md
   terminus check --fail-on firm --materials my-pigments.yaml case.toml`,
-		Args: cobra.MinimumNArgs(1),
+		Args: func(cmd *cobra.Command, args []string) error {
+			if len(args) == 0 {
+				return usageError(&hintError{err: fmt.Errorf("check needs a case file"), hint: "terminus check CASE.yaml; 'terminus init case.yaml' writes a starter case"})
+			}
+			return nil
+		},
 		RunE: func(cmd *cobra.Command, args []string) error {
 			write, err := writerFor(format)
 			if err != nil {
