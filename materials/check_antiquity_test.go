@@ -17,13 +17,7 @@ const antiquityFile = "antiquity-natural.yaml"
 // astronomical years (2000 BCE = -1999).
 func TestAntiquityAgainstSources(t *testing.T) {
 	d := checkBuiltin(t)
-	rows := []struct {
-		id    string
-		kind  materials.Kind
-		place string
-		want  string
-		src   string
-	}{
+	rows := []sourceRow{
 		// Wikipedia, "Rubia tinctorum", section History: madder-dyed cotton from Mohenjo-daro, 3rd millennium BCE.
 		{"madder", materials.KindMade, "", "-2999/-2000", "Wikipedia, Rubia tinctorum, History"},
 		// Cesaratto, Luo, Smith and Leona, Heritage Science 6 (2018), abstract: imported carmine replaced safflower early in 1869.
@@ -93,26 +87,7 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		// From memory, not read here: Harley-era handbook date for Naples yellow as a painter's pigment (Artists' Pigments vol. 1).
 		{"naples-yellow", materials.KindSold, "", "16XX", "Artists' Pigments vol. 1 (from memory)"},
 	}
-	for _, r := range rows {
-		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
-			want, err := date.Parse(r.want)
-			if err != nil {
-				t.Fatalf("bad expected date %q: %v", r.want, err)
-			}
-			m, err := d.Lookup(r.id)
-			if err != nil {
-				t.Fatalf("Lookup(%q): %v", r.id, err)
-			}
-			var got []string
-			for _, ms := range m.Claims(r.kind, r.place) {
-				got = append(got, ms.Date.EDTF())
-				if ms.Date.EDTF() == want.EDTF() {
-					return
-				}
-			}
-			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
-		})
-	}
+	checkSourceRows(t, d, antiquityFile, rows)
 }
 
 // TestAntiquityTradeFacts checks facts of the trade (common practice) that

@@ -17,13 +17,7 @@ const dyesFile = "synthetic-dyes.yaml"
 // place in it stand beside the value. Rows written from memory say so.
 func TestDyesAgainstSources(t *testing.T) {
 	d := checkBuiltin(t)
-	rows := []struct {
-		id    string
-		kind  materials.Kind
-		place string
-		want  string
-		src   string
-	}{
+	rows := []sourceRow{
 		// Wikipedia, "Picric acid", History: made from indigo by Peter Woulfe in 1771.
 		{"picric-acid", materials.KindMade, "", "1771", "Wikipedia, Picric acid, History"},
 		// Freemantle, Chemistry World podcast "Picric acid": Woulfe's report on dyeing yellow with indigo, 1771.
@@ -158,26 +152,7 @@ func TestDyesAgainstSources(t *testing.T) {
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
 	}
-	for _, r := range rows {
-		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
-			want, err := date.Parse(r.want)
-			if err != nil {
-				t.Fatalf("bad expected date %q: %v", r.want, err)
-			}
-			m := mustLookup(t, d, r.id)
-			if !strings.HasSuffix(m.File, dyesFile) {
-				t.Fatalf("%s comes from %s, want %s", r.id, m.File, dyesFile)
-			}
-			var got []string
-			for _, ms := range m.Claims(r.kind, r.place) {
-				got = append(got, ms.Date.EDTF())
-				if ms.Date.EDTF() == want.EDTF() {
-					return
-				}
-			}
-			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
-		})
-	}
+	checkSourceRows(t, d, dyesFile, rows)
 }
 
 // TestDyesTradeFacts checks facts of the trade (common practice, no source)

@@ -18,13 +18,7 @@ const inorganicFile = "inorganic-1700-1900.yaml"
 // say so.
 func TestInorganicAgainstSources(t *testing.T) {
 	d := checkBuiltin(t)
-	rows := []struct {
-		id    string
-		kind  materials.Kind
-		place string
-		want  string
-		src   string
-	}{
+	rows := []sourceRow{
 		// Kraft, "The history of Prussian blue", Taylor & Francis chapter, abstract: invented in Berlin in 1706.
 		{"prussian-blue", materials.KindMade, "", "1706", "Kraft, History of Prussian blue, abstract"},
 		// Buxbaum et al., Industrial Inorganic Pigments, section 3.6.1: discovered by Diesbach in Berlin in 1704.
@@ -121,23 +115,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Wikipedia, "Manganese violet", History: first documented production by Winsor & Newton in 1890.
 		{"manganese-violet", materials.KindSold, "", "1890", "Wikipedia, Manganese violet, History"},
 	}
-	for _, r := range rows {
-		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
-			want, err := date.Parse(r.want)
-			if err != nil {
-				t.Fatalf("bad expected date %q: %v", r.want, err)
-			}
-			m := mustLookup(t, d, r.id)
-			var got []string
-			for _, ms := range m.Claims(r.kind, r.place) {
-				got = append(got, ms.Date.EDTF())
-				if ms.Date.EDTF() == want.EDTF() {
-					return
-				}
-			}
-			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
-		})
-	}
+	checkSourceRows(t, d, inorganicFile, rows)
 }
 
 // TestInorganicTradeFacts checks facts of the trade (common practice) that

@@ -4,7 +4,6 @@ import (
 	"strings"
 	"testing"
 
-	"terminus/constraint/date"
 	"terminus/materials"
 )
 
@@ -18,13 +17,7 @@ const modernFile = "modern-pigments-inks-other.yaml"
 // the place in it stand beside the value. Rows written from memory say so.
 func TestModernAgainstSources(t *testing.T) {
 	d := checkBuiltin(t)
-	rows := []struct {
-		id    string
-		kind  materials.Kind
-		place string
-		want  string
-		src   string
-	}{
+	rows := []sourceRow{
 		// Gettens and Stout, Painting Materials (1942), entry Titanium White, p. 161: regular production in Norway and America about 1916-1919.
 		{"titanium-white-anatase", materials.KindSold, "", "1916/1919", "Gettens and Stout 1942, p. 161"},
 		// MFA Boston text in the Palazzo Spinelli glossary, "Titanium white": commercial manufacture in Norway and the US in 1916.
@@ -113,26 +106,7 @@ func TestModernAgainstSources(t *testing.T) {
 		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, toluidine red 1905.
 		{"toluidine-red", materials.KindMade, "", "1905", "Herbst and Hunger 2004 (from memory)"},
 	}
-	for _, r := range rows {
-		t.Run(r.id+"/"+string(r.kind)+"/"+r.place+"/"+r.want, func(t *testing.T) {
-			want, err := date.Parse(r.want)
-			if err != nil {
-				t.Fatalf("bad expected date %q: %v", r.want, err)
-			}
-			m := mustLookup(t, d, r.id)
-			if !strings.HasSuffix(m.File, modernFile) {
-				t.Fatalf("%s comes from %s, want %s", r.id, m.File, modernFile)
-			}
-			var got []string
-			for _, ms := range m.Claims(r.kind, r.place) {
-				got = append(got, ms.Date.EDTF())
-				if ms.Date.EDTF() == want.EDTF() {
-					return
-				}
-			}
-			t.Errorf("%s %s %q: no claim dated %s (%s); have %v", r.id, r.kind, r.place, want.EDTF(), r.src, got)
-		})
-	}
+	checkSourceRows(t, d, modernFile, rows)
 }
 
 // TestModernOrderOfTheTrade checks facts of the trade that tie materials of
