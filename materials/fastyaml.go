@@ -425,8 +425,9 @@ func plainTag(v string) (null, integer bool) {
 }
 
 // quoted reads a quoted scalar at the start of s, returning its value and
-// the bytes it used. Escapes other than \" \\ \/ \n \t and \uXXXX, and
-// quotes left open at the end of the line, make it give up.
+// the bytes it used. Escapes other than \" \\ \n \t and \uXXXX, and
+// quotes left open at the end of the line, make it give up (yaml.v3, which
+// then reads the file, rejects some escapes of YAML 1.2 such as \/).
 func quoted(s string) (string, int, bool) {
 	q := s[0]
 	// Most values have no escape: the value is the text between the quotes.
@@ -454,7 +455,7 @@ func quoted(s string) (string, int, bool) {
 			}
 			i++
 			switch s[i] {
-			case '"', '\\', '/':
+			case '"', '\\':
 				b.WriteByte(s[i])
 			case 'n':
 				b.WriteByte('\n')
