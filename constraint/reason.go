@@ -80,10 +80,9 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	if ds == nil {
 		return nil, errors.New("no materials dataset")
 	}
-	a := &analysis{c: c, ds: ds, eventIdx: map[string]int{}, circa: date.DefaultCirca(), allowance: DefaultStockAllowance}
-	for k, v := range c.Circa {
-		a.circa[k] = v
-	}
+	// The case's circa policy is read, never changed; what it leaves out
+	// falls back to the defaults (date.Circa.For).
+	a := &analysis{c: c, ds: ds, eventIdx: make(map[string]int, len(c.Events)), circa: c.Circa, allowance: DefaultStockAllowance}
 	if c.StockAllowance != nil {
 		a.allowance = *c.StockAllowance
 	}
@@ -328,17 +327,21 @@ type boundItem struct {
 	upper bool
 	day   date.Day
 	tier  network.Tier
-	ms    materials.Milestone
-	name  string         // the material's name
-	what  string         // "made", "arrived in …"
-	allow *date.Duration // the stock allowance of an upper bound
+	ms    *materials.Milestone // in the dataset, which is never changed
+	name  string               // the material's name
+	area  string               // the area of an arrival
+	allow date.Duration        // the stock allowance of an upper bound
 }
 
 // text says where the bound comes from: "chrome yellow: made 1809 [key, documented]".
-func (it *boundItem) text() string {
-	t := fmt.Sprintf("%s: %s %s [%s, %s]", it.name, it.what, it.ms.Date.String(), it.ms.Source, it.ms.Basis)
-	if it.allow != nil {
-		t += fmt.Sprintf(", plus a stock allowance of %s", durationText(*it.allow))
+func (a *analysis) itemText(it *boundItem) string {
+	what := string(it.ms.Kind)
+	if it.ms.Kind == materials.KindArrived {
+		what = "arrived in " + a.placeName(it.area)
+	}
+	t := it.name + ": " + what + " " + it.ms.Date.String() + " [" + it.ms.Source + ", " + string(it.ms.Basis) + "]"
+	if it.upper {
+		t += ", plus a stock allowance of " + durationText(it.allow)
 	}
 	return t
 }
@@ -388,18 +391,20 @@ func monthName(m int) string {
 // materialBounds returns the bounds a material's milestones give an event
 // made at place, and notes about fallbacks and disagreements.
 func (a *analysis) materialBounds(m *materials.Material, place string, cap network.Tier, ov override, b *built) []boundItem {
-	var items []boundItem
+	items := make([]boundItem, 0, 4)
 	name := displayName(m)
-	group := func(kind materials.Kind, claims []materials.Milestone, area string, base network.Tier, upper bool) {
-		if len(claims) == 0 {
-			return
-		}
-		type cand struct {
-			day date.Day
-			ms  materials.Milestone
-		}
-		var cands []cand
-		for _, ms := range claims {
+	type cand struct {
+		day date.Day
+		ms  *materials.Milestone
+	}
+	var buf [8]cand
+	group := func(kind materials.Kind, area string, base network.Tier, upper bool) {
+		cands := buf[:0]
+		for i := range m.Milestones {
+			ms := &m.Milestones[i]
+			if ms.Kind != kind || kind == materials.KindArrived && ms.Place != area {
+				continue
+			}
 			d := ms.Date
 			if d.Approximate {
 				d = d.Widen(a.circa)
@@ -409,11 +414,7 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 			if upper {
 				day, ok = d.Latest()
 				if ok {
-					allow := a.allowance
-					if ms.Allowance != nil {
-						allow = *ms.Allowance
-					}
-					day = allow.AddTo(day)
+					day = a.stockAllowance(ms).AddTo(day)
 				}
 			} else {
 				day, ok = d.Earliest()
@@ -425,26 +426,30 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		if len(cands) == 0 {
 			return
 		}
-		// Most conservative first: the earliest lower bound, the latest upper.
-		sort.SliceStable(cands, func(i, j int) bool {
-			if upper {
-				return cands[i].day > cands[j].day
+		// Most conservative first: the earliest lower bound, the latest upper;
+		// a stable insertion sort (the lists are short).
+		for i := 1; i < len(cands); i++ {
+			for j := i; j > 0; j-- {
+				if upper && cands[j].day > cands[j-1].day || !upper && cands[j].day < cands[j-1].day {
+					cands[j], cands[j-1] = cands[j-1], cands[j]
+				} else {
+					break
+				}
 			}
-			return cands[i].day < cands[j].day
-		})
+		}
 		pick := 0
-		key := overrideKey(m.ID, kind, area)
-		if i, ok := ov[key]; ok && i < len(cands) {
-			pick = i
+		if len(ov) > 0 {
+			if i, ok := ov[overrideKey(m.ID, kind, area)]; ok && i < len(cands) {
+				pick = i
+			}
 		}
 		if b != nil && len(cands) > 1 && cands[0].day != cands[len(cands)-1].day {
-			var cl []string
-			for _, c := range cands {
-				cl = append(cl, fmt.Sprintf("%s (%s)", c.ms.Date.String(), c.ms.Source))
+			cl := make([]string, len(cands))
+			for i, c := range cands {
+				cl[i] = c.ms.Date.String() + " (" + c.ms.Source + ")"
 			}
 			b.disagreements = append(b.disagreements, Disagreement{
-				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl,
-				Used: fmt.Sprintf("%s (%s)", cands[pick].ms.Date.String(), cands[pick].ms.Source),
+				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl, Used: cl[pick],
 			})
 		}
 		c := cands[pick]
@@ -453,53 +458,40 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 			t = lower(t)
 		}
 		t = maxTier(t, cap)
-		what := string(kind)
-		if kind == materials.KindArrived {
-			what = "arrived in " + a.placeName(area)
-		}
-		it := boundItem{upper: upper, day: c.day, tier: t, ms: c.ms, name: name, what: what}
+		it := boundItem{upper: upper, day: c.day, tier: t, ms: c.ms, name: name, area: area}
 		if upper {
-			allow := a.allowance
-			if c.ms.Allowance != nil {
-				allow = *c.ms.Allowance
-			}
-			it.allow = &allow
+			it.allow = a.stockAllowance(c.ms)
 		}
 		items = append(items, it)
 	}
-	var made, sold, withdrawn []materials.Milestone
-	for _, ms := range m.Milestones {
-		switch ms.Kind {
-		case materials.KindMade:
-			made = append(made, ms)
-		case materials.KindSold:
-			sold = append(sold, ms)
-		case materials.KindWithdrawn:
-			withdrawn = append(withdrawn, ms)
-		}
-	}
-	group(materials.KindMade, made, "", network.Hard, false)
-	group(materials.KindSold, sold, "", network.Firm, false)
+	group(materials.KindMade, "", network.Hard, false)
+	group(materials.KindSold, "", network.Firm, false)
 	if place != "" {
-		arr, area := a.ds.Arrival(m, place)
-		if len(arr) == 0 {
-			if b != nil {
-				if b.noArrival == nil {
-					b.noArrival = map[string][]string{}
-				}
-				if !contains(b.noArrival[place], name) {
-					b.noArrival[place] = append(b.noArrival[place], name)
-					if !contains(b.noArrivalPlaces, place) {
-						b.noArrivalPlaces = append(b.noArrivalPlaces, place)
-					}
+		if area := a.ds.ArrivalArea(m, place); area != "" {
+			group(materials.KindArrived, area, network.Soft, false)
+		} else if b != nil {
+			if b.noArrival == nil {
+				b.noArrival = map[string][]string{}
+			}
+			if !contains(b.noArrival[place], name) {
+				b.noArrival[place] = append(b.noArrival[place], name)
+				if !contains(b.noArrivalPlaces, place) {
+					b.noArrivalPlaces = append(b.noArrivalPlaces, place)
 				}
 			}
-		} else {
-			group(materials.KindArrived, arr, area, network.Soft, false)
 		}
 	}
-	group(materials.KindWithdrawn, withdrawn, "", network.Soft, true)
+	group(materials.KindWithdrawn, "", network.Soft, true)
 	return items
+}
+
+// stockAllowance is how long stocks may have lingered after the withdrawal
+// ms: the dataset's figure, else the case's.
+func (a *analysis) stockAllowance(ms *materials.Milestone) date.Duration {
+	if ms.Allowance != nil {
+		return *ms.Allowance
+	}
+	return a.allowance
 }
 
 func (a *analysis) placeName(code string) string {
@@ -664,10 +656,10 @@ func (a *analysis) build(ov override) (*built, error) {
 				w := windowAt(perMat[0], t)
 				if w.hasLo && w.loBy != prevLo {
 					prevLo = w.loBy
-					id := fmt.Sprintf("%s/after@%s", f.ID, t)
+					id := f.ID + "/after@" + t.String()
 					fid, conf, lo, by := f.ID, f.Confidence, w.lo, w.loBy
 					text := func() string {
-						return fmt.Sprintf("%s found (%s): not before %s, from %s", fid, conf, dayText(lo, false), by.text())
+						return fmt.Sprintf("%s found (%s): not before %s, from %s", fid, conf, dayText(lo, false), a.itemText(by))
 					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: int64(w.lo), Hi: network.Inf}}}
 					if err := add(c, same(f.ID, text)); err != nil {
@@ -676,10 +668,10 @@ func (a *analysis) build(ov override) (*built, error) {
 				}
 				if w.hasHi && w.hiBy != prevHi {
 					prevHi = w.hiBy
-					id := fmt.Sprintf("%s/before@%s", f.ID, t)
+					id := f.ID + "/before@" + t.String()
 					fid, conf, hi, by := f.ID, f.Confidence, w.hi, w.hiBy
 					text := func() string {
-						return fmt.Sprintf("%s found (%s): not after %s, from %s", fid, conf, dayText(hi, true), by.text())
+						return fmt.Sprintf("%s found (%s): not after %s, from %s", fid, conf, dayText(hi, true), a.itemText(by))
 					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: -network.Inf, Hi: int64(w.hi)}}}
 					if err := add(c, same(f.ID, text)); err != nil {
@@ -731,13 +723,13 @@ func (a *analysis) build(ov override) (*built, error) {
 			if len(alts) == 0 {
 				continue
 			}
-			id := fmt.Sprintf("%s@%s", f.ID, t)
+			id := f.ID + "@" + t.String()
 			fid, conf := f.ID, f.Confidence
 			lowText := func() string {
 				var parts []string
 				for i, w := range kept {
 					if w.loBy != nil {
-						parts = append(parts, w.loBy.text())
+						parts = append(parts, a.itemText(w.loBy))
 					} else {
 						parts = append(parts, keptNames[i]+": no lower bound")
 					}
@@ -748,7 +740,7 @@ func (a *analysis) build(ov override) (*built, error) {
 				var parts []string
 				for _, w := range kept {
 					if w.hiBy != nil {
-						parts = append(parts, w.hiBy.text())
+						parts = append(parts, a.itemText(w.hiBy))
 					}
 				}
 				if len(parts) == 0 {

@@ -237,13 +237,34 @@ func (d *Dataset) Source(key string) (Source, bool) {
 // sub-region, region and the world ("001"). It returns nil and "" when no
 // area containing place has an arrival, or when place is unknown.
 func (d *Dataset) Arrival(m *Material, place string) (claims []Milestone, area string) {
-	if m == nil || d.Regions == nil {
+	if area = d.ArrivalArea(m, place); area == "" {
 		return nil, ""
 	}
-	for _, a := range d.Regions.Ancestors(place) {
-		if c := m.Claims(KindArrived, a); len(c) > 0 {
-			return c, a
+	return m.Claims(KindArrived, area), area
+}
+
+// ArrivalArea returns the area whose arrival claims [Dataset.Arrival]
+// would return for m at place (the most specific one that has any), or ""
+// when there are none; it allocates nothing.
+func (d *Dataset) ArrivalArea(m *Material, place string) string {
+	if m == nil || d.Regions == nil || !m.hasArrivals() {
+		return ""
+	}
+	for code := place; d.Regions.Valid(code); code = d.Regions.Parent(code) {
+		for i := range m.Milestones {
+			if ms := &m.Milestones[i]; ms.Kind == KindArrived && ms.Place == code {
+				return code
+			}
 		}
 	}
-	return nil, ""
+	return ""
+}
+
+func (m *Material) hasArrivals() bool {
+	for i := range m.Milestones {
+		if m.Milestones[i].Kind == KindArrived {
+			return true
+		}
+	}
+	return false
 }

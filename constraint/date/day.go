@@ -1,6 +1,8 @@
 package date
 
-import "fmt"
+import (
+	"strconv"
+)
 
 // Day is a calendar day, numbered by its Julian Day Number: the Julian Date
 // at the noon of that day. 2000-01-01 (Gregorian) is Day 2451545 and
@@ -114,8 +116,16 @@ func DaysInMonth(y int64, m int) int {
 // digits, and a sign with at least four digits for years before 1
 // ("-1199-01-01").
 func (d Day) ISO() string {
+	var buf [24]byte
+	return string(d.AppendISO(buf[:0]))
+}
+
+// AppendISO appends d formatted as [Day.ISO] does to b.
+func (d Day) AppendISO(b []byte) []byte {
 	y, m, dd := d.Civil()
-	return fmt.Sprintf("%s-%02d-%02d", FormatYear(y), m, dd)
+	b = AppendYear(b, y)
+	b = append(b, '-', byte('0'+m/10), byte('0'+m%10), '-', byte('0'+dd/10), byte('0'+dd%10))
+	return b
 }
 
 // Year returns the Gregorian year of d.
@@ -127,8 +137,19 @@ func (d Day) Year() int64 {
 // FormatYear writes an astronomical year as ISO 8601 does: four digits at
 // least, with a minus sign before years below 0 ("0000", "-0044", "12000").
 func FormatYear(y int64) string {
+	var buf [24]byte
+	return string(AppendYear(buf[:0], y))
+}
+
+// AppendYear appends y formatted as [FormatYear] does to b.
+func AppendYear(b []byte, y int64) []byte {
+	u := uint64(y)
 	if y < 0 {
-		return fmt.Sprintf("-%04d", -y)
+		b = append(b, '-')
+		u = uint64(-y) // two's complement: right for math.MinInt64 too
 	}
-	return fmt.Sprintf("%04d", y)
+	for p := uint64(1000); p > 1 && u < p; p /= 10 {
+		b = append(b, '0')
+	}
+	return strconv.AppendUint(b, u, 10)
 }

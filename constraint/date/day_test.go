@@ -1,6 +1,7 @@
 package date
 
 import (
+	"fmt"
 	"math"
 	"testing"
 )
@@ -196,5 +197,33 @@ func TestCivilRoundTripCycle(t *testing.T) {
 				t.Fatalf("Julian(JulianCivil(%d)) != %d", d, d)
 			}
 		}
+	}
+}
+
+// ISO and FormatYear agree with the plain printf formulation of ISO 8601
+// (four digits at least, a minus sign below year 0) over a wide range of
+// days and years, including the extremes of int64 years.
+func TestISOMatchesPrintf(t *testing.T) {
+	for d := Gregorian(-12000, 1, 1); d < Gregorian(12100, 1, 1); d += 17 {
+		y, m, dd := d.Civil()
+		want := fmt.Sprintf("%04d-%02d-%02d", y, m, dd)
+		if y < 0 {
+			want = fmt.Sprintf("-%04d-%02d-%02d", -y, m, dd)
+		}
+		if got := d.ISO(); got != want {
+			t.Fatalf("Day(%d).ISO() = %q, want %q", d, got, want)
+		}
+	}
+	for _, y := range []int64{0, 1, 9, 10, 99, 100, 999, 1000, 9999, 10000, -1, -9, -10, -999, -1000, -10000, math.MaxInt64, math.MinInt64 + 1} {
+		want := fmt.Sprintf("%04d", y)
+		if y < 0 {
+			want = fmt.Sprintf("-%04d", -y)
+		}
+		if got := FormatYear(y); got != want {
+			t.Errorf("FormatYear(%d) = %q, want %q", y, got, want)
+		}
+	}
+	if got := FormatYear(math.MinInt64); got != "-9223372036854775808" {
+		t.Errorf("FormatYear(MinInt64) = %q", got)
 	}
 }

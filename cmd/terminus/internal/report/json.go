@@ -196,11 +196,12 @@ func JSON(w io.Writer, r *constraint.Result) error {
 	return enc.Encode(toJSON(r))
 }
 
-// JSONLine writes r as one line of JSON, for JSON Lines output.
+// JSONLine writes r as one line of JSON, for JSON Lines output: the
+// document [JSON] writes, without the indentation.
 func JSONLine(w io.Writer, r *constraint.Result) error {
-	enc := json.NewEncoder(w)
-	enc.SetEscapeHTML(false)
-	return enc.Encode(toJSON(r))
+	b := AppendJSONLine(make([]byte, 0, 8<<10), r)
+	_, err := w.Write(append(b, '\n'))
+	return err
 }
 
 func toJSON(r *constraint.Result) jsonResult {

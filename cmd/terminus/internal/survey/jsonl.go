@@ -2,8 +2,6 @@ package survey
 
 import (
 	"bufio"
-	"bytes"
-	"encoding/json"
 	"io"
 	"strconv"
 
@@ -30,13 +28,7 @@ func NewJSONLWriter(w io.Writer, free []string) *JSONLWriter {
 	return &JSONLWriter{w: bufio.NewWriterSize(w, 256<<10), free: free}
 }
 
-func appendString(b []byte, s string) []byte {
-	var buf bytes.Buffer
-	enc := json.NewEncoder(&buf)
-	enc.SetEscapeHTML(false)
-	_ = enc.Encode(s) // a string always encodes
-	return append(b, bytes.TrimSuffix(buf.Bytes(), []byte("\n"))...)
-}
+func appendString(b []byte, s string) []byte { return report.AppendJSONString(b, s) }
 
 // Render encodes the record.
 func (j *JSONLWriter) Render(o *Outcome) error {
@@ -71,11 +63,7 @@ func (j *JSONLWriter) Render(o *Outcome) error {
 		}
 	case o.Result != nil:
 		b = append(b, `,"result":`...)
-		buf := bytes.NewBuffer(b)
-		if err := report.JSONLine(buf, o.Result); err != nil {
-			return err
-		}
-		b = bytes.TrimSuffix(buf.Bytes(), []byte("\n"))
+		b = report.AppendJSONLine(b, o.Result)
 	}
 	b = append(b, "}\n"...)
 	o.Out = b
