@@ -336,3 +336,16 @@ func TestCINameShape(t *testing.T) {
 		}
 	}
 }
+
+// BenchmarkLookupUnknown is the cost of a misspelt name: the suggestions
+// compare it with every name of the dataset.
+func BenchmarkLookupUnknown(b *testing.B) {
+	d := builtinOrFatal(b)
+	b.ReportAllocs()
+	for b.Loop() {
+		var nf *NotFoundError
+		if _, err := d.Lookup("prusian bleu"); !errors.As(err, &nf) || len(nf.Suggestions) == 0 {
+			b.Fatalf("got %v", err)
+		}
+	}
+}

@@ -17,6 +17,7 @@ type index struct {
 
 type nameRef struct {
 	key, shown string
+	runes      []rune // key, as runes for the edit distance
 }
 
 // buildIndex indexes ms; names, when not nil, already maps every folded id
@@ -55,7 +56,7 @@ func buildIndex(ms []*Material, names map[string]*Material) *index {
 			if _, ok := ix.names[k]; !ok && fill {
 				ix.names[k] = m
 			}
-			ix.all = append(ix.all, nameRef{k, n})
+			ix.all = append(ix.all, nameRef{k, n, []rune(k)})
 		}
 		if ci := m.ColourIndex; ci != nil {
 			addMulti(ix.ci, fold(ci.Name), m)
@@ -118,17 +119,15 @@ func (ix *index) nearest(key string, n int) []string {
 	limit := max(2, len(kr)/3)
 	best := map[string]cand{}
 	for _, r := range ix.all {
-		dist := levenshtein(key, r.key)
-		if len(key) >= 4 {
+		dist := levenshteinWithin(kr, r.runes, limit)
+		if len(key) >= 4 && dist > 1 {
 			if strings.Contains(r.key, key) {
-				dist = min(dist, 1)
-			} else if rk := []rune(r.key); len(rk) > len(kr)+1 {
+				dist = 1
+			} else if rk := r.runes; len(rk) > len(kr)+1 {
 				// A slip in the first word of a longer name: compare with
 				// the name's start (a letter shorter or longer than the
 				// query), one more for what is left out.
-				for n := len(kr) - 1; n <= len(kr)+1; n++ {
-					dist = min(dist, levenshtein(key, string(rk[:n]))+1)
-				}
+				dist = min(dist, prefixWithin(kr, rk, limit-1)+1)
 			}
 		}
 		if dist > limit {
@@ -301,26 +300,95 @@ func foldRune(r rune) (string, bool) {
 }
 
 // levenshtein is the edit distance between a and b, counted in runes.
+// levenshtein is the edit distance of a and b (in runes).
 func levenshtein(a, b string) int {
 	ra, rb := []rune(a), []rune(b)
-	if len(ra) < len(rb) {
-		ra, rb = rb, ra
+	return levenshteinWithin(ra, rb, max(len(ra), len(rb)))
+}
+
+// prefixWithin is the least edit distance between key and the starts of
+// name one rune shorter, as long, and one rune longer than key (name must
+// have len(key)+1 runes at least), capped at limit+1 like
+// levenshteinWithin: one table, whose rows are name's runes, gives all three.
+func prefixWithin(key, name []rune, limit int) int {
+	if limit < 0 {
+		return 0
 	}
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
+	m := len(key)
+	var buf [2 * 64]int
+	var prev, cur []int
+	if m+1 <= 64 {
+		prev, cur = buf[:m+1], buf[64:64+m+1]
+	} else {
+		prev, cur = make([]int, m+1), make([]int, m+1)
+	}
 	for j := range prev {
 		prev[j] = j
 	}
-	for i := 1; i <= len(ra); i++ {
+	best := limit + 1
+	if m <= 1 { // the empty start of name is one of the three
+		best = min(best, m)
+	}
+	for i := 1; i <= m+1 && i <= len(name); i++ {
 		cur[0] = i
-		for j := 1; j <= len(rb); j++ {
+		rowMin := i
+		for j := 1; j <= m; j++ {
 			cost := 1
-			if ra[i-1] == rb[j-1] {
+			if name[i-1] == key[j-1] {
 				cost = 0
 			}
 			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+			rowMin = min(rowMin, cur[j])
+		}
+		if i >= m-1 {
+			best = min(best, cur[m])
+		}
+		if rowMin > limit {
+			break // later rows only grow from this one
 		}
 		prev, cur = cur, prev
 	}
-	return prev[len(rb)]
+	return min(best, limit+1)
+}
+
+// levenshteinWithin is the edit distance of a and b when it is at most
+// limit, and limit+1 otherwise; it gives up as soon as the distance must
+// exceed limit, which makes suggestions cheap (most names are far off).
+func levenshteinWithin(a, b []rune, limit int) int {
+	if limit < 0 {
+		return 0
+	}
+	if len(a) < len(b) {
+		a, b = b, a
+	}
+	if len(a)-len(b) > limit {
+		return limit + 1
+	}
+	var buf [2 * 64]int
+	var prev, cur []int
+	if len(b)+1 <= 64 {
+		prev, cur = buf[:len(b)+1], buf[64:64+len(b)+1]
+	} else {
+		prev, cur = make([]int, len(b)+1), make([]int, len(b)+1)
+	}
+	for j := range prev {
+		prev[j] = j
+	}
+	for i := 1; i <= len(a); i++ {
+		cur[0] = i
+		rowMin := i
+		for j := 1; j <= len(b); j++ {
+			cost := 1
+			if a[i-1] == b[j-1] {
+				cost = 0
+			}
+			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
+			rowMin = min(rowMin, cur[j])
+		}
+		if rowMin > limit {
+			return limit + 1 // every later row only grows from this one
+		}
+		prev, cur = cur, prev
+	}
+	return min(prev[len(b)], limit+1)
 }
