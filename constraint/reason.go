@@ -4,6 +4,7 @@ import (
 	"context"
 	"errors"
 	"fmt"
+	"slices"
 	"sort"
 	"strings"
 
@@ -145,8 +146,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 		} else if _, ok := a.eventIdx[f.Event]; !ok {
 			return nil, a.errAt(f.EventPos, didYouMean(f.Event, ids), "finding %s: unknown event %q (events: %s)", f.ID, f.Event, strings.Join(ids, ", "))
 		}
-		rf := resolvedFinding{Finding: f}
-		seen := map[string]bool{}
+		rf := resolvedFinding{Finding: f, mats: make([]*materials.Material, 0, len(f.Materials))}
 		for i, name := range f.Materials {
 			m, err := ds.Lookup(name)
 			if err != nil {
@@ -160,10 +160,9 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 				}
 				return nil, a.errAt(f.MatPos[i], hint, "finding %s: unknown material %q", f.ID, name)
 			}
-			if seen[m.ID] {
+			if slices.Contains(rf.mats, m) { // named twice, perhaps by two names
 				continue
 			}
-			seen[m.ID] = true
 			rf.mats = append(rf.mats, m)
 		}
 		a.findings = append(a.findings, rf)
@@ -251,17 +250,33 @@ func (a *analysis) placeOf(e Event) string {
 }
 
 // A link ties a network constraint to the evidence it came from. Its
-// texts are made only when a result shows them.
+// texts are made only when a result shows them, and once.
 type link struct {
 	evidence string
-	lower    func() string // what it says as a lower bound
-	upper    func() string // what it says as an upper bound
-	general  func() string // what it says in a conflict
+	lower    *lazyText // what it says as a lower bound
+	upper    *lazyText // what it says as an upper bound
+	general  *lazyText // what it says in a conflict
+}
+
+// lazyText is a text made on first use; the windows of three tiers often
+// show the same step.
+type lazyText struct {
+	make func() string
+	text string
+	done bool
+}
+
+func (t *lazyText) String() string {
+	if !t.done {
+		t.text, t.done, t.make = t.make(), true, nil
+	}
+	return t.text
 }
 
 // same makes a link whose three texts are one.
 func same(evidence string, text func() string) link {
-	return link{evidence: evidence, lower: text, upper: text, general: text}
+	t := &lazyText{make: text}
+	return link{evidence: evidence, lower: t, upper: t, general: t}
 }
 
 // built is one network built from the case, and how to read it back.
@@ -578,7 +593,8 @@ func (w window) same(o window) bool {
 // bounds (a disjunction for alternatives), records into bounds, orders into
 // differences.
 func (a *analysis) build(ov override) (*built, error) {
-	b := &built{net: network.New(), links: map[string]link{}}
+	b := &built{net: network.New(), links: make(map[string]link, 3*(len(a.findings)+len(a.c.Records))),
+		evidence: make([]Evidence, 0, len(a.findings)+len(a.c.Records))}
 	for _, e := range a.events {
 		b.vars = append(b.vars, b.net.AddVar(e.ID))
 	}
@@ -605,11 +621,11 @@ func (a *analysis) build(ov override) (*built, error) {
 				}
 				gap += " at most " + durationText(*o.AtMost)
 			}
-			text := fmt.Sprintf("%s comes after %s", e.ID, o.Event)
+			text := e.ID + " comes after " + o.Event
 			if gap != "" {
 				text += "," + gap + " later"
 			}
-			text += fmt.Sprintf(" [%s]", o.Strength)
+			text += " [" + o.Strength.String() + "]"
 			if o.Note != "" {
 				text += " (" + o.Note + ")"
 			}
@@ -637,6 +653,11 @@ func (a *analysis) build(ov override) (*built, error) {
 		}
 		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: strings.Join(names, " or "),
 			Method: f.Method, Sample: f.Sample, Confidence: string(f.Confidence)}
+		nb := 0
+		for _, items := range perMat {
+			nb += len(items)
+		}
+		row.Bounds = make([]EvidenceBound, 0, nb)
 		for i, items := range perMat {
 			for _, it := range items {
 				side := "not before"
@@ -659,7 +680,7 @@ func (a *analysis) build(ov override) (*built, error) {
 					id := f.ID + "/after@" + t.String()
 					fid, conf, lo, by := f.ID, f.Confidence, w.lo, w.loBy
 					text := func() string {
-						return fmt.Sprintf("%s found (%s): not before %s, from %s", fid, conf, dayText(lo, false), a.itemText(by))
+						return fid + " found (" + string(conf) + "): not before " + dayText(lo, false) + ", from " + a.itemText(by)
 					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: int64(w.lo), Hi: network.Inf}}}
 					if err := add(c, same(f.ID, text)); err != nil {
@@ -671,7 +692,7 @@ func (a *analysis) build(ov override) (*built, error) {
 					id := f.ID + "/before@" + t.String()
 					fid, conf, hi, by := f.ID, f.Confidence, w.hi, w.hiBy
 					text := func() string {
-						return fmt.Sprintf("%s found (%s): not after %s, from %s", fid, conf, dayText(hi, true), a.itemText(by))
+						return fid + " found (" + string(conf) + "): not after " + dayText(hi, true) + ", from " + a.itemText(by)
 					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: -network.Inf, Hi: int64(w.hi)}}}
 					if err := add(c, same(f.ID, text)); err != nil {
@@ -734,7 +755,7 @@ func (a *analysis) build(ov override) (*built, error) {
 						parts = append(parts, keptNames[i]+": no lower bound")
 					}
 				}
-				return fmt.Sprintf("%s found (%s), one of: %s", fid, conf, strings.Join(parts, "; "))
+				return fid + " found (" + string(conf) + "), one of: " + strings.Join(parts, "; ")
 			}
 			upText := func() string {
 				var parts []string
@@ -746,10 +767,11 @@ func (a *analysis) build(ov override) (*built, error) {
 				if len(parts) == 0 {
 					return lowText()
 				}
-				return fmt.Sprintf("%s found (%s), one of: %s", fid, conf, strings.Join(parts, "; "))
+				return fid + " found (" + string(conf) + "), one of: " + strings.Join(parts, "; ")
 			}
 			c := network.Constraint{ID: id, Tier: t, Alts: alts}
-			if err := add(c, link{evidence: f.ID, lower: lowText, upper: upText, general: lowText}); err != nil {
+			low := &lazyText{make: lowText}
+			if err := add(c, link{evidence: f.ID, lower: low, upper: &lazyText{make: upText}, general: low}); err != nil {
 				return nil, err
 			}
 		}
@@ -813,7 +835,7 @@ func (a *analysis) build(ov override) (*built, error) {
 		if r.Source != "" {
 			src = " (" + r.Source + ")"
 		}
-		general := fmt.Sprintf("%s: record, %s%s [%s]", r.ID, what, src, t)
+		general := r.ID + ": record, " + what + src + " [" + t.String() + "]"
 		if r.Note != "" {
 			general += " (" + r.Note + ")"
 		}
@@ -840,13 +862,12 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 		res.Events[i] = EventResult{ID: e.ID, Label: e.Label, Place: a.placeOf(e)}
 	}
 	reported := map[string]bool{}
-	var sols [3]*network.Result
+	sols, err := b.net.SolveTiers(ctx, network.Options{MaxConflicts: opt.MaxConflicts})
+	if err != nil {
+		return nil, err
+	}
 	for _, t := range tiers() {
-		sol, err := b.net.Solve(ctx, t, network.Options{MaxConflicts: opt.MaxConflicts})
-		if err != nil {
-			return nil, fmt.Errorf("solving the %s tier: %w", t, err)
-		}
-		sols[t] = sol
+		sol := sols[t]
 		res.Consistent[t] = sol.Consistent
 		res.ConflictsComplete[t] = true
 		if !sol.Consistent {
@@ -882,17 +903,21 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 }
 
 func (a *analysis) sources(rows []Evidence) []SourceRef {
-	seen := map[string]bool{}
 	var out []SourceRef
 	for _, r := range rows {
 		if r.Kind != "finding" {
 			continue
 		}
+	bounds:
 		for _, b := range r.Bounds {
-			if b.Source == "" || seen[b.Source] {
+			if b.Source == "" {
 				continue
 			}
-			seen[b.Source] = true
+			for _, o := range out { // a handful: a scan beats a map
+				if o.Key == b.Source {
+					continue bounds
+				}
+			}
 			ref := SourceRef{Key: b.Source}
 			if s, ok := a.ds.Source(b.Source); ok {
 				ref.Cite, ref.URL = s.Cite, s.URL
@@ -900,7 +925,7 @@ func (a *analysis) sources(rows []Evidence) []SourceRef {
 			out = append(out, ref)
 		}
 	}
-	sort.Slice(out, func(i, j int) bool { return out[i].Key < out[j].Key })
+	slices.SortFunc(out, func(x, y SourceRef) int { return strings.Compare(x.Key, y.Key) })
 	return out
 }
 
@@ -946,7 +971,7 @@ func (b *built) bound(nb network.Bound, upper bool) Bound {
 		if upper {
 			text = l.upper
 		}
-		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text()})
+		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text.String()})
 	}
 	return out
 }
@@ -962,7 +987,7 @@ func (b *built) explainSet(ids []string) ([]string, []Step) {
 		if !ok {
 			continue
 		}
-		steps = append(steps, Step{Evidence: l.evidence, Text: l.general()})
+		steps = append(steps, Step{Evidence: l.evidence, Text: l.general.String()})
 		if !seen[l.evidence] {
 			seen[l.evidence] = true
 			evs = append(evs, l.evidence)

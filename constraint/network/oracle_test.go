@@ -4,11 +4,12 @@ import (
 	"context"
 	"fmt"
 	"math/rand/v2"
+	"reflect"
 	"slices"
 	"testing"
 )
 
-// TestBruteForce compares Solve with an exhaustive enumeration on many
+// TestBruteForce compares Solve (and SolveTiers) with an exhaustive enumeration on many
 // small random networks with disjunctions: consistency, exact domains,
 // earliest and latest, the explanations of simple networks, minimal
 // conflicts (and all of them when the list claims to be complete), and
@@ -27,11 +28,18 @@ func TestBruteForce(t *testing.T) {
 	for i := 0; i < 600; i++ {
 		sp := specs[i%len(specs)]
 		n := genNetwork(rng, sp)
+		all, err := n.SolveTiers(ctx, Options{})
+		if err != nil {
+			t.Fatalf("net%03d: SolveTiers: %v", i, err)
+		}
 		for _, tier := range []Tier{Hard, Firm, Soft} {
 			name := fmt.Sprintf("net%03d/%s", i, tier)
 			res, err := n.Solve(ctx, tier, Options{})
 			if err != nil {
 				t.Fatalf("%s: %v", name, err)
+			}
+			if !reflect.DeepEqual(all[tier], res) {
+				t.Errorf("%s: SolveTiers gives %+v, Solve %+v", name, all[tier], res)
 			}
 			var cs []Constraint
 			for _, c := range n.Constraints() {

@@ -11,11 +11,32 @@ import (
 // tier. It fails only when ctx is done or a search exceeds
 // [Options.MaxNodes]; an inconsistent network is a Result, not an error.
 func (n *Network) Solve(ctx context.Context, tier Tier, opt Options) (*Result, error) {
+	return n.solveWith(ctx, tier, opt, n.ranks())
+}
+
+// SolveTiers solves the network at each of the tiers Hard, Firm and Soft,
+// as three calls of [Network.Solve] would, sharing the work they have in
+// common; the results are indexed by tier. An error names the tier.
+func (n *Network) SolveTiers(ctx context.Context, opt Options) ([3]*Result, error) {
+	var out [3]*Result
+	rank := n.ranks()
+	for t := Hard; t <= Soft; t++ {
+		r, err := n.solveWith(ctx, t, opt, rank)
+		if err != nil {
+			return [3]*Result{}, fmt.Errorf("solving the %s tier: %w", t, err)
+		}
+		out[t] = r
+	}
+	return out, nil
+}
+
+func (n *Network) solveWith(ctx context.Context, tier Tier, opt Options, rank []int32) (*Result, error) {
 	if err := ctx.Err(); err != nil {
 		return nil, fmt.Errorf("solve: %w", err)
 	}
-	s := n.newSolver(ctx, opt)
-	var active []int32
+	s := &solver{n: n, ctx: ctx, opt: opt, rank: rank}
+	s.g.rank = rank
+	active := make([]int32, 0, len(n.cons))
 	for i, c := range n.cons {
 		if c.Tier <= tier {
 			active = append(active, int32(i))
@@ -49,6 +70,15 @@ type solver struct {
 }
 
 func (n *Network) newSolver(ctx context.Context, opt Options) *solver {
+	rank := n.ranks()
+	s := &solver{n: n, ctx: ctx, opt: opt, rank: rank}
+	s.g.rank = rank
+	return s
+}
+
+// ranks maps each constraint index to the rank of its id in sorted order,
+// which breaks ties the same way whatever order constraints were added in.
+func (n *Network) ranks() []int32 {
 	order := make([]int32, len(n.cons))
 	for i := range order {
 		order[i] = int32(i)
@@ -58,9 +88,7 @@ func (n *Network) newSolver(ctx context.Context, opt Options) *solver {
 	for r, i := range order {
 		rank[i] = int32(r)
 	}
-	s := &solver{n: n, ctx: ctx, opt: opt, rank: rank}
-	s.g.rank = rank
-	return s
+	return rank
 }
 
 // piece is a run of a unary interval set with the constraints that set
@@ -126,15 +154,28 @@ func unaryOf(c *Constraint) (Var, bool) {
 	return v, true
 }
 
+// unaryPiece is the alternative a of unary constraint ci as a run of the
+// variable's values; an infinite side has no tag (-1).
+func unaryPiece(a Alt, ci int32) piece {
+	lo, hi := a.Lo, a.Hi
+	if a.To == Zero { // lo <= 0 − v <= hi
+		lo, hi = neg(a.Hi), neg(a.Lo)
+	}
+	p := piece{lo, hi, ci, ci}
+	if p.lo <= -Inf {
+		p.loTag = -1
+	}
+	if p.hi >= Inf {
+		p.hiTag = -1
+	}
+	return p
+}
+
 // unarySet is the union of the alternatives of a unary constraint on v.
 func unarySet(c *Constraint, ci int32) []piece {
 	ps := make([]piece, 0, len(c.Alts))
 	for _, a := range c.Alts {
-		lo, hi := a.Lo, a.Hi
-		if a.To == Zero { // lo <= 0 − v <= hi
-			lo, hi = neg(a.Hi), neg(a.Lo)
-		}
-		ps = append(ps, piece{lo, hi, ci, ci})
+		ps = append(ps, unaryPiece(a, ci))
 	}
 	slices.SortFunc(ps, func(a, b piece) int { return cmp64(a.lo, b.lo) })
 	out := ps[:0]
@@ -182,7 +223,7 @@ func (s *solver) intersect(a, b []piece) []piece {
 	if a == nil {
 		return b
 	}
-	out := []piece{}
+	out := make([]piece, 0, len(a)+len(b))
 	i, j := 0, 0
 	for i < len(a) && j < len(b) {
 		p, q := a[i], b[j]
@@ -206,6 +247,31 @@ func (s *solver) intersect(a, b []piece) []piece {
 	return out
 }
 
+// clip intersects the set a with the single alternative of the unary
+// constraint c (index ci) in place, exactly as intersect(a, unarySet(c, ci))
+// would: a is the caller's to change.
+func (s *solver) clip(a []piece, c *Constraint, ci int32) []piece {
+	q := unaryPiece(c.Alts[0], ci)
+	out := a[:0]
+	for _, p := range a {
+		lo, loTag := p.lo, p.loTag
+		if q.lo > lo || (q.lo == lo && s.less(q.loTag, loTag)) {
+			lo, loTag = q.lo, q.loTag
+		}
+		hi, hiTag := p.hi, p.hiTag
+		if q.hi < hi || (q.hi == hi && s.less(q.hiTag, hiTag)) {
+			hi, hiTag = q.hi, q.hiTag
+		}
+		if lo <= hi {
+			out = append(out, piece{lo, hi, loTag, hiTag})
+		}
+		if p.hi >= q.hi {
+			break
+		}
+	}
+	return out
+}
+
 // less orders constraint tags by id; -1 (no constraint) sorts last.
 func (s *solver) less(a, b int32) bool {
 	if a < 0 || b < 0 {
@@ -219,6 +285,33 @@ func (s *solver) prepare(active []int32) *prepared {
 	n := s.n
 	nv := len(n.names)
 	p := &prepared{sets: make([][]piece, nv), empty: -1}
+	var links []int32
+	for _, ci := range active {
+		c := &n.cons[ci]
+		v, ok := unaryOf(c)
+		if !ok {
+			links = append(links, ci)
+			continue
+		}
+		if len(c.Alts) == 1 && p.sets[v] != nil {
+			p.sets[v] = s.clip(p.sets[v], c, ci)
+		} else {
+			p.sets[v] = s.intersect(p.sets[v], unarySet(c, ci))
+		}
+		if len(p.sets[v]) == 0 && p.empty < 0 {
+			p.empty = int(v)
+		}
+	}
+	if p.empty >= 0 {
+		return p
+	}
+	if len(links) == 0 { // every variable stands alone
+		p.isolated = make([]Var, 0, nv-1)
+		for v := 1; v < nv; v++ {
+			p.isolated = append(p.isolated, Var(v))
+		}
+		return p
+	}
 	parent := make([]int32, nv)
 	for i := range parent {
 		parent[i] = int32(i)
@@ -239,19 +332,9 @@ func (s *solver) prepare(active []int32) *prepared {
 			parent[max(ra, rb)] = min(ra, rb)
 		}
 	}
-	var links []int32
-	for _, ci := range active {
-		c := &n.cons[ci]
-		if v, ok := unaryOf(c); ok {
-			p.sets[v] = s.intersect(p.sets[v], unarySet(c, ci))
-			if len(p.sets[v]) == 0 && p.empty < 0 {
-				p.empty = int(v)
-			}
-			continue
-		}
-		links = append(links, ci)
+	for _, ci := range links {
 		first := Var(-1)
-		for _, a := range c.Alts {
+		for _, a := range n.cons[ci].Alts {
 			for _, v := range [2]Var{a.From, a.To} {
 				if v == Zero {
 					continue
@@ -262,9 +345,6 @@ func (s *solver) prepare(active []int32) *prepared {
 				join(first, v)
 			}
 		}
-	}
-	if p.empty >= 0 {
-		return p
 	}
 	linked := make([]bool, nv)
 	for _, ci := range links {
