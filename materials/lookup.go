@@ -2,6 +2,7 @@ package materials
 
 import (
 	"cmp"
+	"math/bits"
 	"slices"
 	"strings"
 	"unicode"
@@ -18,6 +19,19 @@ type index struct {
 type nameRef struct {
 	key, shown string
 	runes      []rune // key, as runes for the edit distance
+	mask       uint64 // runeMask(runes)
+}
+
+// runeMask sets bit r%64 for every rune r of rs. A key's bits missing from
+// a name's mask are runes of the key that the name lacks, each costing at
+// least one edit: a lower bound on the edit distance to the name and to
+// any start of it.
+func runeMask(rs []rune) uint64 {
+	var m uint64
+	for _, r := range rs {
+		m |= 1 << (uint32(r) % 64)
+	}
+	return m
 }
 
 // buildIndex indexes ms; names, when not nil, already maps every folded id
@@ -56,7 +70,7 @@ func buildIndex(ms []*Material, names map[string]*Material) *index {
 			if _, ok := ix.names[k]; !ok && fill {
 				ix.names[k] = m
 			}
-			ix.all = append(ix.all, nameRef{k, n, []rune(k)})
+			ix.all = append(ix.all, nameRef{k, n, []rune(k), runeMask([]rune(k))})
 		}
 		if ci := m.ColourIndex; ci != nil {
 			addMulti(ix.ci, fold(ci.Name), m)
@@ -117,8 +131,12 @@ func (ix *index) nearest(key string, n int) []string {
 	}
 	kr := []rune(key)
 	limit := max(2, len(kr)/3)
+	kmask := runeMask(kr)
 	best := map[string]cand{}
 	for _, r := range ix.all {
+		if bits.OnesCount64(kmask&^r.mask) > limit {
+			continue // too many of the key's letters are missing
+		}
 		dist := levenshteinWithin(kr, r.runes, limit)
 		if len(key) >= 4 && dist > 1 {
 			if strings.Contains(r.key, key) {

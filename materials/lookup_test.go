@@ -1,6 +1,7 @@
 package materials
 
 import (
+	"cmp"
 	"errors"
 	"math/rand/v2"
 	"slices"
@@ -310,6 +311,82 @@ func TestSchemaKeysFit(t *testing.T) {
 	for _, keys := range [][]string{k.top, k.source, k.material, k.colourIndex, k.milestone} {
 		if len(keys) > len(fs.f) {
 			t.Errorf("%d keys %q do not fit a field set of %d", len(keys), keys, len(fs.f))
+		}
+	}
+}
+
+// nearestPlain is the suggestion rule spelt out with the plain edit
+// distance and no shortcuts: the reference for index.nearest.
+func nearestPlain(ix *index, key string, n int) []string {
+	kr := []rune(key)
+	limit := max(2, len(kr)/3)
+	type cand struct {
+		shown string
+		dist  int
+	}
+	best := map[string]cand{}
+	for _, r := range ix.all {
+		dist := plainLevenshtein(key, r.key)
+		if len(key) >= 4 {
+			if strings.Contains(r.key, key) {
+				dist = min(dist, 1)
+			} else if rk := []rune(r.key); len(rk) > len(kr)+1 {
+				for n := len(kr) - 1; n <= len(kr)+1; n++ {
+					dist = min(dist, plainLevenshtein(key, string(rk[:n]))+1)
+				}
+			}
+		}
+		if dist > limit {
+			continue
+		}
+		m := ix.names[r.key]
+		if c, ok := best[m.ID]; !ok || dist < c.dist {
+			best[m.ID] = cand{r.shown, dist}
+		}
+	}
+	var cs []cand
+	for _, c := range best {
+		cs = append(cs, c)
+	}
+	slices.SortFunc(cs, func(a, b cand) int { return cmp.Or(cmp.Compare(a.dist, b.dist), cmp.Compare(a.shown, b.shown)) })
+	out := []string{}
+	for _, c := range cs {
+		if len(out) == n {
+			break
+		}
+		out = append(out, c.shown)
+	}
+	return out
+}
+
+// The pruned suggestion search (rune masks, bounded distances) suggests
+// exactly what the plain rule does, for 600 slips of spelling of the
+// built-in names: a letter dropped, doubled, swapped or replaced.
+func TestNearestMatchesPlainRule(t *testing.T) {
+	d := builtinOrFatal(t)
+	ix := d.index
+	rng := rand.New(rand.NewPCG(3, 4))
+	for i := range 600 {
+		rs := []rune(ix.all[rng.IntN(len(ix.all))].key)
+		for range 1 + rng.IntN(3) {
+			if len(rs) < 2 {
+				break
+			}
+			j := rng.IntN(len(rs) - 1)
+			switch rng.IntN(4) {
+			case 0:
+				rs = append(rs[:j:j], rs[j+1:]...)
+			case 1:
+				rs = append(rs[:j+1:j+1], rs[j:]...)
+			case 2:
+				rs[j], rs[j+1] = rs[j+1], rs[j]
+			default:
+				rs[j] = []rune("aeiouxyz")[rng.IntN(8)]
+			}
+		}
+		key := string(rs)
+		if got, want := ix.nearest(key, 3), nearestPlain(ix, key, 3); !slices.Equal(got, want) {
+			t.Fatalf("slip %d %q: nearest = %q, plain rule = %q", i, key, got, want)
 		}
 	}
 }

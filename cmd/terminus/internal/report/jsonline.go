@@ -317,6 +317,17 @@ func appendOmitEmpty(b []byte, key, s string) []byte {
 
 const hexDigits = "0123456789abcdef"
 
+// plain8 reports whether none of the eight bytes of w needs escaping or
+// decoding: each is at least 0x20, below 0x80, and neither '"' nor '\\'.
+// (The classic "has a zero byte" test, (x - 0x01…) & ^x & 0x80…, applied
+// to w ^ '"'…, to w ^ '\\'…, and to w - 0x20… for the small bytes.)
+func plain8(w uint64) bool {
+	const ones, highs = 0x0101010101010101, 0x8080808080808080
+	hasZero := func(x uint64) uint64 { return (x - ones) & ^x & highs }
+	small := (w - 0x20*ones) & ^w & highs
+	return (small | hasZero(w^('"'*ones)) | hasZero(w^('\\'*ones)) | w&highs) == 0
+}
+
 // AppendJSONString appends s as a JSON string, escaped as encoding/json
 // does with HTML escaping off: quote, backslash and the control characters
 // escaped (\b \f \n \r \t by name, the rest as \u00XX), invalid UTF-8 as
@@ -325,6 +336,15 @@ func AppendJSONString(b []byte, s string) []byte {
 	b = append(b, '"')
 	start := 0
 	for i := 0; i < len(s); {
+		// Skip eight plain bytes at a time: none below 0x20, none a quote
+		// or a backslash, none with the high bit set.
+		for i+8 <= len(s) && plain8(uint64(s[i])|uint64(s[i+1])<<8|uint64(s[i+2])<<16|uint64(s[i+3])<<24|
+			uint64(s[i+4])<<32|uint64(s[i+5])<<40|uint64(s[i+6])<<48|uint64(s[i+7])<<56) {
+			i += 8
+		}
+		if i >= len(s) {
+			break
+		}
 		c := s[i]
 		if c < utf8.RuneSelf {
 			if c >= 0x20 && c != '"' && c != '\\' {

@@ -4,6 +4,7 @@ import (
 	"bufio"
 	"io"
 	"strconv"
+	"sync"
 
 	"terminus/cmd/terminus/internal/report"
 )
@@ -21,6 +22,9 @@ import (
 type JSONLWriter struct {
 	w    *bufio.Writer
 	free []string
+	// bufs holds the encoding buffers of records already written, for
+	// Render to reuse (a record is a few kilobytes; a survey, millions).
+	bufs sync.Pool
 }
 
 // NewJSONLWriter returns a writer to w; free names the free columns.
@@ -32,7 +36,12 @@ func appendString(b []byte, s string) []byte { return report.AppendJSONString(b,
 
 // Render encodes the record.
 func (j *JSONLWriter) Render(o *Outcome) error {
-	b := make([]byte, 0, 8<<10)
+	var b []byte
+	if p, ok := j.bufs.Get().(*[]byte); ok {
+		b = (*p)[:0]
+	} else {
+		b = make([]byte, 0, 8<<10)
+	}
 	b = append(b, `{"id":`...)
 	b = appendString(b, o.ID)
 	b = append(b, `,"file":`...)
@@ -70,9 +79,14 @@ func (j *JSONLWriter) Render(o *Outcome) error {
 	return nil
 }
 
-// Write writes the encoded record.
+// Write writes the encoded record and keeps its buffer for reuse.
 func (j *JSONLWriter) Write(o *Outcome) error {
 	_, err := j.w.Write(o.Out)
+	if cap(o.Out) <= 256<<10 { // an outsized record's buffer goes to the collector
+		b := o.Out
+		j.bufs.Put(&b)
+	}
+	o.Out = nil
 	return err
 }
 
