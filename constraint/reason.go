@@ -20,6 +20,10 @@ type Options struct {
 	// NoSensitivity skips re-solving under the other claims of disagreeing
 	// sources.
 	NoSensitivity bool
+	// Memo, when not nil, shares work between the analyses of many cases
+	// against its dataset (see [Memo]); results are the same with or
+	// without it.
+	Memo *Memo
 }
 
 // Analyze checks a case against a materials dataset and returns the
@@ -294,6 +298,19 @@ type built struct {
 	noArrivalPlaces []string
 }
 
+// addNoArrival records that the material name has no arrival data at place.
+func (b *built) addNoArrival(place, name string) {
+	if b.noArrival == nil {
+		b.noArrival = map[string][]string{}
+	}
+	if !contains(b.noArrival[place], name) {
+		b.noArrival[place] = append(b.noArrival[place], name)
+		if !contains(b.noArrivalPlaces, place) {
+			b.noArrivalPlaces = append(b.noArrivalPlaces, place)
+		}
+	}
+}
+
 // arrivalNotes says, once per place, which materials have no arrival data.
 func (a *analysis) arrivalNotes(b *built) []string {
 	var out []string
@@ -346,10 +363,15 @@ type boundItem struct {
 	name  string               // the material's name
 	area  string               // the area of an arrival
 	allow date.Duration        // the stock allowance of an upper bound
+	txt   string               // itemText, when a memo has made it
+	iso   string               // day.ISO(), when a memo has made it
 }
 
 // text says where the bound comes from: "chrome yellow: made 1809 [key, documented]".
 func (a *analysis) itemText(it *boundItem) string {
+	if it.txt != "" {
+		return it.txt
+	}
 	what := string(it.ms.Kind)
 	if it.ms.Kind == materials.KindArrived {
 		what = "arrived in " + a.placeName(it.area)
@@ -485,15 +507,7 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		if area := a.ds.ArrivalArea(m, place); area != "" {
 			group(materials.KindArrived, area, network.Soft, false)
 		} else if b != nil {
-			if b.noArrival == nil {
-				b.noArrival = map[string][]string{}
-			}
-			if !contains(b.noArrival[place], name) {
-				b.noArrival[place] = append(b.noArrival[place], name)
-				if !contains(b.noArrivalPlaces, place) {
-					b.noArrivalPlaces = append(b.noArrivalPlaces, place)
-				}
-			}
+			b.addNoArrival(place, name)
 		}
 	}
 	group(materials.KindWithdrawn, "", network.Soft, true)
@@ -592,7 +606,7 @@ func (w window) same(o window) bool {
 // build translates the case into a network: findings into availability
 // bounds (a disjunction for alternatives), records into bounds, orders into
 // differences.
-func (a *analysis) build(ov override) (*built, error) {
+func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 	b := &built{net: network.New(), links: make(map[string]link, 3*(len(a.findings)+len(a.c.Records))),
 		evidence: make([]Evidence, 0, len(a.findings)+len(a.c.Records))}
 	for _, e := range a.events {
@@ -648,7 +662,11 @@ func (a *analysis) build(ov override) (*built, error) {
 		perMat := make([][]boundItem, len(f.mats))
 		var names []string
 		for i, m := range f.mats {
-			perMat[i] = a.materialBounds(m, place, cap, ov, b)
+			if memo != nil && ov == nil {
+				perMat[i] = a.memoBounds(memo, m, place, cap, b)
+			} else {
+				perMat[i] = a.materialBounds(m, place, cap, ov, b)
+			}
 			names = append(names, displayName(m))
 		}
 		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: strings.Join(names, " or "),
@@ -664,7 +682,11 @@ func (a *analysis) build(ov override) (*built, error) {
 				if it.upper {
 					side = "not after"
 				}
-				row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Day: it.day, Date: it.day.ISO(), Tier: it.tier,
+				iso := it.iso
+				if iso == "" {
+					iso = it.day.ISO()
+				}
+				row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Day: it.day, Date: iso, Tier: it.tier,
 					Milestone: string(it.ms.Kind), Material: f.mats[i].ID, MaterialName: names[i], Source: it.ms.Source})
 			}
 		}
@@ -849,7 +871,7 @@ func (a *analysis) build(ov override) (*built, error) {
 
 // run builds and solves the network at every tier and reads the result.
 func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, error) {
-	b, err := a.build(ov)
+	b, err := a.build(ov, a.memoFor(opt))
 	if err != nil {
 		return nil, err
 	}

@@ -132,6 +132,11 @@ func Run(ctx context.Context, inputs []*Input, w Writer, opt Options) (Counts, e
 	if fails == nil {
 		fails = defaultFails
 	}
+	if opt.Analyze.Memo == nil && opt.Dataset != nil {
+		// The records of a collection share their materials: work out each
+		// material's bounds at a place once for the whole survey.
+		opt.Analyze.Memo = constraint.NewMemo(opt.Dataset)
+	}
 	free := FreeColumns(inputs)
 	freeIdx := map[*Input][]int{}
 	for _, in := range inputs {
