@@ -19,9 +19,9 @@ import (
 	"fmt"
 	"math/rand/v2"
 	"os"
-	"strconv"
 	"strings"
 
+	"terminus/constraint/date"
 	"terminus/materials"
 )
 
@@ -122,20 +122,23 @@ func (g *gen) record(i int) record {
 		r.findings = append(r.findings, alts)
 		r.probable = append(r.probable, g.rng.IntN(100) < 10)
 	}
-	year := latest + int64(g.rng.IntN(260)) - 120
+	// Claims lie around the newest material's date, never after 2025;
+	// years are written as EDTF wants them (four digits, "0395", "-0564"),
+	// so that only the records meant to be malformed are.
+	year := min(latest+int64(g.rng.IntN(260))-120, 2025)
 	switch g.rng.IntN(3) {
 	case 0:
-		r.claim = strconv.FormatInt(year, 10)
+		r.claim = date.FormatYear(year)
 	case 1:
-		r.claim = fmt.Sprintf("%d/%d", year, year+9)
+		r.claim = date.FormatYear(year) + "/" + date.FormatYear(year+9)
 	default:
-		r.claim = "c. " + strconv.FormatInt(year, 10)
+		r.claim = "c. " + date.FormatYear(year)
 	}
 	if year < 1 {
-		r.claim = strconv.FormatInt(year, 10)
+		r.claim = date.FormatYear(year)
 	}
 	if g.rng.IntN(100) < 20 {
-		r.notAfter = strconv.FormatInt(year+int64(g.rng.IntN(60)), 10)
+		r.notAfter = date.FormatYear(year + int64(g.rng.IntN(60)))
 	}
 	return r
 }
