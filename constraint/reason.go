@@ -1164,11 +1164,14 @@ func (a *analysis) sensitivity(ctx context.Context, opt Options, res *Result) er
 			}
 		}
 		latest := d.Claims[len(d.Claims)-1]
-		kind := d.Kind
-		if d.Place != "" {
-			kind += " in " + a.placeName(d.Place)
+		what := "was " + d.Kind // made, sold, withdrawn
+		if d.Kind == string(materials.KindArrived) {
+			what = "arrived"
 		}
-		d.Text = fmt.Sprintf("Sources disagree on when %s was %s: %s. The bound uses %s, the most conservative.", d.Name, kind, strings.Join(d.Claims, ", "), d.Used)
+		if d.Place != "" {
+			what += " in " + a.placeName(d.Place)
+		}
+		d.Text = fmt.Sprintf("Sources disagree on when %s %s: %s. The bound uses %s, the most conservative.", d.Name, what, strings.Join(d.Claims, ", "), d.Used)
 		if len(changes) == 0 {
 			d.Text += fmt.Sprintf(" Under %s no verdict would change.", latest)
 		} else {

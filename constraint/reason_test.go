@@ -308,6 +308,17 @@ func TestDisagreementSensitivity(t *testing.T) {
 	if r.Disagreements[0].ChangesVerdict {
 		t.Errorf("1750: %s", r.Disagreements[0].Text)
 	}
+	// fixture teal arrived in NL in 1840 (fx-a) or 1850 (fx-b): the soft
+	// bound uses 1840; a claim of 1845 is consistent, doubtful under 1850.
+	r = analyze(t, "place: NL\nfindings:\n  - {id: f, material: fixture teal}\nclaims:\n  - {date: \"1845\"}\n")
+	wantWindow(t, r, "making", network.Soft, "1840-01-01", "")
+	if len(r.Disagreements) != 1 {
+		t.Fatalf("teal: disagreements = %+v, want one", r.Disagreements)
+	}
+	want := "Sources disagree on when fixture teal arrived in Netherlands (NL): 1840 (fx-a), 1850 (fx-b). The bound uses 1840 (fx-a), the most conservative. Under 1850 (fx-b) claim claim-1 would be doubtful."
+	if d := r.Disagreements[0]; d.Text != want || !d.ChangesVerdict {
+		t.Errorf("teal: disagreement text\n %q\nwant\n %q", d.Text, want)
+	}
 }
 
 // TestDendrochronology expresses the rule of thumb for oak panels (common
