@@ -918,6 +918,14 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 			res.Events[i].Windows[t] = w
 		}
 	}
+	for _, e := range res.Events {
+		// The soft window is the narrowest; when even it is open on both
+		// sides, no evidence speaks to the event, and "consistent" says
+		// only that nothing was found against a claim.
+		if w := e.Windows[network.Soft]; w != nil && !w.Earliest.Bounded && !w.Latest.Bounded {
+			res.Notes = append(res.Notes, "Nothing in the evidence bounds "+e.ID+" ("+e.Label+"): any date is consistent with it, which says nothing for or against a claim.")
+		}
+	}
 	a.judge(res)
 	res.Sources = a.sources(res.Evidence)
 	res.Disagreements = dedupeDisagreements(res.Disagreements)

@@ -429,3 +429,29 @@ date = "1820"
 		t.Errorf("error = %v, want line 5 unknown key", err)
 	}
 }
+
+// An event that no evidence bounds gets a note, so that "consistent" is
+// not read as support; an event bounded on one side only does not.
+func TestUnboundedEventNote(t *testing.T) {
+	const note = "Nothing in the evidence bounds making (making of the object)"
+	hasNote := func(r *Result) bool {
+		for _, n := range r.Notes {
+			if strings.HasPrefix(n, note) {
+				return true
+			}
+		}
+		return false
+	}
+	r := analyze(t, "claims:\n  - {date: \"1850\"}\n")
+	if r.Claims[0].Verdict != Consistent || !hasNote(r) {
+		t.Errorf("no evidence: verdict %s, notes %q; want consistent with the note", r.Claims[0].Verdict, r.Notes)
+	}
+	r = analyze(t, "findings:\n  - {id: f, material: fixture yellow}\nclaims:\n  - {date: \"1850\"}\n")
+	if hasNote(r) {
+		t.Errorf("a bounded event got the note: %q", r.Notes)
+	}
+	r = analyze(t, "records:\n  - {id: r, not_after: \"1900\"}\nclaims:\n  - {date: \"1850\"}\n")
+	if hasNote(r) {
+		t.Errorf("an event bounded above got the note: %q", r.Notes)
+	}
+}
