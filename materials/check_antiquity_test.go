@@ -86,6 +86,23 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"mosaic-gold", materials.KindMade, "", "02XX", "Wikipedia, Mosaic gold"},
 		// From memory, not read here: Harley-era handbook date for Naples yellow as a painter's pigment (Artists' Pigments vol. 1).
 		{"naples-yellow", materials.KindSold, "", "16XX", "Artists' Pigments vol. 1 (from memory)"},
+		// Phipps, Cochineal Red, Met Bulletin 67 (3), 2010, p. 40: the Manila galleons carried cochineal by the 1580s.
+		{"cochineal", materials.KindArrived, "PH", "158X", "Phipps 2010, p. 40"},
+		// Phipps 2010, p. 40: known to the Kangxi emperor by about 1700; shipped to China before the 1700s.
+		{"cochineal", materials.KindArrived, "CN", "1700~", "Phipps 2010, p. 40"},
+		// Phipps 2010, p. 40: in the trade of Siam and Cambodia by the time of the 1765 Canton loadings.
+		{"cochineal", materials.KindArrived, "TH", "1765", "Phipps 2010, p. 40"},
+		{"cochineal", materials.KindArrived, "KH", "1765", "Phipps 2010, p. 40"},
+		// Phipps 2010, p. 44: Persia importing American cochineal by the end of the 16th century.
+		{"cochineal", materials.KindArrived, "IR", "1600~", "Phipps 2010, p. 44"},
+		// Phipps 2010, p. 44: East India Company ships brought it to Turkey in the 17th and 18th centuries.
+		{"cochineal", materials.KindArrived, "TR", "16XX", "Phipps 2010, p. 44"},
+		// Phipps 2010, p. 45: shipped to Surat soon after the English factory of 1612.
+		{"cochineal", materials.KindArrived, "IN", "161X", "Phipps 2010, p. 45"},
+		// Phipps 2010, p. 45: by 1834 (Burnes) it had displaced the Bukhara insect dyes in the Punjab markets.
+		{"cochineal", materials.KindArrived, "034", "1834", "Phipps 2010, p. 45"},
+		// Kogou et al., Applied Physics A (2015), abstract: cochineal on Canton watercolours dated 1817-1831.
+		{"cochineal", materials.KindArrived, "CN", "1817/1831", "Kogou et al. 2015, abstract"},
 	}
 	checkSourceRows(t, d, antiquityFile, rows)
 }
