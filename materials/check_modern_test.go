@@ -105,6 +105,40 @@ func TestModernAgainstSources(t *testing.T) {
 		{"erasable-ballpoint-ink", materials.KindMade, "", "1979", "TIME, 12 February 1979"},
 		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, toluidine red 1905.
 		{"toluidine-red", materials.KindMade, "", "1905", "Herbst and Hunger 2004 (from memory)"},
+		// Bagchi, Private Investment in India 1900-1939 (1972), ch. 13, The industry up to 1924: Bally Paper Mills, one machine, 1870.
+		{"fourdrinier-machine-paper", materials.KindArrived, "IN", "1870", "Bagchi 1972, ch. 13"},
+		// chinaadvent.com, Tianzhang Recording Paper Factory, Origins: Shanghai Machine Paper Mill approved in 1882.
+		{"fourdrinier-machine-paper", materials.KindArrived, "CN", "1882", "chinaadvent.com, Tianzhang paper factory, Origins"},
+		// The China Mail, 1 August 1892, p. 3: the Aberdeen Paper Mills at work in Hong Kong.
+		{"fourdrinier-machine-paper", materials.KindArrived, "HK", "1892", "The China Mail, 1 August 1892, p. 3"},
+		// Kağıt Akademisi, "Türk Kağıt Endüstrisi" (2018), opening: a paper machine in Izmir in 1843.
+		{"fourdrinier-machine-paper", materials.KindArrived, "TR", "1843", "Kağıt Akademisi 2018"},
+		// Damlıbağ, OTAM 37 (2015), abstract: the Hamidiye paper factory in production in 1893.
+		{"fourdrinier-machine-paper", materials.KindArrived, "TR", "1893", "Damlıbağ 2015, abstract"},
+		// Technology in Australia 1788-1988, ch. 4 VIII Pulp and Paper, p. 245: machine mills at Liverpool and South Melbourne, 1868.
+		{"fourdrinier-machine-paper", materials.KindArrived, "AU", "1868", "Technology in Australia 1988, p. 245"},
+		// Same, p. 247: APPM's Burnie pulp mill made bleached eucalypt soda pulp from early 1939.
+		{"soda-pulp-paper", materials.KindArrived, "AU", "1939", "Technology in Australia 1988, p. 247"},
+		// The Hindu, 15 February 2021: Travancore Titanium Products began sulphate-route production in 1951.
+		{"titanium-white-anatase", materials.KindArrived, "IN", "1951", "The Hindu, 15 February 2021"},
+		// Nandini Consultancy Centre at chemarc.com, History of titanium dioxide units in India: anatase from 1950.
+		{"titanium-white-anatase", materials.KindArrived, "IN", "1950", "chemarc.com, Titanium dioxide industry in India"},
+		// tiniwindows.com, 13 May 2019: pigment-grade anatase trial production at Shanghai and Tianjin, 1962-63.
+		{"titanium-white-anatase", materials.KindArrived, "CN", "1962/1963", "tiniwindows.com, 13 May 2019"},
+		// Korea JoongAng Daily, 29 May 2013: the Monami 153, Korea's first ballpoint, May 1963.
+		{"ballpoint-paste-ink", materials.KindArrived, "KR", "1963-05", "Korea JoongAng Daily, 29 May 2013"},
+		// Korea JoongAng Daily, "Ballpoint pen was an instant sensation": ballpoints rare in Korea in 1962.
+		{"ballpoint-paste-ink", materials.KindArrived, "KR", "1962", "Korea JoongAng Daily, Ballpoint pen was an instant sensation"},
+		// Encyclopedia of Australian Science and Innovation, Masonite Corporation (Australia): first hardboard plant, 1938.
+		{"hardboard-masonite", materials.KindArrived, "AU", "1938", "EOAS, Masonite Corporation (Australia)"},
+		// Business Report (IOL), 24 July 2019: Masonite made hardboard at Estcourt from 1942.
+		{"hardboard-masonite", materials.KindArrived, "ZA", "1942", "Business Report, 24 July 2019"},
+		// Artist's Palette, 17 September 2021: Derivan, the first Australian maker of acrylic paints, from 1964.
+		{"acrylic-emulsion-paint", materials.KindArrived, "AU", "1964", "Artist's Palette, 17 September 2021"},
+		// Museums Victoria Collections, article 2648, Paint Preparation: alkyd enamels on sale from the late 1940s.
+		{"alkyd-paint", materials.KindArrived, "AU", "1946/1949", "Museums Victoria, Paint Preparation"},
+		// chromatopia.org, "Arylide" (2017), opening: the Hansa pigments discovered in 1909 (beside the from-memory row above).
+		{"hansa-yellow-g", materials.KindMade, "", "1909", "chromatopia.org, Arylide"},
 	}
 	checkSourceRows(t, d, modernFile, rows)
 }
