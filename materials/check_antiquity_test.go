@@ -103,6 +103,14 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"cochineal", materials.KindArrived, "034", "1834", "Phipps 2010, p. 45"},
 		// Kogou et al., Applied Physics A (2015), abstract: cochineal on Canton watercolours dated 1817-1831.
 		{"cochineal", materials.KindArrived, "CN", "1817/1831", "Kogou et al. 2015, abstract"},
+		// Colomban et al., Materials 14 (2021) 7434, abstract: European-recipe Naples yellow on a late Kangxi incense burner.
+		{"naples-yellow", materials.KindArrived, "CN", "1700/1722", "Colomban et al. 2021, abstract"},
+		// Colomban et al. 2021, abstract: smalt as the cobalt source of a Qianlong-mark ewer, third quarter of the 18th century.
+		{"smalt", materials.KindArrived, "CN", "1750/1775", "Colomban et al. 2021, abstract"},
+		// Seldes et al., JAIC 38 (1999), Conclusions: smalt in Pérez Holguín's Potosí workshop, late 17th and early 18th centuries.
+		{"smalt", materials.KindArrived, "BO", "1675/1725", "Seldes et al. 1999, Conclusions"},
+		// Wikipedia (Spanish), "Azul maya", history: Azul Habana of Cuban colonial murals, about 1750-1860.
+		{"maya-blue", materials.KindArrived, "CU", "1750~", "Wikipedia (es), Azul maya"},
 	}
 	checkSourceRows(t, d, antiquityFile, rows)
 }
