@@ -139,6 +139,12 @@ func TestModernAgainstSources(t *testing.T) {
 		{"alkyd-paint", materials.KindArrived, "AU", "1946/1949", "Museums Victoria, Paint Preparation"},
 		// chromatopia.org, "Arylide" (2017), opening: the Hansa pigments discovered in 1909 (beside the from-memory row above).
 		{"hansa-yellow-g", materials.KindMade, "", "1909", "chromatopia.org, Arylide"},
+		// Correio (Salvador), 6 February 2025: Bic's first Brazilian factory at Cajamar, 1956.
+		{"ballpoint-paste-ink", materials.KindArrived, "BR", "1956", "Correio, 6 February 2025"},
+		// Guia dos Curiosos, "Quem inventou a caneta Bic?": the Bic reached Brazil in 1961.
+		{"ballpoint-paste-ink", materials.KindArrived, "BR", "1961", "Guia dos Curiosos, caneta Bic"},
+		// buzeon.ru, paper production in Russia: Wistinghausen's ten-year privilege for paper machines expired in 1835.
+		{"fourdrinier-machine-paper", materials.KindArrived, "RU", "1825/1835", "buzeon.ru, paper in Russia and the USSR"},
 	}
 	checkSourceRows(t, d, modernFile, rows)
 }
