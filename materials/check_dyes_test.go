@@ -151,6 +151,14 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"rhodamine-b", materials.KindMade, "", "1887", "Colour Index (from memory)"},
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
+		// Byfield, TSA Symposium 1994, pp. 45-51, opening section: Yoruba dyers took up synthetic dyes from the 1930s.
+		{"synthetic-indigo", materials.KindArrived, "NG", "193X", "Byfield 1994, opening section"},
+		// National Geographic Indonesia, July 2012, on indigofera and batik: synthetic colour preferred from 1897 (uncertain).
+		{"synthetic-indigo", materials.KindArrived, "ID", "1897?", "National Geographic Indonesia 2012, indigofera and batik"},
+		// allchina.cn after the Shanghai Textile Industry Gazetteer, pt. 2, ch. 2, sec. 2: Indanthren 190 blue trial-dyed in 1930.
+		{"indanthrone", materials.KindArrived, "CN", "1930", "Shanghai Textile Industry Gazetteer via allchina.cn"},
+		// MAAS Sydney, record 85/1765, after Fletcher, Costume in Australia: aniline purples and fuchsias the rage in the 1860s.
+		{"fuchsine", materials.KindArrived, "AU", "186X", "MAAS 85/1765, statement of significance"},
 	}
 	checkSourceRows(t, d, dyesFile, rows)
 }
