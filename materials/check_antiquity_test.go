@@ -111,6 +111,13 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"smalt", materials.KindArrived, "BO", "1675/1725", "Seldes et al. 1999, Conclusions"},
 		// Wikipedia (Spanish), "Azul maya", history: Azul Habana of Cuban colonial murals, about 1750-1860.
 		{"maya-blue", materials.KindArrived, "CU", "1750~", "Wikipedia (es), Azul maya"},
+		// Yun and Chang, Journal of Conservation Science 32 (2016), abstract: smalt in Joseon portraits of the late 18th century.
+		{"smalt", materials.KindArrived, "KR", "1750/1799", "Yun and Chang 2016, abstract"},
+		// Seldes et al., JAIC 41 (2002), 3.1.1: Pisarro's copper resinate at Yavi; cardenillo varnish in 18th-century Cuzco.
+		{"copper-resinate", materials.KindArrived, "AR", "1667/1720", "Seldes et al. 2002, 1 and 3.1.1"},
+		{"copper-resinate", materials.KindArrived, "PE", "17XX", "Seldes et al. 2002, 3.1.1"},
+		// Gómez et al., e-Preservation Science 7 (2010), abstract: copper resinate on an 18th-century Jesuit mission sculpture.
+		{"copper-resinate", materials.KindArrived, "PY", "17XX", "Gómez et al. 2010, abstract"},
 	}
 	checkSourceRows(t, d, antiquityFile, rows)
 }
