@@ -145,6 +145,16 @@ func TestModernAgainstSources(t *testing.T) {
 		{"ballpoint-paste-ink", materials.KindArrived, "BR", "1961", "Guia dos Curiosos, caneta Bic"},
 		// buzeon.ru, paper production in Russia: Wistinghausen's ten-year privilege for paper machines expired in 1835.
 		{"fourdrinier-machine-paper", materials.KindArrived, "RU", "1825/1835", "buzeon.ru, paper in Russia and the USSR"},
+		// Kurnia, "Peresmian Pabrik Kertas Padalarang" (forumtbm.or.id), after De Preanger-bode: the mill working by mid-March 1923.
+		{"fourdrinier-machine-paper", materials.KindArrived, "ID", "1923-03", "Kurnia, Padalarang paper mill"},
+		// Korean Society of Wood Science and Technology, 50-year history, p. 140: the first paper mill at work in 1901.
+		{"fourdrinier-machine-paper", materials.KindArrived, "KR", "1901", "KSWST 50-year history, p. 140"},
+		// Samil Paper, origins of Korea's paper mills: Chosun Paper at Sinuiju, 1919.
+		{"fourdrinier-machine-paper", materials.KindArrived, "KR", "1919", "Samil Paper, origins of Korea's paper mills"},
+		// The Guardian (Nigeria), 9 August 2020: the first paper factory established in 1969.
+		{"fourdrinier-machine-paper", materials.KindArrived, "NG", "1969", "The Guardian (Nigeria), 9 August 2020"},
+		// My News on Point, 17 January 2021: the Jebba mill, commissioned 1969, made kraft paper.
+		{"kraft-pulp-paper", materials.KindArrived, "NG", "1969", "My News on Point, 17 January 2021"},
 	}
 	checkSourceRows(t, d, modernFile, rows)
 }
