@@ -114,6 +114,14 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"carbon-black", materials.KindMade, "", "1864", "Handbook of Texas, Carbon black industry"},
 		// Wikipedia, "Manganese violet", History: first documented production by Winsor & Newton in 1890.
 		{"manganese-violet", materials.KindSold, "", "1890", "Wikipedia, Manganese violet, History"},
+		// Eremin et al., Journal of Raman Spectroscopy 39 (2008), abstract: in 19th-century Thai manuscripts Prussian blue, then synthetic ultramarine, replaced indigo.
+		{"prussian-blue", materials.KindArrived, "TH", "18XX", "Eremin et al. 2008, abstract"},
+		{"synthetic-ultramarine", materials.KindArrived, "TH", "18XX", "Eremin et al. 2008, abstract"},
+		// Eremin et al. 2008, abstract: chrome yellow beside gamboge in one later 19th-century Thai manuscript.
+		{"chrome-yellow", materials.KindArrived, "TH", "1850/1899", "Eremin et al. 2008, abstract"},
+		// Wheeler, Burgio and Shulman, Journal of the Institute of Conservation 34 (2011), abstract: Prussian blue and chrome yellow on 19th-century Kalighat paintings.
+		{"prussian-blue", materials.KindArrived, "IN", "18XX", "Wheeler et al. 2011, abstract"},
+		{"chrome-yellow", materials.KindArrived, "IN", "18XX", "Wheeler et al. 2011, abstract"},
 	}
 	checkSourceRows(t, d, inorganicFile, rows)
 }
