@@ -153,6 +153,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
 		// Byfield, TSA Symposium 1994, pp. 45-51, opening section: Yoruba dyers took up synthetic dyes from the 1930s.
 		{"synthetic-indigo", materials.KindArrived, "NG", "193X", "Byfield 1994, opening section"},
+		// Zeng and Yan, Journal of Anshun University 2022 (5), opening summary: foreign indigo in Guizhou from the late Qing.
+		{"synthetic-indigo", materials.KindArrived, "CN", "1900/1911", "Zeng and Yan 2022, opening summary"},
 		// Floor, Studia Iranica 35 (2006), abstract: synthetic indigo in marked use in Iran after 1909.
 		{"synthetic-indigo", materials.KindArrived, "IR", "1909", "Floor 2006, abstract"},
 		// National Geographic Indonesia, July 2012, on indigofera and batik: synthetic colour preferred from 1897 (uncertain).
