@@ -13,7 +13,10 @@ import (
 // Case is what is known of one object: its events, the materials found,
 // the documented dates and the dates claimed for it.
 type Case struct {
-	File  string
+	File string
+	// ID names the object (an inventory or accession number); optional. A
+	// number is kept as written.
+	ID    string
 	Title string
 	// Place is where the object was made: an ISO 3166-1 alpha-2 code or a
 	// UN M49 area code. Empty: regional arrivals are not used.
@@ -122,7 +125,7 @@ type Claim struct {
 }
 
 var (
-	caseKeys    = []string{"title", "place", "circa", "stock_allowance", "events", "findings", "records", "claims"}
+	caseKeys    = []string{"id", "title", "place", "circa", "stock_allowance", "events", "findings", "records", "claims"}
 	eventKeys   = []string{"id", "label", "place", "after"}
 	orderKeys   = []string{"event", "at_least", "at_most", "id", "strength", "note"}
 	findingKeys = []string{"id", "material", "event", "confidence", "method", "sample", "note"}
@@ -137,6 +140,12 @@ func (d *decoder) caseFile(root *yaml.Node) (*Case, error) {
 		return nil, err
 	}
 	c := &Case{}
+	if v, ok := f["id"]; ok && !(v.value.Kind == yaml.ScalarNode && v.value.Tag == "!!null") {
+		if v.value.Kind != yaml.ScalarNode {
+			return nil, d.errAt(v.value, `write the id as text, e.g. id: "inv-1"`, "id: expected text or a number, found %s", kindName(v.value))
+		}
+		c.ID = v.value.Value
+	}
 	if v, ok := f["title"]; ok {
 		if c.Title, err = d.str(v.value, "title"); err != nil {
 			return nil, err

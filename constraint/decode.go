@@ -44,16 +44,19 @@ func (e *Error) Hint() string { return e.Suggest }
 // Pos is a place in a case file.
 type Pos struct{ Line, Column int }
 
-// ReadCaseFile reads a case file in YAML, JSON or TOML (by its extension;
-// ".toml" is TOML, anything else YAML, of which JSON is a subset).
+// ReadCaseFile reads a case file in YAML, JSON or TOML by its extension:
+// ".toml" is TOML, ".json" strict JSON (RFC 8259), anything else YAML.
 func ReadCaseFile(path string) (*Case, error) {
 	data, err := os.ReadFile(path)
 	if err != nil {
 		return nil, &Error{File: path, Msg: fmt.Sprintf("cannot read the case file: %v", errUnwrapPath(err))}
 	}
 	format := "yaml"
-	if strings.EqualFold(filepath.Ext(path), ".toml") {
+	switch ext := filepath.Ext(path); {
+	case strings.EqualFold(ext, ".toml"):
 		format = "toml"
+	case strings.EqualFold(ext, ".json"):
+		format = "json"
 	}
 	return ParseCase(path, data, format)
 }
@@ -77,7 +80,16 @@ func ParseCase(name string, data []byte, format string) (*Case, error) {
 			return nil, err
 		}
 		root = n
-	case "yaml", "json", "":
+	case "json":
+		n, err := jsonToNode(name, data)
+		if err != nil {
+			return nil, err
+		}
+		if n == nil {
+			return nil, &Error{File: name, Msg: "the case file is empty", Suggest: "run 'terminus init' for a starter case file"}
+		}
+		root = n
+	case "yaml", "":
 		var doc yaml.Node
 		dec := yaml.NewDecoder(bytes.NewReader(data))
 		if err := dec.Decode(&doc); err != nil {

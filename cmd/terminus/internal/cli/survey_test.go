@@ -76,7 +76,7 @@ func TestSurveyJSONLRecordsKeepTheirPlace(t *testing.T) {
 		// line 3 is blank: not a record
 		{"line-4", 4, "error", "collection.jsonl:4:61: finding finding-1: unknown material \"fixture yelow\""},
 		{"a-5", 5, "improbable", ""},
-		{"a-6", 6, "error", "collection.jsonl:6:48: not valid JSON"},
+		{"a-6", 6, "error", "collection.jsonl:6:49: not valid JSON: the text ends inside a string"},
 		{"a-7", 7, "doubtful", ""},
 		{"a-8", 8, "error", "collection.jsonl:8:29: case file: unknown key \"claimz\""},
 		{"a-9", 9, "no claim", ""},
