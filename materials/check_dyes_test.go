@@ -161,6 +161,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"synthetic-indigo", materials.KindArrived, "ID", "1897?", "National Geographic Indonesia 2012, indigofera and batik"},
 		// allchina.cn after the Shanghai Textile Industry Gazetteer, pt. 2, ch. 2, sec. 2: Indanthren 190 blue trial-dyed in 1930.
 		{"indanthrone", materials.KindArrived, "CN", "1930", "Shanghai Textile Industry Gazetteer via allchina.cn"},
+		// Williamson, Garland Magazine, 5 March 2019, opening section: the new dyes assumed to reach Australia in the 1870s.
+		{"mauveine", materials.KindArrived, "AU", "187X?", "Williamson 2019, Local colour"},
 		// MAAS Sydney, record 85/1765, after Fletcher, Costume in Australia: aniline purples and fuchsias the rage in the 1860s.
 		{"fuchsine", materials.KindArrived, "AU", "186X", "MAAS 85/1765, statement of significance"},
 	}
