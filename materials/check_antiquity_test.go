@@ -118,6 +118,8 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"copper-resinate", materials.KindArrived, "PE", "17XX", "Seldes et al. 2002, 3.1.1"},
 		// Gómez et al., e-Preservation Science 7 (2010), abstract: copper resinate on an 18th-century Jesuit mission sculpture.
 		{"copper-resinate", materials.KindArrived, "PY", "17XX", "Gómez et al. 2010, abstract"},
+		// Burgio et al., Studies in Conservation 52 (2007), abstract: copper resinate on a 17th-century Chinese Coromandel screen.
+		{"copper-resinate", materials.KindArrived, "CN", "16XX", "Burgio et al. 2007, abstract"},
 	}
 	checkSourceRows(t, d, antiquityFile, rows)
 }
