@@ -159,6 +159,13 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"synthetic-indigo", materials.KindArrived, "IR", "1909", "Floor 2006, abstract"},
 		// National Geographic Indonesia, July 2012, on indigofera and batik: synthetic colour preferred from 1897 (uncertain).
 		{"synthetic-indigo", materials.KindArrived, "ID", "1897?", "National Geographic Indonesia 2012, indigofera and batik"},
+		// BASF history, 130 years of BASF in China, Business Pioneers (1886-1924): Müller's indigo territory from 1904; Indanthren in China before 1914.
+		{"synthetic-indigo", materials.KindArrived, "ID", "1904-07/1914", "BASF, Business Pioneers in China"},
+		{"synthetic-indigo", materials.KindArrived, "MY", "1904-07/1914", "BASF, Business Pioneers in China"},
+		{"synthetic-indigo", materials.KindArrived, "SG", "1904-07/1914", "BASF, Business Pioneers in China"},
+		{"synthetic-indigo", materials.KindArrived, "PH", "1904-07/1914", "BASF, Business Pioneers in China"},
+		{"synthetic-indigo", materials.KindArrived, "VN", "1904-07/1914", "BASF, Business Pioneers in China"},
+		{"indanthrone", materials.KindArrived, "CN", "1911-10/1914", "BASF, Business Pioneers in China"},
 		// allchina.cn after the Shanghai Textile Industry Gazetteer, pt. 2, ch. 2, sec. 2: Indanthren 190 blue trial-dyed in 1930.
 		{"indanthrone", materials.KindArrived, "CN", "1930", "Shanghai Textile Industry Gazetteer via allchina.cn"},
 		// Williamson, Garland Magazine, 5 March 2019, opening section: the new dyes assumed to reach Australia in the 1870s.
