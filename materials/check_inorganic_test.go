@@ -122,6 +122,10 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Wheeler, Burgio and Shulman, Journal of the Institute of Conservation 34 (2011), abstract: Prussian blue and chrome yellow on 19th-century Kalighat paintings.
 		{"prussian-blue", materials.KindArrived, "IN", "18XX", "Wheeler et al. 2011, abstract"},
 		{"chrome-yellow", materials.KindArrived, "IN", "18XX", "Wheeler et al. 2011, abstract"},
+		// Marx, blue paints in Ethiopian church paintings, summary: synthetic ultramarine spread in the second half of the 19th century.
+		{"synthetic-ultramarine", materials.KindArrived, "ET", "1850/1899", "Marx, Ethiopian blues, summary"},
+		// Cutts et al., British Museum Technical Research Bulletin 4 (2010), summary: early synthetic ultramarine in a painting of after 1855.
+		{"synthetic-ultramarine", materials.KindArrived, "ET", "1855/1893", "Cutts et al. 2010, summary"},
 	}
 	checkSourceRows(t, d, inorganicFile, rows)
 }
