@@ -168,6 +168,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"indanthrone", materials.KindArrived, "CN", "1911-10/1914", "BASF, Business Pioneers in China"},
 		// allchina.cn after the Shanghai Textile Industry Gazetteer, pt. 2, ch. 2, sec. 2: Indanthren 190 blue trial-dyed in 1930.
 		{"indanthrone", materials.KindArrived, "CN", "1930", "Shanghai Textile Industry Gazetteer via allchina.cn"},
+		// Tamburini et al., Heritage 6 (2023), abstract: fuchsin in the mountings of two late-19th-century Korean screens.
+		{"fuchsine", materials.KindArrived, "KR", "1870/1899", "Tamburini et al. 2023, abstract"},
 		// Williamson, Garland Magazine, 5 March 2019, opening section: the new dyes assumed to reach Australia in the 1870s.
 		{"mauveine", materials.KindArrived, "AU", "187X?", "Williamson 2019, Local colour"},
 		// MAAS Sydney, record 85/1765, after Fletcher, Costume in Australia: aniline purples and fuchsias the rage in the 1860s.
