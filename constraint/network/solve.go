@@ -20,11 +20,64 @@ func (n *Network) Solve(ctx context.Context, tier Tier, opt Options) (*Result, e
 func (n *Network) SolveTiers(ctx context.Context, opt Options) ([3]*Result, error) {
 	var out [3]*Result
 	rank := n.ranks()
+	if n.allUnary() {
+		return n.solveUnaryTiers(ctx, opt, rank)
+	}
 	for t := Hard; t <= Soft; t++ {
 		r, err := n.solveWith(ctx, t, opt, rank)
 		if err != nil {
 			return [3]*Result{}, fmt.Errorf("solving the %s tier: %w", t, err)
 		}
+		out[t] = r
+	}
+	return out, nil
+}
+
+// allUnary reports whether every constraint bounds one variable: then
+// each variable is solved by the intersection of its sets alone.
+func (n *Network) allUnary() bool {
+	for i := range n.cons {
+		if _, ok := unaryOf(&n.cons[i]); !ok {
+			return false
+		}
+	}
+	return true
+}
+
+// solveUnaryTiers is SolveTiers for a network of unary constraints: each
+// tier's sets are the last tier's, intersected with the constraints of the
+// tier, which is what a fresh solve would compute (the intersection keeps
+// the same tie-breaks in any order, by the ids' ranks). An inconsistent
+// tier, and those after it, are solved afresh for their explanations.
+func (n *Network) solveUnaryTiers(ctx context.Context, opt Options, rank []int32) ([3]*Result, error) {
+	var out [3]*Result
+	s := &solver{n: n, ctx: ctx, opt: opt, rank: rank}
+	s.g.rank = rank
+	p := &prepared{sets: make([][]piece, len(n.names)), empty: -1, isolated: make([]Var, 0, len(n.names)-1)}
+	for v := 1; v < len(n.names); v++ {
+		p.isolated = append(p.isolated, Var(v))
+	}
+	for t := Hard; t <= Soft; t++ {
+		if err := ctx.Err(); err != nil {
+			return [3]*Result{}, fmt.Errorf("solving the %s tier: solve: %w", t, err)
+		}
+		if p.empty < 0 {
+			for ci := range n.cons {
+				if c := &n.cons[ci]; c.Tier == t {
+					s.addUnary(p, c, int32(ci))
+				}
+			}
+		}
+		if p.empty >= 0 {
+			r, err := n.solveWith(ctx, t, opt, rank)
+			if err != nil {
+				return [3]*Result{}, fmt.Errorf("solving the %s tier: %w", t, err)
+			}
+			out[t] = r
+			continue
+		}
+		r := &Result{Tier: t, Consistent: true}
+		s.isolatedResult(p, r)
 		out[t] = r
 	}
 	return out, nil
@@ -247,6 +300,20 @@ func (s *solver) intersect(a, b []piece) []piece {
 	return out
 }
 
+// addUnary intersects the set of the variable that the unary constraint
+// c (index ci) bounds with c, and notes the first variable left empty.
+func (s *solver) addUnary(p *prepared, c *Constraint, ci int32) {
+	v, _ := unaryOf(c)
+	if len(c.Alts) == 1 && p.sets[v] != nil {
+		p.sets[v] = s.clip(p.sets[v], c, ci)
+	} else {
+		p.sets[v] = s.intersect(p.sets[v], unarySet(c, ci))
+	}
+	if len(p.sets[v]) == 0 && p.empty < 0 {
+		p.empty = int(v)
+	}
+}
+
 // clip intersects the set a with the single alternative of the unary
 // constraint c (index ci) in place, exactly as intersect(a, unarySet(c, ci))
 // would: a is the caller's to change.
@@ -288,19 +355,11 @@ func (s *solver) prepare(active []int32) *prepared {
 	var links []int32
 	for _, ci := range active {
 		c := &n.cons[ci]
-		v, ok := unaryOf(c)
-		if !ok {
+		if _, ok := unaryOf(c); !ok {
 			links = append(links, ci)
 			continue
 		}
-		if len(c.Alts) == 1 && p.sets[v] != nil {
-			p.sets[v] = s.clip(p.sets[v], c, ci)
-		} else {
-			p.sets[v] = s.intersect(p.sets[v], unarySet(c, ci))
-		}
-		if len(p.sets[v]) == 0 && p.empty < 0 {
-			p.empty = int(v)
-		}
+		s.addUnary(p, c, ci)
 	}
 	if p.empty >= 0 {
 		return p
@@ -410,35 +469,56 @@ func (s *solver) prepare(active []int32) *prepared {
 	return p
 }
 
-// domains solves the active constraints into r. It returns false (and
-// perhaps the constraints of a negative cycle) when they are inconsistent.
-func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
-	n := s.n
-	nv := len(n.names)
-	p := s.prepare(active)
-	if p.empty >= 0 {
-		return false, nil, nil
-	}
+// isolatedResult allocates r's per-variable answers and fills in those of
+// the isolated variables (and of Zero) from their sets.
+func (s *solver) isolatedResult(p *prepared, r *Result) {
+	nv := len(s.n.names)
 	r.domains = make([]Set, nv)
 	r.earliest = make([]Bound, nv)
 	r.latest = make([]Bound, nv)
-	r.domains[0] = Set{{0, 0}}
+	// The isolated variables' sets and explanations share one backing
+	// array each (full slice expressions keep them apart).
+	total := 1
+	for _, v := range p.isolated {
+		total += max(1, len(p.sets[v]))
+	}
+	ivs := make([]Interval, 1, total)
+	r.domains[0] = ivs[0:1:1] // Zero is 0
+	ids := make([]string, 0, 2*len(p.isolated))
+	because := func(tag int32) []string {
+		if tag < 0 {
+			return nil
+		}
+		ids = append(ids, s.n.cons[tag].ID)
+		return ids[len(ids)-1 : len(ids) : len(ids)]
+	}
 	for _, v := range p.isolated {
 		set := p.sets[v]
+		start := len(ivs)
 		if set == nil {
-			r.domains[v] = Set{{-Inf, Inf}}
+			ivs = append(ivs, Interval{-Inf, Inf})
+			r.domains[v] = ivs[start:len(ivs):len(ivs)]
 			r.earliest[v] = Bound{Value: -Inf}
 			r.latest[v] = Bound{Value: Inf}
 			continue
 		}
-		d := make(Set, len(set))
-		for i, q := range set {
-			d[i] = Interval{q.lo, q.hi}
+		for _, q := range set {
+			ivs = append(ivs, Interval{q.lo, q.hi})
 		}
-		r.domains[v] = d
-		r.earliest[v] = Bound{Value: set[0].lo, Because: s.ids(set[0].loTag)}
-		r.latest[v] = Bound{Value: set[len(set)-1].hi, Because: s.ids(set[len(set)-1].hiTag)}
+		r.domains[v] = ivs[start:len(ivs):len(ivs)]
+		r.earliest[v] = Bound{Value: set[0].lo, Because: because(set[0].loTag)}
+		r.latest[v] = Bound{Value: set[len(set)-1].hi, Because: because(set[len(set)-1].hiTag)}
 	}
+}
+
+// domains solves the active constraints into r. It returns false (and
+// perhaps the constraints of a negative cycle) when they are inconsistent.
+func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
+	p := s.prepare(active)
+	if p.empty >= 0 {
+		return false, nil, nil
+	}
+	s.isolatedResult(p, r)
 	for _, pr := range p.problems {
 		sr := &search{solver: s, p: pr, record: true, arcs: make([]arc, 0, len(pr.base)+2*len(pr.choices)+4)}
 		sr.init()
