@@ -157,8 +157,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"synthetic-indigo", materials.KindArrived, "CN", "1900/1911", "Zeng and Yan 2022, opening summary"},
 		// Floor, Studia Iranica 35 (2006), abstract: synthetic indigo in marked use in Iran after 1909.
 		{"synthetic-indigo", materials.KindArrived, "IR", "1909", "Floor 2006, abstract"},
-		// National Geographic Indonesia, July 2012, on indigofera and batik: synthetic colour preferred from 1897 (uncertain).
-		{"synthetic-indigo", materials.KindArrived, "ID", "1897?", "National Geographic Indonesia 2012, indigofera and batik"},
+		// National Geographic Indonesia, on indigofera and batik (a July workshop; a blog copy of 2012): synthetic colour preferred from 1897 (uncertain).
+		{"synthetic-indigo", materials.KindArrived, "ID", "1897?", "National Geographic Indonesia, indigofera and batik"},
 		// BASF history, 130 years of BASF in China, Business Pioneers (1886-1924): Müller's indigo territory from 1904; Indanthren in China before 1914.
 		{"synthetic-indigo", materials.KindArrived, "ID", "1904-07/1914", "BASF, Business Pioneers in China"},
 		{"synthetic-indigo", materials.KindArrived, "MY", "1904-07/1914", "BASF, Business Pioneers in China"},
