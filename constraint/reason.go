@@ -287,7 +287,7 @@ func same(evidence string, text func() string) link {
 type built struct {
 	net   *network.Network
 	vars  []network.Var
-	links map[string]link
+	links []link // by the network's index of each constraint
 	// evidence rows, in case order
 	evidence []Evidence
 	// disagreements found while building
@@ -296,6 +296,15 @@ type built struct {
 	// noArrival lists, per place, the materials without arrival data there.
 	noArrival       map[string][]string
 	noArrivalPlaces []string
+}
+
+// link returns the link of the network constraint id.
+func (b *built) link(id string) (link, bool) {
+	i, ok := b.net.Index(id)
+	if !ok || i >= len(b.links) {
+		return link{}, false
+	}
+	return b.links[i], true
 }
 
 // addNoArrival records that the material name has no arrival data at place.
@@ -607,7 +616,7 @@ func (w window) same(o window) bool {
 // bounds (a disjunction for alternatives), records into bounds, orders into
 // differences.
 func (a *analysis) build(ov override, memo *Memo) (*built, error) {
-	b := &built{net: network.New(), links: make(map[string]link, 3*(len(a.findings)+len(a.c.Records))),
+	b := &built{net: network.New(), links: make([]link, 0, 3*(len(a.findings)+len(a.c.Records))),
 		evidence: make([]Evidence, 0, len(a.findings)+len(a.c.Records))}
 	for _, e := range a.events {
 		b.vars = append(b.vars, b.net.AddVar(e.ID))
@@ -616,7 +625,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		if err := b.net.Add(c); err != nil {
 			return fmt.Errorf("building the network for %s: %w", l.evidence, err)
 		}
-		b.links[c.ID] = l
+		b.links = append(b.links, l) // in the network's order of constraints
 		return nil
 	}
 	// Orders.
@@ -990,7 +999,7 @@ func (b *built) bound(nb network.Bound, upper bool) Bound {
 		out.Day, out.Bounded = date.Day(nb.Value), true
 	}
 	for _, id := range nb.Because {
-		l, ok := b.links[id]
+		l, ok := b.link(id)
 		if !ok {
 			continue
 		}
@@ -1013,7 +1022,7 @@ func (b *built) explainSet(ids []string) ([]string, []Step) {
 	var evs []string
 	var steps []Step
 	for _, id := range ids {
-		l, ok := b.links[id]
+		l, ok := b.link(id)
 		if !ok {
 			continue
 		}

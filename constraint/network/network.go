@@ -184,6 +184,7 @@ type Network struct {
 	names []string
 	cons  []Constraint
 	ids   map[string]int
+	alts  []Alt // backing store of the constraints' alternatives
 }
 
 // New returns a network holding only the reference point [Zero].
@@ -205,6 +206,13 @@ func (n *Network) Name(v Var) string {
 		return ""
 	}
 	return n.names[v]
+}
+
+// Index returns the position of the constraint id in the order of Add
+// (and of [Network.Constraints]).
+func (n *Network) Index(id string) (int, bool) {
+	i, ok := n.ids[id]
+	return i, ok
 }
 
 // NumVars returns the number of variables, the reference point included.
@@ -249,7 +257,7 @@ func (e *ConstraintError) Unwrap() error { return ErrInvalid }
 // itself, Lo > Hi, a finite bound beyond ±[Limit], and a side that is
 // infinite the wrong way (Lo >= Inf or Hi <= -Inf). Sides beyond ±Inf are
 // stored as ±Inf.
-func (n *Network) Add(c Constraint) error {
+func (n *Network) Add(c Constraint) (err error) {
 	bad := func(alt int, format string, args ...any) error {
 		return &ConstraintError{ID: c.ID, Alt: alt, Msg: fmt.Sprintf(format, args...)}
 	}
@@ -268,7 +276,20 @@ func (n *Network) Add(c Constraint) error {
 	if len(n.names) > MaxVars {
 		return bad(-1, "network holds %d variables, more than %d", len(n.names), MaxVars)
 	}
-	alts := make([]Alt, len(c.Alts))
+	// The alternatives are copied into the network's own store (a few
+	// constraints share one allocation); a full slice expression keeps
+	// each constraint's apart.
+	if cap(n.alts)-len(n.alts) < len(c.Alts) {
+		n.alts = make([]Alt, 0, max(16, 2*cap(n.alts), len(c.Alts)))
+	}
+	start := len(n.alts)
+	n.alts = n.alts[:start+len(c.Alts)]
+	defer func() {
+		if err != nil {
+			n.alts = n.alts[:start] // a refused constraint leaves nothing
+		}
+	}()
+	alts := n.alts[start : start+len(c.Alts) : start+len(c.Alts)]
 	for i, a := range c.Alts {
 		for _, v := range [2]Var{a.From, a.To} {
 			if v < 0 || int(v) >= len(n.names) {
