@@ -222,12 +222,14 @@ func Run(ctx context.Context, inputs []*Input, w Writer, opt Options) (Counts, e
 			}
 			ring[next%window] = nil
 			next++
-			<-slots
 			if stopped || cur.canceled {
 				stopped = true
+				<-slots
 				continue
 			}
-			if err := w.Write(cur); err != nil {
+			err := w.Write(cur)
+			<-slots // only now is the record out of flight
+			if err != nil {
 				writeErr = err
 				stopped = true
 				cancel()
