@@ -62,7 +62,7 @@ func (a *analysis) memoBounds(memo *Memo, m *materials.Material, place string, c
 			items[i].txt = a.itemText(&items[i])
 			items[i].iso = items[i].day.ISO()
 		}
-		e = &memoEntry{items: items[:len(items):len(items)], disagreements: scratch.disagreements, noArrival: len(scratch.noArrivalPlaces) > 0}
+		e = &memoEntry{items: items[:len(items):len(items)], disagreements: scratch.disagreements, noArrival: len(scratch.noArrival) > 0}
 		memo.mu.Lock()
 		if prev, ok := memo.entries[key]; ok {
 			e = prev // another analysis got there first; keep one

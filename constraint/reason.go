@@ -293,9 +293,9 @@ type built struct {
 	// disagreements found while building
 	disagreements []Disagreement
 	notes         []string
-	// noArrival lists, per place, the materials without arrival data there.
-	noArrival       map[string][]string
-	noArrivalPlaces []string
+	// noArrival lists, per place (in the order met), the materials without
+	// arrival data there.
+	noArrival []placeNames
 }
 
 // link returns the link of the network constraint id.
@@ -309,22 +309,28 @@ func (b *built) link(id string) (link, bool) {
 
 // addNoArrival records that the material name has no arrival data at place.
 func (b *built) addNoArrival(place, name string) {
-	if b.noArrival == nil {
-		b.noArrival = map[string][]string{}
-	}
-	if !contains(b.noArrival[place], name) {
-		b.noArrival[place] = append(b.noArrival[place], name)
-		if !contains(b.noArrivalPlaces, place) {
-			b.noArrivalPlaces = append(b.noArrivalPlaces, place)
+	for i := range b.noArrival {
+		if pn := &b.noArrival[i]; pn.place == place {
+			if !contains(pn.names, name) {
+				pn.names = append(pn.names, name)
+			}
+			return
 		}
 	}
+	b.noArrival = append(b.noArrival, placeNames{place, []string{name}})
+}
+
+// placeNames is a place and the names of materials.
+type placeNames struct {
+	place string
+	names []string
 }
 
 // arrivalNotes says, once per place, which materials have no arrival data.
 func (a *analysis) arrivalNotes(b *built) []string {
 	var out []string
-	for _, p := range b.noArrivalPlaces {
-		names := b.noArrival[p]
+	for _, pn := range b.noArrival {
+		p, names := pn.place, pn.names
 		if len(names) == 1 {
 			out = append(out, fmt.Sprintf("No arrival data for %s in %s: its soft bound falls back to its firm bound.", names[0], a.placeName(p)))
 			continue

@@ -323,9 +323,11 @@ const hexDigits = "0123456789abcdef"
 // to w ^ '"'…, to w ^ '\\'…, and to w - 0x20… for the small bytes.)
 func plain8(w uint64) bool {
 	const ones, highs = 0x0101010101010101, 0x8080808080808080
-	hasZero := func(x uint64) uint64 { return (x - ones) & ^x & highs }
-	small := (w - 0x20*ones) & ^w & highs
-	return (small | hasZero(w^('"'*ones)) | hasZero(w^('\\'*ones)) | w&highs) == 0
+	q, bs := w^('"'*ones), w^('\\'*ones)
+	small := (w - 0x20*ones) & ^w
+	quote := (q - ones) & ^q
+	backslash := (bs - ones) & ^bs
+	return (small|quote|backslash|w)&highs == 0
 }
 
 // AppendJSONString appends s as a JSON string, escaped as encoding/json
