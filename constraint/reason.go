@@ -890,7 +890,7 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 	if err != nil {
 		return nil, err
 	}
-	res := &Result{Title: a.c.Title, File: a.c.File, Place: a.c.Place, Evidence: b.evidence, Disagreements: b.disagreements}
+	res := &Result{ID: a.c.ID, Title: a.c.Title, File: a.c.File, Place: a.c.Place, Evidence: b.evidence, Disagreements: b.disagreements}
 	res.Dataset = DatasetInfo{Version: a.ds.Version, SHA256: a.ds.SHA256}
 	res.Notes = append(res.Notes, a.arrivalNotes(b)...)
 	res.Notes = append(res.Notes, dedupe(b.notes)...)

@@ -24,6 +24,8 @@ const (
 
 // Result is everything terminus concludes about one case.
 type Result struct {
+	// ID is the case's id (an inventory number), when it has one.
+	ID      string
 	Title   string
 	File    string
 	Place   string

@@ -417,7 +417,7 @@ func TestIsTerminal(t *testing.T) {
 func TestSurveyResultIsCheckJSON(t *testing.T) {
 	// The same case through check --format json and through survey (with
 	// the sensitivity re-solves check makes) gives the same document, but
-	// for the file it names.
+	// for the file it names and the id the survey record carries.
 	caseJSON := `{"title": "Blue box", "place": "NL", "findings": [{"id": "f-blue", "material": "fixture blue"}, {"material": "fixture yellow", "confidence": "probable"}], "claims": [{"date": "1700/1720"}]}`
 	c := writeCase(t, "case.yaml", caseJSON+"\n")
 	want, errs, code := execute(t, "check", "--materials", fixture, "--format", "json", c)
@@ -441,8 +441,12 @@ func TestSurveyResultIsCheckJSON(t *testing.T) {
 	if line.Result["file"] != "stdin" || doc["file"] != c {
 		t.Errorf("files %v and %v", line.Result["file"], doc["file"])
 	}
+	if line.Result["id"] != "box-1" || doc["id"] != nil {
+		t.Errorf("ids %v and %v, want box-1 in the survey's result only", line.Result["id"], doc["id"])
+	}
 	delete(line.Result, "file")
 	delete(doc, "file")
+	delete(line.Result, "id")
 	a, _ := json.Marshal(line.Result)
 	b, _ := json.Marshal(doc)
 	if string(a) != string(b) {

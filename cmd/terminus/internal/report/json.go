@@ -20,6 +20,7 @@ const SchemaVersion = 1
 
 type jsonResult struct {
 	SchemaVersion     int                `json:"schema_version"`
+	ID                string             `json:"id,omitempty"`
 	Title             string             `json:"title"`
 	File              string             `json:"file"`
 	Place             *string            `json:"place"`
@@ -206,7 +207,7 @@ func JSONLine(w io.Writer, r *constraint.Result) error {
 
 func toJSON(r *constraint.Result) jsonResult {
 	out := jsonResult{
-		SchemaVersion: SchemaVersion, Title: r.Title, File: r.File, Place: strPtr(r.Place),
+		SchemaVersion: SchemaVersion, ID: r.ID, Title: r.Title, File: r.File, Place: strPtr(r.Place),
 		Dataset:     jsonDataset{Version: r.Dataset.Version, SHA256: r.Dataset.SHA256},
 		Events:      []jsonEvent{},
 		Claims:      []jsonClaim{},

@@ -19,6 +19,7 @@ import (
 func AppendJSONLine(b []byte, r *constraint.Result) []byte {
 	b = append(b, `{"schema_version":`...)
 	b = strconv.AppendInt(b, SchemaVersion, 10)
+	b = appendOmitEmpty(b, `,"id":`, r.ID)
 	b = append(b, `,"title":`...)
 	b = AppendJSONString(b, r.Title)
 	b = append(b, `,"file":`...)

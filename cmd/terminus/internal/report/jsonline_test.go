@@ -110,7 +110,7 @@ func oddResult(s string, full bool) *constraint.Result {
 		r.Evidence = []constraint.Evidence{{ID: s, Bounds: []constraint.EvidenceBound{{Side: s}}}}
 		return r
 	}
-	r.Place = s
+	r.Place, r.ID = s, s
 	step := constraint.Step{Evidence: s, Text: s}
 	w := &constraint.Window{
 		Earliest:  constraint.Bound{Day: date.Gregorian(-1199, 1, 1), Bounded: true, Because: []string{s, s}, Chain: []constraint.Step{step, step}},

@@ -20,6 +20,9 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 	}
 	fmt.Fprintf(ew, "## Dating from materials: %s\n\n", mdEscape(title))
 	fmt.Fprintf(ew, "Case file `%s`", r.File)
+	if r.ID != "" {
+		fmt.Fprintf(ew, "; object %s", mdEscape(r.ID))
+	}
 	if r.Place != "" {
 		fmt.Fprintf(ew, "; place of making %s", r.Place)
 	}

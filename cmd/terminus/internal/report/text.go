@@ -117,6 +117,9 @@ func Text(w io.Writer, r *constraint.Result) error {
 	}
 	wrap(ew, "", title)
 	meta := r.File
+	if r.ID != "" {
+		meta += " · object " + r.ID
+	}
 	if r.Place != "" {
 		meta += " · place " + r.Place
 	}
