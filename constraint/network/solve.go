@@ -562,13 +562,6 @@ func (s *solver) consistent(active []int32) (bool, []int32, error) {
 	return true, nil, nil
 }
 
-func (s *solver) ids(tag int32) []string {
-	if tag < 0 {
-		return nil
-	}
-	return []string{s.n.cons[tag].ID}
-}
-
 // search is the depth-first search over the choices of one component.
 type search struct {
 	*solver
