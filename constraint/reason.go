@@ -332,10 +332,10 @@ func (a *analysis) arrivalNotes(b *built) []string {
 	for _, pn := range b.noArrival {
 		p, names := pn.place, pn.names
 		if len(names) == 1 {
-			out = append(out, fmt.Sprintf("No arrival data for %s in %s: its soft bound falls back to its firm bound.", names[0], a.placeName(p)))
+			out = append(out, "No arrival data for "+names[0]+" in "+a.placeName(p)+": its soft bound falls back to its firm bound.")
 			continue
 		}
-		out = append(out, fmt.Sprintf("No arrival data for %s in %s: their soft bounds fall back to their firm bounds.", andList(names), a.placeName(p)))
+		out = append(out, "No arrival data for "+andList(names)+" in "+a.placeName(p)+": their soft bounds fall back to their firm bounds.")
 	}
 	return out
 }
@@ -541,7 +541,7 @@ func (a *analysis) stockAllowance(ms *materials.Milestone) date.Duration {
 func (a *analysis) placeName(code string) string {
 	if a.ds.Regions != nil {
 		if n := a.ds.Regions.Name(code); n != "" && n != code {
-			return fmt.Sprintf("%s (%s)", n, code)
+			return n + " (" + code + ")"
 		}
 	}
 	return code
@@ -975,14 +975,14 @@ func (a *analysis) sources(rows []Evidence) []SourceRef {
 }
 
 func dedupeDisagreements(list []Disagreement) []Disagreement {
-	seen := map[string]bool{}
 	var out []Disagreement
+next:
 	for _, d := range list {
-		k := overrideKey(d.Material, materials.Kind(d.Kind), d.Place)
-		if seen[k] {
-			continue
+		for _, o := range out { // a handful: a scan beats a map
+			if o.Material == d.Material && o.Kind == d.Kind && o.Place == d.Place {
+				continue next
+			}
 		}
-		seen[k] = true
 		out = append(out, d)
 	}
 	return out
