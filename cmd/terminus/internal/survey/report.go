@@ -253,6 +253,9 @@ func (r *ReportWriter) closeMarkdown(w *bufio.Writer, c Counts) error {
 	if c.Conflicting > 0 {
 		fmt.Fprintf(w, "The evidence of %d %s conflicts at some tier; see the deciding column.\n\n", c.Conflicting, plural(c.Conflicting, "record", "records"))
 	}
+	if c.Unbounded > 0 {
+		fmt.Fprintf(w, "No finding or record bounds the date of %d %s: a verdict of consistent there only says that nothing speaks against the claim.\n\n", c.Unbounded, plural(c.Unbounded, "record", "records"))
+	}
 	if r.info.FailOn != "" {
 		fmt.Fprintf(w, "%d %s fail at the %s tier or a stronger one, or could not be checked.\n\n", c.Failing, plural(c.Failing, "record", "records"), r.info.FailOn)
 	}
@@ -315,6 +318,7 @@ h2.doubtful { color: #875; }
 {{range .Rows}}<tr><td>{{.Status}}</td><td class="n">{{.N}}</td></tr>
 {{end}}<tr><th>total</th><th class="n">{{.Records}}</th></tr></table>
 {{if .Conflicting}}<p>The evidence of {{.Conflicting}} {{if eq .Conflicting 1}}record{{else}}records{{end}} conflicts at some tier; see the deciding column.</p>
+{{end}}{{if .Unbounded}}<p>No finding or record bounds the date of {{.Unbounded}} {{if eq .Unbounded 1}}record{{else}}records{{end}}: a verdict of consistent there only says that nothing speaks against the claim.</p>
 {{end}}{{if .FailOn}}<p>{{.Failing}} {{if eq .Failing 1}}record fails{{else}}records fail{{end}} at the {{.FailOn}} tier or a stronger one, or could not be checked.</p>
 {{end}}`
 
@@ -338,10 +342,10 @@ func (r *ReportWriter) closeHTML(w *bufio.Writer, c Counts) error {
 		N      int
 	}
 	head := struct {
-		Records, Conflicting, Failing int
-		Inputs, Version, SHA, FailOn  string
-		Rows                          []countRow
-	}{Records: c.Records, Conflicting: c.Conflicting, Failing: c.Failing, Inputs: strings.Join(r.info.Inputs, ", "),
+		Records, Conflicting, Failing, Unbounded int
+		Inputs, Version, SHA, FailOn             string
+		Rows                                     []countRow
+	}{Records: c.Records, Conflicting: c.Conflicting, Failing: c.Failing, Unbounded: c.Unbounded, Inputs: strings.Join(r.info.Inputs, ", "),
 		Version: r.info.DatasetVersion, SHA: shortSum(r.info.DatasetSHA256), FailOn: r.info.FailOn}
 	for _, s := range Statuses() {
 		if n := c.ByStatus[s]; n > 0 {

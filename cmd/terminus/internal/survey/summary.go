@@ -62,6 +62,9 @@ type Summary struct {
 	// Conflicts lists the tiers whose evidence conflicts, with a minimal
 	// conflicting set each: "soft: finding-1, not-after".
 	Conflicts string
+	// Unbounded is true when no evidence bounds the shown event at any
+	// tier: its claims are consistent only because nothing speaks to them.
+	Unbounded bool
 	// Fails is true when the record counts toward exit status 1.
 	Fails bool
 	// Err and Hint describe a record error.
@@ -122,6 +125,7 @@ func summarize(r *constraint.Result, fails bool) Summary {
 			}
 			s.Windows[t] = [2]string{boundText(w.Earliest), boundText(w.Latest)}
 		}
+		s.Unbounded = s.Windows[network.Soft] == [2]string{"..", ".."}
 	}
 	var conflicts []string
 	seen := map[network.Tier]bool{}
@@ -162,6 +166,8 @@ type Counts struct {
 	// Failing counts the records that give exit status 1: a claim not
 	// consistent or evidence conflicting at the chosen tier, or an error.
 	Failing int
+	// Unbounded counts the records that no evidence bounds.
+	Unbounded int
 }
 
 func (c *Counts) add(s Summary) {
@@ -175,6 +181,9 @@ func (c *Counts) add(s Summary) {
 	}
 	if s.Fails {
 		c.Failing++
+	}
+	if s.Unbounded {
+		c.Unbounded++
 	}
 }
 

@@ -435,3 +435,26 @@ func TestCSVLongRecords(t *testing.T) {
 		t.Errorf("records %v, want %s", got, want)
 	}
 }
+
+// A record with a claim and nothing that bounds it is counted apart, and
+// the summary reports say what its "consistent" means.
+func TestUnboundedRecordsAreCounted(t *testing.T) {
+	const text = "id,claim,materials,not_after\nu-1,1850,,\nb-1,1850,smalt,\nb-2,1850,,1900\n"
+	for _, format := range []string{"md", "html"} {
+		var out bytes.Buffer
+		var w Writer = NewMarkdownWriter(&out, ReportInfo{})
+		if format == "html" {
+			w = NewHTMLWriter(&out, ReportInfo{})
+		}
+		c, err := Run(context.Background(), []*Input{openText(t, "c.csv", text)}, w, Options{Dataset: builtin(t)})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if c.Records != 3 || c.Unbounded != 1 {
+			t.Errorf("%s: %d records, %d unbounded; want 3 and 1 (u-1 only)", format, c.Records, c.Unbounded)
+		}
+		if !strings.Contains(out.String(), "No finding or record bounds the date of 1 record") {
+			t.Errorf("%s: the report does not say which records nothing bounds:\n%s", format, out.String())
+		}
+	}
+}
