@@ -63,7 +63,9 @@
 // Applied Mathematics Letters 6, 1993), with parent-graph cycle checks to
 // find negative cycles, then the bounds from and to the reference point by
 // Dijkstra's method on reduced costs, keeping the shortest-path trees for
-// the explanations.
+// the explanations. [Network.SolveTiers] gives the three tiers' results
+// at once; for a network of unary bounds alone it cuts each variable's set
+// tier after tier instead of starting again.
 //
 // The choices are the binary (or mixed) disjunctions and the gappy interval
 // sets of linked variables. The search is depth first. At every node it
