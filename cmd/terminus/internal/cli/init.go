@@ -16,6 +16,7 @@ const starterCase = `# A terminus case file: what was found in one object and wh
 # or friendly forms (c. 1870, 1870s, before 1900, 1200 BCE); 'terminus date EXPR'
 # shows how a date is read.
 
+# id: INV-0000                           # the inventory or accession number; optional
 title: Describe the object here          # free text
 place: NL                                # where it was made: ISO 3166-1 code or UN M49 area; optional
 
