@@ -280,16 +280,8 @@ func (s *solver) intersect(a, b []piece) []piece {
 	i, j := 0, 0
 	for i < len(a) && j < len(b) {
 		p, q := a[i], b[j]
-		lo, loTag := p.lo, p.loTag
-		if q.lo > lo || (q.lo == lo && s.less(q.loTag, loTag)) {
-			lo, loTag = q.lo, q.loTag
-		}
-		hi, hiTag := p.hi, p.hiTag
-		if q.hi < hi || (q.hi == hi && s.less(q.hiTag, hiTag)) {
-			hi, hiTag = q.hi, q.hiTag
-		}
-		if lo <= hi {
-			out = append(out, piece{lo, hi, loTag, hiTag})
+		if m, ok := s.meet(p, q); ok {
+			out = append(out, m)
 		}
 		if p.hi < q.hi {
 			i++
@@ -298,6 +290,20 @@ func (s *solver) intersect(a, b []piece) []piece {
 		}
 	}
 	return out
+}
+
+// meet is the common part of two runs, each end keeping the constraint
+// that sets it (the smaller id on a tie); ok is false when they miss.
+func (s *solver) meet(p, q piece) (piece, bool) {
+	lo, loTag := p.lo, p.loTag
+	if q.lo > lo || (q.lo == lo && s.less(q.loTag, loTag)) {
+		lo, loTag = q.lo, q.loTag
+	}
+	hi, hiTag := p.hi, p.hiTag
+	if q.hi < hi || (q.hi == hi && s.less(q.hiTag, hiTag)) {
+		hi, hiTag = q.hi, q.hiTag
+	}
+	return piece{lo, hi, loTag, hiTag}, lo <= hi
 }
 
 // addUnary intersects the set of the variable that the unary constraint
@@ -321,16 +327,8 @@ func (s *solver) clip(a []piece, c *Constraint, ci int32) []piece {
 	q := unaryPiece(c.Alts[0], ci)
 	out := a[:0]
 	for _, p := range a {
-		lo, loTag := p.lo, p.loTag
-		if q.lo > lo || (q.lo == lo && s.less(q.loTag, loTag)) {
-			lo, loTag = q.lo, q.loTag
-		}
-		hi, hiTag := p.hi, p.hiTag
-		if q.hi < hi || (q.hi == hi && s.less(q.hiTag, hiTag)) {
-			hi, hiTag = q.hi, q.hiTag
-		}
-		if lo <= hi {
-			out = append(out, piece{lo, hi, loTag, hiTag})
+		if m, ok := s.meet(p, q); ok {
+			out = append(out, m)
 		}
 		if p.hi >= q.hi {
 			break
