@@ -13,6 +13,8 @@ import (
 
 	"github.com/BurntSushi/toml"
 	"gopkg.in/yaml.v3"
+
+	"terminus/materials/spell"
 )
 
 // Error is a problem with a case file: where it is, what is wrong and,
@@ -283,7 +285,7 @@ func nearest(s string, candidates []string, max int) []string {
 	limit := len(ls)/3 + 1
 	var cs []cand
 	for _, c := range candidates {
-		dist := editDistance(ls, strings.ToLower(c))
+		dist := spell.Distance(ls, strings.ToLower(c))
 		if dist <= limit {
 			cs = append(cs, cand{c, dist})
 		}
@@ -302,27 +304,6 @@ func nearest(s string, candidates []string, max int) []string {
 		out = append(out, c.s)
 	}
 	return out
-}
-
-func editDistance(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	prev := make([]int, len(rb)+1)
-	cur := make([]int, len(rb)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(ra); i++ {
-		cur[0] = i
-		for j := 1; j <= len(rb); j++ {
-			cost := 1
-			if ra[i-1] == rb[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(rb)]
 }
 
 // tomlToNode decodes TOML and rebuilds it as a yaml.Node tree, so that one

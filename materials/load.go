@@ -12,6 +12,8 @@ import (
 	"slices"
 	"strings"
 	"sync"
+
+	"terminus/materials/spell"
 )
 
 //go:embed data
@@ -385,7 +387,7 @@ func nearestWords(w string, words []string, n int) []string {
 	var cs []c
 	limit := max(2, len(w)/3)
 	for _, x := range words {
-		if d := levenshtein(w, x); d <= limit {
+		if d := spell.Distance(w, x); d <= limit {
 			cs = append(cs, c{x, d})
 		}
 	}

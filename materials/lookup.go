@@ -6,6 +6,8 @@ import (
 	"slices"
 	"strings"
 	"unicode"
+
+	"terminus/materials/spell"
 )
 
 // index maps folded keys to materials.
@@ -137,7 +139,7 @@ func (ix *index) nearest(key string, n int) []string {
 		if bits.OnesCount64(kmask&^r.mask) > limit {
 			continue // too many of the key's letters are missing
 		}
-		dist := levenshteinWithin(kr, r.runes, limit)
+		dist := spell.Within(kr, r.runes, limit)
 		if len(key) >= 4 && dist > 1 {
 			if strings.Contains(r.key, key) {
 				dist = 1
@@ -145,7 +147,7 @@ func (ix *index) nearest(key string, n int) []string {
 				// A slip in the first word of a longer name: compare with
 				// the name's start (a letter shorter or longer than the
 				// query), one more for what is left out.
-				dist = min(dist, prefixWithin(kr, rk, limit-1)+1)
+				dist = min(dist, spell.PrefixWithin(kr, rk, limit-1)+1)
 			}
 		}
 		if dist > limit {
@@ -315,98 +317,4 @@ func foldRune(r rune) (string, bool) {
 		return "z", true
 	}
 	return "", false
-}
-
-// levenshtein is the edit distance between a and b, counted in runes.
-// levenshtein is the edit distance of a and b (in runes).
-func levenshtein(a, b string) int {
-	ra, rb := []rune(a), []rune(b)
-	return levenshteinWithin(ra, rb, max(len(ra), len(rb)))
-}
-
-// prefixWithin is the least edit distance between key and the starts of
-// name one rune shorter, as long, and one rune longer than key (name must
-// have len(key)+1 runes at least), capped at limit+1 like
-// levenshteinWithin: one table, whose rows are name's runes, gives all three.
-func prefixWithin(key, name []rune, limit int) int {
-	if limit < 0 {
-		return 0
-	}
-	m := len(key)
-	var buf [2 * 64]int
-	var prev, cur []int
-	if m+1 <= 64 {
-		prev, cur = buf[:m+1], buf[64:64+m+1]
-	} else {
-		prev, cur = make([]int, m+1), make([]int, m+1)
-	}
-	for j := range prev {
-		prev[j] = j
-	}
-	best := limit + 1
-	if m <= 1 { // the empty start of name is one of the three
-		best = min(best, m)
-	}
-	for i := 1; i <= m+1 && i <= len(name); i++ {
-		cur[0] = i
-		rowMin := i
-		for j := 1; j <= m; j++ {
-			cost := 1
-			if name[i-1] == key[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-			rowMin = min(rowMin, cur[j])
-		}
-		if i >= m-1 {
-			best = min(best, cur[m])
-		}
-		if rowMin > limit {
-			break // later rows only grow from this one
-		}
-		prev, cur = cur, prev
-	}
-	return min(best, limit+1)
-}
-
-// levenshteinWithin is the edit distance of a and b when it is at most
-// limit, and limit+1 otherwise; it gives up as soon as the distance must
-// exceed limit, which makes suggestions cheap (most names are far off).
-func levenshteinWithin(a, b []rune, limit int) int {
-	if limit < 0 {
-		return 0
-	}
-	if len(a) < len(b) {
-		a, b = b, a
-	}
-	if len(a)-len(b) > limit {
-		return limit + 1
-	}
-	var buf [2 * 64]int
-	var prev, cur []int
-	if len(b)+1 <= 64 {
-		prev, cur = buf[:len(b)+1], buf[64:64+len(b)+1]
-	} else {
-		prev, cur = make([]int, len(b)+1), make([]int, len(b)+1)
-	}
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(a); i++ {
-		cur[0] = i
-		rowMin := i
-		for j := 1; j <= len(b); j++ {
-			cost := 1
-			if a[i-1] == b[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-			rowMin = min(rowMin, cur[j])
-		}
-		if rowMin > limit {
-			return limit + 1 // every later row only grows from this one
-		}
-		prev, cur = cur, prev
-	}
-	return min(prev[len(b)], limit+1)
 }

@@ -7,6 +7,8 @@ import (
 	"strconv"
 	"strings"
 	"sync"
+
+	"terminus/materials/spell"
 )
 
 //go:embed regions.txt
@@ -185,7 +187,7 @@ func (r *Regions) Suggest(code string) []string {
 	}
 	if len(up) == 2 || len(up) == 3 {
 		for _, c := range r.ordered {
-			if len(c) == len(up) && levenshtein(c, up) == 1 {
+			if len(c) == len(up) && spell.Distance(c, up) == 1 {
 				add(c)
 			}
 		}
