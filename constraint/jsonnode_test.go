@@ -5,8 +5,6 @@ import (
 	"encoding/json"
 	"fmt"
 	"math/rand/v2"
-	"os"
-	"path/filepath"
 	"strings"
 	"testing"
 
@@ -149,15 +147,8 @@ func TestJSONReaderMatchesYAMLReader(t *testing.T) {
 		t.Errorf("only %d of 5000 random documents were compared with the YAML reader", compared)
 	}
 	// Every example, written as indented JSON and as one line.
-	paths, _ := filepath.Glob("../examples/*/case.yaml")
-	if len(paths) == 0 {
-		t.Fatal("no examples found")
-	}
-	for _, p := range paths {
-		data, err := os.ReadFile(p)
-		if err != nil {
-			t.Fatal(err)
-		}
+	for _, ex := range examples(t) {
+		p, data := ex.path, ex.data
 		var v any
 		if err := yaml.Unmarshal(data, &v); err != nil {
 			t.Fatal(err)

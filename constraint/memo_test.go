@@ -3,8 +3,6 @@ package constraint
 import (
 	"context"
 	"fmt"
-	"os"
-	"path/filepath"
 	"reflect"
 	"strings"
 	"sync"
@@ -23,16 +21,8 @@ func TestMemoGivesTheSameResults(t *testing.T) {
 		t.Fatal(err)
 	}
 	var cases []*Case
-	paths, _ := filepath.Glob("../examples/*/case.yaml")
-	if len(paths) == 0 {
-		t.Fatal("no examples found")
-	}
-	for _, p := range paths {
-		data, err := os.ReadFile(p)
-		if err != nil {
-			t.Fatal(err)
-		}
-		c, err := ParseCase(p, data, "yaml")
+	for _, ex := range examples(t) {
+		c, err := ParseCase(ex.path, ex.data, "yaml")
 		if err != nil {
 			t.Fatal(err)
 		}
