@@ -262,19 +262,36 @@ materials:
       - {kind: made, date: "1850", source: k, basis: from-memory}
       - {kind: sold, date: "1840", source: k, basis: from-memory}
       - {kind: withdrawn, date: "1830", source: k, basis: from-memory}
-  - id: disagreeing-but-fine
+  - id: disagreeing
     class: pigment
     origin: synthetic
     milestones:
       - {kind: made, date: "1704", source: k, basis: from-memory}
       - {kind: made, date: "1706", source: k, basis: from-memory}
       - {kind: sold, date: "1705", source: k, basis: from-memory}
-      - {kind: arrived, place: JP, date: "1700", source: k, basis: from-memory}
+      - {kind: arrived, place: JP, date: "1700/1750", source: k, basis: from-memory}
   - id: never-made
     class: dye
     origin: natural
     milestones:
       - {kind: sold, date: "1800", source: k, basis: from-memory}
+  - id: attested-early
+    class: pigment
+    origin: synthetic
+    milestones:
+      - {kind: made, date: "1710", source: k, basis: from-memory}
+      - {kind: sold, date: "1720", source: k, basis: from-memory}
+      - {kind: arrived, place: "150", date: "1715", source: k, basis: from-memory}
+      - {kind: arrived, place: JP, date: "1780", source: k, basis: from-memory}
+      - {kind: attested, date: "1709", place: NL, object: "a dated painting", source: k, basis: from-memory}
+  - id: attested-open
+    class: pigment
+    origin: synthetic
+    milestones:
+      - {kind: made, date: "../1600", source: k, basis: from-memory}
+      - {kind: made, date: "1650", source: k, basis: from-memory}
+      - {kind: arrived, place: JP, date: "1700", source: k, basis: from-memory}
+      - {kind: attested, date: "1500", place: DE, object: "a dated altarpiece", source: k, basis: from-memory}
 `}))
 	if err != nil {
 		t.Fatal(err)
@@ -283,12 +300,22 @@ materials:
 	for _, p := range Lint(d) {
 		got = append(got, p.String())
 	}
+	// Why each: a sale before the making; an end before the sale; an
+	// arrival starting before the making (a claim that only overlaps the
+	// making still starts before it); no making at all; made, sold and the
+	// European arrival later than an attestation in the Netherlands (the
+	// Japanese arrival is not bounded by it); and nothing for a material
+	// whose made claim is open at its start, since it gives no lower bound
+	// for an attestation to cap, nor for an arrival to start before.
 	want := []string{
 		`a.yaml:3:5: source "unused" is never cited`,
-		`a.yaml:10:9: sold milestone of "early-sale" (1840) lies wholly before its earliest made claim`,
+		`a.yaml:10:9: sold milestone of "early-sale" (1840) starts before its earliest made claim (1850-01-01)`,
 		`a.yaml:11:9: withdrawn milestone of "early-sale" (1830) lies wholly before its earliest sold claim`,
-		`a.yaml:19:9: arrived milestone of "disagreeing-but-fine" (1700) lies wholly before its earliest made claim`,
+		`a.yaml:19:9: arrived milestone of "disagreeing" (1700/1750) starts before its earliest made claim (1704-01-01)`,
 		`a.yaml:20:5: material "never-made" has no made milestone`,
+		`a.yaml:29:9: the earliest made claim of "attested-early" (1710) is later than its attestation 1709 in a dated painting (a.yaml:33)`,
+		`a.yaml:30:9: the earliest sold claim of "attested-early" (1720) is later than its attestation 1709`,
+		`a.yaml:31:9: the earliest arrival in 150 of "attested-early" (1715) is later than its attestation 1709`,
 	}
 	if len(got) != len(want) {
 		t.Fatalf("got %d problems, want %d:\n%s", len(got), len(want), strings.Join(got, "\n"))
