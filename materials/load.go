@@ -398,7 +398,7 @@ func checkGroups(ms []*Material, names map[string]*Material, base *Dataset) Erro
 				k := fold(g)
 				if other, ok := names[k]; ok {
 					errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
-						Msg: fmt.Sprintf("%s %q of %q is also a name of the material %q (%s:%d)", gl.kind, g, m.ID, other.ID, other.File, other.Line),
+						Msg:        fmt.Sprintf("%s %q of %q is also a name of the material %q (%s:%d)", gl.kind, g, m.ID, other.ID, other.File, other.Line),
 						Suggestion: "a name that several materials answer to belongs in their markers or families, not in one material's names"})
 				} else if base != nil && base.index != nil {
 					if other, ok := base.index.names[k]; ok {
