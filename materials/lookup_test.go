@@ -235,7 +235,7 @@ func TestSchemaKeysFit(t *testing.T) {
 // shortcuts: the reference for index.nearest.
 func nearestPlain(ix *index, key string, n int) []string {
 	kr := []rune(key)
-	limit := max(2, len(kr)/3)
+	limit := spell.Limit(key)
 	type cand struct {
 		shown string
 		dist  int
@@ -255,9 +255,12 @@ func nearestPlain(ix *index, key string, n int) []string {
 		if dist > limit {
 			continue
 		}
-		m := ix.names[r.key]
-		if c, ok := best[m.ID]; !ok || dist < c.dist {
-			best[m.ID] = cand{r.shown, dist}
+		id := "group:" + r.key // a marker or family stands for itself
+		if m, ok := ix.names[r.key]; ok && !r.group {
+			id = m.ID
+		}
+		if c, ok := best[id]; !ok || dist < c.dist {
+			best[id] = cand{r.shown, dist}
 		}
 	}
 	var cs []cand
