@@ -1,6 +1,7 @@
-package constraint
+package constraint_test
 
 import (
+	"terminus/constraint"
 	"testing"
 
 	"terminus/constraint/date"
@@ -33,15 +34,15 @@ func TestDatasetExcludesNoneOfItsAttestations(t *testing.T) {
 			}
 			n++
 			found = true
-			c := &Case{File: m.ID, Place: ms.Place,
-				Findings: []Finding{{ID: "f", Materials: []string{m.ID}, Confidence: Certain}},
-				Claims:   []Claim{{ID: "attested", Date: ms.Date, DateText: ms.Date.EDTF()}}}
-			res, err := Analyze(t.Context(), c, ds, Options{NoSensitivity: true})
+			c := &constraint.Case{File: m.ID, Place: ms.Place,
+				Findings: []constraint.Finding{{ID: "f", Materials: []string{m.ID}, Confidence: constraint.Certain}},
+				Claims:   []constraint.Claim{{ID: "attested", Date: ms.Date, DateText: ms.Date.EDTF()}}}
+			res, err := constraint.Analyze(t.Context(), c, ds, constraint.Options{NoSensitivity: true})
 			if err != nil {
 				t.Errorf("%s (%s:%d): %v", m.ID, ms.File, ms.Line, err)
 				continue
 			}
-			if v := res.Claims[0].Verdict; v != Consistent {
+			if v := res.Claims[0].Verdict; v != constraint.Consistent {
 				t.Errorf("%s attested %s in %s (place %q, %s:%d) is %s by the dataset; deciding: %v",
 					m.ID, ms.Date.EDTF(), ms.Object, ms.Place, ms.File, ms.Line, v, res.Claims[0].Deciding)
 			}
@@ -71,18 +72,18 @@ func TestClassicAnachronismsStayExcluded(t *testing.T) {
 		{"mauveine", "GB", "1800"},
 	} {
 		t.Run(tc.material, func(t *testing.T) {
-			c := &Case{File: "anachronism", Place: tc.place,
-				Findings: []Finding{{ID: "f", Materials: []string{tc.material}, Confidence: Certain}}}
+			c := &constraint.Case{File: "anachronism", Place: tc.place,
+				Findings: []constraint.Finding{{ID: "f", Materials: []string{tc.material}, Confidence: constraint.Certain}}}
 			d, err := date.Parse(tc.claim)
 			if err != nil {
 				t.Fatal(err)
 			}
-			c.Claims = []Claim{{ID: "c", Date: d, DateText: tc.claim}}
-			res, err := Analyze(t.Context(), c, ds, Options{NoSensitivity: true})
+			c.Claims = []constraint.Claim{{ID: "c", Date: d, DateText: tc.claim}}
+			res, err := constraint.Analyze(t.Context(), c, ds, constraint.Options{NoSensitivity: true})
 			if err != nil {
 				t.Fatal(err)
 			}
-			if v := res.Claims[0].Verdict; v != Excluded {
+			if v := res.Claims[0].Verdict; v != constraint.Excluded {
 				t.Errorf("%s in an object of %s: %s, want excluded", tc.material, tc.claim, v)
 			}
 		})

@@ -1,4 +1,4 @@
-package constraint
+package constraint_test
 
 import (
 	"os"

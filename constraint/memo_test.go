@@ -1,4 +1,4 @@
-package constraint
+package constraint_test
 
 import (
 	"context"
@@ -6,6 +6,9 @@ import (
 	"reflect"
 	"strings"
 	"sync"
+	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"testing"
 
 	"terminus/materials"
@@ -20,9 +23,9 @@ func TestMemoGivesTheSameResults(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	var cases []*Case
+	var cases []*constraint.Case
 	for _, ex := range examples(t) {
-		c, err := ParseCase(ex.path, ex.data, "yaml")
+		c, err := casefile.Parse(ex.path, ex.data, input.YAML, input.Limits{})
 		if err != nil {
 			t.Fatal(err)
 		}
@@ -47,23 +50,23 @@ func TestMemoGivesTheSameResults(t *testing.T) {
 		}
 		fmt.Fprintf(&b, "}\n  - {id: f2, material: %q}\n", next.ID)
 		fmt.Fprintf(&b, "records:\n  - {id: r1, not_after: \"%d\"}\nclaims:\n  - {date: \"%d\"}\n", 1700+i%300, 1500+(i*7)%500)
-		c, err := ParseCase("gen.yaml", []byte(b.String()), "yaml")
+		c, err := casefile.Parse("gen.yaml", []byte(b.String()), input.YAML, input.Limits{})
 		if err != nil {
 			t.Fatalf("case %d: %v\n%s", i, err, b.String())
 		}
 		cases = append(cases, c)
 	}
 	ctx := context.Background()
-	want := make([]*Result, len(cases))
+	want := make([]*constraint.Result, len(cases))
 	for i, c := range cases {
-		if want[i], err = Analyze(ctx, c, ds, Options{}); err != nil {
+		if want[i], err = constraint.Analyze(ctx, c, ds, constraint.Options{}); err != nil {
 			t.Fatalf("%s: %v", c.File, err)
 		}
 	}
-	memo := NewMemo(ds)
+	memo := constraint.NewMemo(ds)
 	for pass, name := range []string{"cold", "warm"} {
 		for i, c := range cases {
-			got, err := Analyze(ctx, c, ds, Options{Memo: memo})
+			got, err := constraint.Analyze(ctx, c, ds, constraint.Options{Memo: memo})
 			if err != nil {
 				t.Fatal(err)
 			}
@@ -72,14 +75,14 @@ func TestMemoGivesTheSameResults(t *testing.T) {
 			}
 		}
 	}
-	shared := NewMemo(ds)
+	shared := constraint.NewMemo(ds)
 	var wg sync.WaitGroup
 	errs := make(chan string, 4)
 	for w := range 4 {
 		wg.Go(func() {
 			for i := w; i < len(cases); i += 2 {
-				got, err := Analyze(ctx, cases[i], ds, Options{Memo: shared, NoSensitivity: true})
-				ref, _ := Analyze(ctx, cases[i], ds, Options{NoSensitivity: true})
+				got, err := constraint.Analyze(ctx, cases[i], ds, constraint.Options{Memo: shared, NoSensitivity: true})
+				ref, _ := constraint.Analyze(ctx, cases[i], ds, constraint.Options{NoSensitivity: true})
 				if err != nil || !reflect.DeepEqual(got, ref) {
 					errs <- fmt.Sprintf("case %d differs with a shared memo (%v)", i, err)
 					return
@@ -93,8 +96,8 @@ func TestMemoGivesTheSameResults(t *testing.T) {
 		t.Error(e)
 	}
 	// A memo made for another dataset is not used.
-	other := NewMemo(&materials.Dataset{})
-	if got, _ := Analyze(ctx, cases[0], ds, Options{Memo: other}); !reflect.DeepEqual(got, want[0]) {
+	other := constraint.NewMemo(&materials.Dataset{})
+	if got, _ := constraint.Analyze(ctx, cases[0], ds, constraint.Options{Memo: other}); !reflect.DeepEqual(got, want[0]) {
 		t.Error("a memo for another dataset changed the result")
 	}
 }

@@ -9,6 +9,7 @@ import (
 	"strings"
 
 	"terminus/constraint/date"
+	"terminus/constraint/input"
 	"terminus/constraint/network"
 	"terminus/materials"
 )
@@ -101,18 +102,12 @@ func groupNote(f *resolvedFinding, g groupUse) string {
 	if len(names) == 1 {
 		return f.ID + " names " + g.name + ", " + what + " that only " + names[0] + " carries in the dataset."
 	}
-	return f.ID + " names " + g.name + ", " + what + ": " + orList(names) + ". The finding is read as any of them, bounded by the earliest."
+	return f.ID + " names " + g.name + ", " + what + ": " + input.Join(names, "or") + ". The finding is read as any of them, bounded by the earliest."
 }
 
-func orList(list []string) string {
-	if len(list) < 2 {
-		return strings.Join(list, "")
-	}
-	return strings.Join(list[:len(list)-1], ", ") + " or " + list[len(list)-1]
-}
 
-func (a *analysis) errAt(p Pos, suggest, format string, args ...any) *Error {
-	return &Error{File: a.c.File, Line: p.Line, Column: p.Column, Msg: fmt.Sprintf(format, args...), Suggest: suggest}
+func (a *analysis) errAt(p Pos, suggest, format string, args ...any) *input.Error {
+	return input.At(a.c.File, p, suggest, format, args...)
 }
 
 func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
@@ -121,7 +116,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	}
 	// The case's circa policy is read, never changed; what it leaves out
 	// falls back to the defaults (date.Circa.For).
-	a := &analysis{c: c, ds: ds, eventIdx: make(map[string]int, len(c.Events)), circa: c.Circa, allowance: DefaultStockAllowance}
+	a := &analysis{c: c, ds: ds, eventIdx: make(map[string]int, len(c.Events)), circa: c.Circa, allowance: DefaultStockAllowance()}
 	if c.StockAllowance != nil {
 		a.allowance = *c.StockAllowance
 	}
@@ -148,7 +143,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 		}
 		for _, o := range e.After {
 			if _, ok := a.eventIdx[o.Event]; !ok {
-				return nil, a.errAt(o.Pos, didYouMean(o.Event, ids), "event %s: 'after' names an unknown event %q (events: %s)", e.ID, o.Event, strings.Join(ids, ", "))
+				return nil, a.errAt(o.Pos, input.DidYouMean(o.Event, ids), "event %s: 'after' names an unknown event %q (events: %s)", e.ID, o.Event, strings.Join(ids, ", "))
 			}
 			if o.Event == e.ID {
 				return nil, a.errAt(o.Pos, "", "event %s cannot come after itself", e.ID)
@@ -182,7 +177,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 		if f.Event == "" {
 			f.Event = first
 		} else if _, ok := a.eventIdx[f.Event]; !ok {
-			return nil, a.errAt(f.EventPos, didYouMean(f.Event, ids), "finding %s: unknown event %q (events: %s)", f.ID, f.Event, strings.Join(ids, ", "))
+			return nil, a.errAt(f.EventPos, input.DidYouMean(f.Event, ids), "finding %s: unknown event %q (events: %s)", f.ID, f.Event, strings.Join(ids, ", "))
 		}
 		rf := resolvedFinding{Finding: f, mats: make([]*materials.Material, 0, len(f.Materials))}
 		if f.Unlisted {
@@ -225,7 +220,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 		if r.Event == "" {
 			r.Event = first
 		} else if _, ok := a.eventIdx[r.Event]; !ok {
-			return nil, a.errAt(r.EventPos, didYouMean(r.Event, ids), "record %s: unknown event %q (events: %s)", r.ID, r.Event, strings.Join(ids, ", "))
+			return nil, a.errAt(r.EventPos, input.DidYouMean(r.Event, ids), "record %s: unknown event %q (events: %s)", r.ID, r.Event, strings.Join(ids, ", "))
 		}
 	}
 	for i := range c.Claims {
@@ -237,7 +232,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 		if cl.Event == "" {
 			cl.Event = first
 		} else if _, ok := a.eventIdx[cl.Event]; !ok {
-			return nil, a.errAt(cl.EventPos, didYouMean(cl.Event, ids), "claim %s: unknown event %q (events: %s)", cl.ID, cl.Event, strings.Join(ids, ", "))
+			return nil, a.errAt(cl.EventPos, input.DidYouMean(cl.Event, ids), "claim %s: unknown event %q (events: %s)", cl.ID, cl.Event, strings.Join(ids, ", "))
 		}
 	}
 	if err := a.checkCycles(); err != nil {
@@ -255,7 +250,7 @@ func (a *analysis) checkPlace(place string, p Pos) error {
 	}
 	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP) or a UN M49 area code (\"155\" Western Europe)"
 	if s := a.ds.Regions.Suggest(place); len(s) > 0 {
-		hint = "did you mean " + quoteJoin(s) + "?"
+		hint = "did you mean " + input.OrList(s) + "?"
 	}
 	return a.errAt(p, hint, "unknown place %q", place)
 }
@@ -357,7 +352,7 @@ func (b *built) link(id string) (link, bool) {
 func (b *built) addNoArrival(place, name string) {
 	for i := range b.noArrival {
 		if pn := &b.noArrival[i]; pn.place == place {
-			if !contains(pn.names, name) {
+			if !slices.Contains(pn.names, name) {
 				pn.names = append(pn.names, name)
 			}
 			return
@@ -381,17 +376,11 @@ func (a *analysis) arrivalNotes(b *built) []string {
 			out = append(out, "No arrival data for "+names[0]+" in "+a.placeName(p)+": its soft bound falls back to its firm bound.")
 			continue
 		}
-		out = append(out, "No arrival data for "+andList(names)+" in "+a.placeName(p)+": their soft bounds fall back to their firm bounds.")
+		out = append(out, "No arrival data for "+input.Join(names, "and")+" in "+a.placeName(p)+": their soft bounds fall back to their firm bounds.")
 	}
 	return out
 }
 
-func andList(list []string) string {
-	if len(list) < 2 {
-		return strings.Join(list, "")
-	}
-	return strings.Join(list[:len(list)-1], ", ") + " and " + list[len(list)-1]
-}
 
 // override picks, for a milestone on which sources disagree, a claim other
 // than the most conservative one. Key: material id, kind, area.
@@ -876,7 +865,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		}
 		what := strings.Join(names, " or ")
 		if len(f.groups) > 0 {
-			what = strings.Join(f.Materials, " or ") + " (read as " + orList(names) + ")"
+			what = strings.Join(f.Materials, " or ") + " (read as " + input.Join(names, "or") + ")"
 		}
 		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: what,
 			Method: f.Method, Sample: f.Sample, Confidence: string(f.Confidence)}
@@ -1316,7 +1305,7 @@ func deciding(claim []Span, w *Window) []string {
 	// The claim falls in a gap of the window: both sides count.
 	out = append(out, w.Earliest.Because...)
 	for _, id := range w.Latest.Because {
-		if !contains(out, id) {
+		if !slices.Contains(out, id) {
 			out = append(out, id)
 		}
 	}

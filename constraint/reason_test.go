@@ -1,9 +1,12 @@
-package constraint
+package constraint_test
 
 import (
 	"context"
 	"errors"
 	"strings"
+	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"testing"
 
 	"terminus/constraint/date"
@@ -24,13 +27,13 @@ func fixture(t *testing.T) *materials.Dataset {
 	return ds
 }
 
-func analyze(t *testing.T, yaml string) *Result {
+func analyze(t *testing.T, yaml string) *constraint.Result {
 	t.Helper()
-	c, err := ParseCase("case.yaml", []byte(yaml), "yaml")
+	c, err := casefile.Parse("case.yaml", []byte(yaml), input.YAML, input.Limits{})
 	if err != nil {
 		t.Fatalf("parse: %v", err)
 	}
-	res, err := Analyze(context.Background(), c, fixture(t), Options{})
+	res, err := constraint.Analyze(context.Background(), c, fixture(t), constraint.Options{})
 	if err != nil {
 		t.Fatalf("analyze: %v", err)
 	}
@@ -48,7 +51,7 @@ func day(s string) date.Day {
 
 // wantWindow checks one event's window at one tier; "" means unbounded,
 // "-" means the tier has no window (it conflicts).
-func wantWindow(t *testing.T, r *Result, event string, tier network.Tier, lo, hi string) {
+func wantWindow(t *testing.T, r *constraint.Result, event string, tier network.Tier, lo, hi string) {
 	t.Helper()
 	for _, e := range r.Events {
 		if e.ID != event {
@@ -64,7 +67,7 @@ func wantWindow(t *testing.T, r *Result, event string, tier network.Tier, lo, hi
 		if w == nil {
 			t.Fatalf("%s %s: no window, want %s…%s", event, tier, lo, hi)
 		}
-		check := func(which string, b Bound, want string) {
+		check := func(which string, b constraint.Bound, want string) {
 			if want == "" {
 				if b.Bounded {
 					t.Errorf("%s %s %s = %s, want unbounded", event, tier, which, b.Day.ISO())
@@ -101,9 +104,9 @@ func TestMilestoneTiers(t *testing.T) {
 		{"certain in JP", "JP", "certain", "1809-01-01", "1816-01-01", "1816-01-01"},
 		// No place: arrivals are not used.
 		{"no place", "", "certain", "1809-01-01", "1816-01-01", "1816-01-01"},
-		// Probable caps at firm: nothing at hard; firm takes made and sold.
+		// constraint.Probable caps at firm: nothing at hard; firm takes made and sold.
 		{"probable", "NL", "probable", "", "1816-01-01", "1830-01-01"},
-		// Possible caps at soft: everything lands in the soft tier.
+		// constraint.Possible caps at soft: everything lands in the soft tier.
 		{"possible", "NL", "possible", "", "", "1830-01-01"},
 	}
 	for _, tc := range tests {
@@ -183,10 +186,10 @@ claims:
 	if len(soft.Intervals) != 2 || soft.Intervals[0].Last != day("1920-12-31") || soft.Intervals[1].First != day("1950-01-01") || !soft.Intervals[1].OpenEnd {
 		t.Errorf("soft intervals = %+v, want [1900-01-01,1920-12-31] and [1950-01-01, open)", soft.Intervals)
 	}
-	want := map[string]Verdict{
-		"c1930": Doubtful,   // in the gap: only soft evidence (the withdrawal) is against it
-		"c1910": Consistent, // inside the first part
-		"c1890": Excluded,   // before both makings (hard)
+	want := map[string]constraint.Verdict{
+		"c1930": constraint.Doubtful,   // in the gap: only soft evidence (the withdrawal) is against it
+		"c1910": constraint.Consistent, // inside the first part
+		"c1890": constraint.Excluded,   // before both makings (hard)
 	}
 	for _, c := range r.Claims {
 		if c.Verdict != want[c.ID] {
@@ -196,7 +199,7 @@ claims:
 }
 
 func TestRecordsAndStrength(t *testing.T) {
-	// Record not_after 1912-06, firm by default: the firm latest is its last
+	// constraint.Record not_after 1912-06, firm by default: the firm latest is its last
 	// day, 1912-06-30; the hard tier is open. A record "on: 1850?" (firm,
 	// lowered to soft) puts the soft window inside 1850.
 	r := analyze(t, `events: [making, signing]
@@ -258,20 +261,20 @@ claims:
 	}
 	// The claim is judged at the hard tier, the weakest that agrees: 1845 is
 	// before the making of the violet (1856), so it is excluded.
-	if c := r.Claims[0]; c.Verdict != Excluded || c.JudgedAt != network.Hard {
+	if c := r.Claims[0]; c.Verdict != constraint.Excluded || c.JudgedAt != network.Hard {
 		t.Errorf("claim: %s at %s, want excluded at hard", c.Verdict, c.JudgedAt)
 	}
 }
 
 func TestVerdictLevels(t *testing.T) {
 	// fixture yellow in NL: hard ≥ 1809, firm ≥ 1816, soft ≥ 1830.
-	cases := map[string]Verdict{
-		"1800":      Excluded,   // before 1809
-		"1812":      Improbable, // after 1809, before 1816
-		"1820":      Doubtful,   // after 1816, before 1830
-		"1835":      Consistent, // after everything
-		"1805/1812": Improbable, // 1809–1812 survives at hard only
-		"c. 1826":   Consistent, // widened by P5Y to 1821–1831: meets 1830
+	cases := map[string]constraint.Verdict{
+		"1800":      constraint.Excluded,   // before 1809
+		"1812":      constraint.Improbable, // after 1809, before 1816
+		"1820":      constraint.Doubtful,   // after 1816, before 1830
+		"1835":      constraint.Consistent, // after everything
+		"1805/1812": constraint.Improbable, // 1809–1812 survives at hard only
+		"c. 1826":   constraint.Consistent, // widened by P5Y to 1821–1831: meets 1830
 	}
 	for claim, want := range cases {
 		t.Run(claim, func(t *testing.T) {
@@ -279,7 +282,7 @@ func TestVerdictLevels(t *testing.T) {
 			if got := r.Claims[0].Verdict; got != want {
 				t.Errorf("verdict %s, want %s", got, want)
 			}
-			if want != Consistent && strings.Join(r.Claims[0].Deciding, ",") != "f" {
+			if want != constraint.Consistent && strings.Join(r.Claims[0].Deciding, ",") != "f" {
 				t.Errorf("deciding = %v, want [f]", r.Claims[0].Deciding)
 			}
 		})
@@ -293,7 +296,7 @@ func TestDisagreementSensitivity(t *testing.T) {
 	// the disagreement changes the verdict.
 	r := analyze(t, "findings:\n  - {id: f, material: fixture blue}\nclaims:\n  - {date: \"1705\"}\n")
 	wantWindow(t, r, "making", network.Hard, "1704-01-01", "")
-	if r.Claims[0].Verdict != Improbable {
+	if r.Claims[0].Verdict != constraint.Improbable {
 		t.Errorf("verdict %s, want improbable", r.Claims[0].Verdict)
 	}
 	if len(r.Disagreements) != 1 {
@@ -363,9 +366,9 @@ func TestCaseErrors(t *testing.T) {
 		line, col  int
 		msg, hint  string
 	}{
-		{"unknown key", "title: x\nfindngs: []\n", 2, 1, `unknown key "findngs"`, `did you mean "findings"?`},
+		{"unknown key", "title: x\nfindngs: []\n", 2, 1, `unknown key "findngs"`, `did you mean 'findings'?`},
 		{"unknown material", "findings:\n  - material: fixture yelow\n", 2, 15, `unknown material "fixture yelow"`, "fixture yellow"},
-		{"unknown event", "findings:\n  - {material: fx-red, event: retuch}\nevents: [making, retouch]\n", 2, 31, `unknown event "retuch"`, `did you mean "retouch"?`},
+		{"unknown event", "findings:\n  - {material: fx-red, event: retuch}\nevents: [making, retouch]\n", 2, 31, `unknown event "retuch"`, `did you mean 'retouch'?`},
 		{"unknown place", "place: NLD\n", 1, 8, `unknown place "NLD"`, ""},
 		{"bad date", "records:\n  - {not_after: 1912-13}\n", 2, 22, "is not a date", "terminus date"},
 		{"two kinds", "records:\n  - {on: '1900', not_after: '1912'}\n", 2, 5, "only one of", "split"},
@@ -376,13 +379,13 @@ func TestCaseErrors(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			c, err := ParseCase("case.yaml", []byte(tc.yaml), "yaml")
+			c, err := casefile.Parse("case.yaml", []byte(tc.yaml), input.YAML, input.Limits{})
 			if err == nil {
-				_, err = Analyze(context.Background(), c, fixture(t), Options{})
+				_, err = constraint.Analyze(context.Background(), c, fixture(t), constraint.Options{})
 			}
-			var e *Error
+			var e *input.Error
 			if !errors.As(err, &e) {
-				t.Fatalf("error = %v (%T), want *Error", err, err)
+				t.Fatalf("error = %v (%T), want *input.Error", err, err)
 			}
 			if tc.line > 0 && e.Line != tc.line {
 				t.Errorf("line %d, want %d (%v)", e.Line, tc.line, e)
@@ -411,20 +414,20 @@ material = "fixture yellow"
 [[claims]]
 date = "1820"
 `
-	c, err := ParseCase("case.toml", []byte(toml), "toml")
+	c, err := casefile.Parse("case.toml", []byte(toml), input.TOML, input.Limits{})
 	if err != nil {
 		t.Fatal(err)
 	}
-	res, err := Analyze(context.Background(), c, fixture(t), Options{})
+	res, err := constraint.Analyze(context.Background(), c, fixture(t), constraint.Options{})
 	if err != nil {
 		t.Fatal(err)
 	}
-	if res.Claims[0].Verdict != Doubtful {
+	if res.Claims[0].Verdict != constraint.Doubtful {
 		t.Errorf("verdict %s, want doubtful (1820 is before the NL arrival 1830)", res.Claims[0].Verdict)
 	}
 	// A misspelt key in TOML is found on its line.
-	_, err = ParseCase("case.toml", []byte("title = \"x\"\n\n[[findings]]\nmaterial = \"fx-red\"\nconfidense = \"probable\"\n"), "toml")
-	var e *Error
+	_, err = casefile.Parse("case.toml", []byte("title = \"x\"\n\n[[findings]]\nmaterial = \"fx-red\"\nconfidense = \"probable\"\n"), input.TOML, input.Limits{})
+	var e *input.Error
 	if !errors.As(err, &e) || e.Line != 5 || !strings.Contains(e.Msg, `unknown key "confidense"`) {
 		t.Errorf("error = %v, want line 5 unknown key", err)
 	}
@@ -434,7 +437,7 @@ date = "1820"
 // not read as support; an event bounded on one side only does not.
 func TestUnboundedEventNote(t *testing.T) {
 	const note = "Nothing in the evidence bounds making (making of the object)"
-	hasNote := func(r *Result) bool {
+	hasNote := func(r *constraint.Result) bool {
 		for _, n := range r.Notes {
 			if strings.HasPrefix(n, note) {
 				return true
@@ -443,7 +446,7 @@ func TestUnboundedEventNote(t *testing.T) {
 		return false
 	}
 	r := analyze(t, "claims:\n  - {date: \"1850\"}\n")
-	if r.Claims[0].Verdict != Consistent || !hasNote(r) {
+	if r.Claims[0].Verdict != constraint.Consistent || !hasNote(r) {
 		t.Errorf("no evidence: verdict %s, notes %q; want consistent with the note", r.Claims[0].Verdict, r.Notes)
 	}
 	r = analyze(t, "findings:\n  - {id: f, material: fixture yellow}\nclaims:\n  - {date: \"1850\"}\n")

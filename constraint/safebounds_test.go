@@ -1,7 +1,10 @@
-package constraint
+package constraint_test
 
 import (
 	"strings"
+	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"testing"
 
 	"terminus/constraint/network"
@@ -12,7 +15,7 @@ import (
 // (testdata/fixture-materials.yaml); each expected value is worked out in
 // the comment beside it.
 
-func hasNote(r *Result, part string) bool {
+func hasNote(r *constraint.Result, part string) bool {
 	for _, n := range r.Notes {
 		if strings.Contains(n, part) {
 			return true
@@ -21,7 +24,7 @@ func hasNote(r *Result, part string) bool {
 	return false
 }
 
-func claimVerdict(t *testing.T, r *Result, id string) Verdict {
+func claimVerdict(t *testing.T, r *constraint.Result, id string) constraint.Verdict {
 	t.Helper()
 	for _, c := range r.Claims {
 		if c.ID == id {
@@ -40,7 +43,7 @@ func TestOpenStartGivesNoLowerBound(t *testing.T) {
 	// 1400 would be a hard floor and a claim of 1200 excluded.
 	r := analyze(t, "findings:\n  - {id: f, material: fixture insect a}\nclaims:\n  - {id: c, date: \"1200\"}\n")
 	wantWindow(t, r, "making", network.Hard, "", "")
-	if v := claimVerdict(t, r, "c"); v != Consistent {
+	if v := claimVerdict(t, r, "c"); v != constraint.Consistent {
 		t.Errorf("claim 1200: %s, want consistent", v)
 	}
 	if !hasNote(r, "No lower bound from the first making of fixture insect a: fx-a gives up to 1519, which leaves its start open.") {
@@ -79,16 +82,16 @@ func TestWithdrawalsBelongToPlaces(t *testing.T) {
 func TestMarkersAndFamilies(t *testing.T) {
 	tests := []struct {
 		name, material, claim string
-		want                  Verdict
+		want                  constraint.Verdict
 		why                   string
 	}{
 		// fixture insects: fx-insect-b (-0999) and fx-insect-c (1520).
-		{"family bounded by the earliest", "fixture insects", "1000", Consistent, "1000 is after -0999, the earliest member"},
-		{"family excludes before all", "fixture insects", "-1200", Excluded, "before every member"},
+		{"family bounded by the earliest", "fixture insects", "1000", constraint.Consistent, "1000 is after -0999, the earliest member"},
+		{"family excludes before all", "fixture insects", "-1200", constraint.Excluded, "before every member"},
 		// fixture acid also holds fx-insect-a, whose start is open: no bound.
-		{"marker with an open member", "fixture acid", "-1200", Consistent, "one member has no lower bound"},
+		{"marker with an open member", "fixture acid", "-1200", constraint.Consistent, "one member has no lower bound"},
 		// The specific name: fx-insect-c alone, made 1520.
-		{"specific name is one material", "fixture insect c", "1000", Excluded, "1000 is before 1520"},
+		{"specific name is one material", "fixture insect c", "1000", constraint.Excluded, "1000 is before 1520"},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -111,10 +114,10 @@ func TestMarkersAndFamilies(t *testing.T) {
 // without the mark stays an error with a suggestion.
 func TestUnlistedFinding(t *testing.T) {
 	r := analyze(t, "findings:\n  - {id: f, material: a red lake not in any dataset, unlisted: true}\n  - {id: g, material: fixture late}\nclaims:\n  - {id: c, date: \"1960\"}\n")
-	if v := claimVerdict(t, r, "c"); v != Consistent {
+	if v := claimVerdict(t, r, "c"); v != constraint.Consistent {
 		t.Errorf("claim 1960: %s, want consistent", v)
 	}
-	var row *Evidence
+	var row *constraint.Evidence
 	for i := range r.Evidence {
 		if r.Evidence[i].ID == "f" {
 			row = &r.Evidence[i]
@@ -126,15 +129,15 @@ func TestUnlistedFinding(t *testing.T) {
 	if !hasNote(r, "f: a red lake not in any dataset is not in the dataset and gives no bound.") {
 		t.Errorf("notes: %q", r.Notes)
 	}
-	c, err := ParseCase("case.yaml", []byte("findings:\n  - {id: f, material: fixture yelow}\n"), "yaml")
+	c, err := casefile.Parse("case.yaml", []byte("findings:\n  - {id: f, material: fixture yelow}\n"), input.YAML, input.Limits{})
 	if err != nil {
 		t.Fatal(err)
 	}
-	_, err = Analyze(t.Context(), c, fixture(t), Options{})
+	_, err = constraint.Analyze(t.Context(), c, fixture(t), constraint.Options{})
 	if err == nil || !strings.Contains(err.Error(), `unknown material "fixture yelow"`) {
 		t.Fatalf("unknown material without the mark: err %v", err)
 	}
-	if h := err.(*Error).Hint(); !strings.Contains(h, "fixture yellow") {
+	if h := err.(*input.Error).Hint(); !strings.Contains(h, "fixture yellow") {
 		t.Errorf("hint %q does not suggest the near name", h)
 	}
 }

@@ -10,6 +10,8 @@ import (
 
 	"terminus/cmd/terminus/internal/report"
 	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"terminus/materials"
 )
 
@@ -41,7 +43,7 @@ func BenchmarkAnalyze(b *testing.B) {
 	}
 	cases, _ := filepath.Glob("../../../../examples/*/case.*")
 	for _, path := range cases {
-		c, err := constraint.ReadCaseFile(path)
+		c, err := casefile.Read(path, input.Limits{})
 		if err != nil {
 			b.Fatal(err)
 		}

@@ -4,12 +4,15 @@ import (
 	"bytes"
 	"fmt"
 	"io"
+	"strconv"
 	"strings"
 
 	"github.com/spf13/cobra"
 
 	"terminus/cmd/terminus/internal/report"
 	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"terminus/constraint/network"
 	"terminus/materials"
 )
@@ -33,15 +36,45 @@ func writerFor(format string) (func(io.Writer, *constraint.Result) error, error)
 
 // parseTier reads a --fail-on value.
 func parseTier(s string) (network.Tier, error) {
-	switch strings.ToLower(s) {
-	case "hard":
-		return network.Hard, nil
-	case "firm":
-		return network.Firm, nil
-	case "soft":
-		return network.Soft, nil
+	t, err := network.ParseTier(s)
+	if err != nil {
+		return 0, fmt.Errorf("unknown --fail-on %q: expected hard, firm or soft", s)
 	}
-	return 0, fmt.Errorf("unknown --fail-on %q: expected hard, firm or soft", s)
+	return t, nil
+}
+
+// parseSize reads a --max-input-size value: a number of bytes, or with KiB,
+// MiB or GiB (K, M and G mean the same).
+func parseSize(s string) (int64, error) {
+	t := strings.TrimSpace(s)
+	mult := int64(1)
+	for _, u := range []struct {
+		suffix string
+		mult   int64
+	}{{"GiB", 1 << 30}, {"MiB", 1 << 20}, {"KiB", 1 << 10}, {"G", 1 << 30}, {"M", 1 << 20}, {"K", 1 << 10}, {"B", 1}} {
+		if rest, ok := strings.CutSuffix(t, u.suffix); ok {
+			t, mult = strings.TrimSpace(rest), u.mult
+			break
+		}
+	}
+	n, err := strconv.ParseInt(t, 10, 64)
+	if err != nil || n <= 0 || n > (1<<40)/mult {
+		return 0, fmt.Errorf("--max-input-size %q: expected a size such as 16MiB, 512KiB or 100000", s)
+	}
+	return n * mult, nil
+}
+
+// readCase reads the case at path; "-" is standard input, in the format
+// given (YAML when none is).
+func readCase(s IO, path, format string, l input.Limits) (*constraint.Case, error) {
+	if path == "-" {
+		f, err := input.ParseFormat(format)
+		if err != nil {
+			return nil, err
+		}
+		return casefile.ReadFrom("(standard input)", s.In, f, l)
+	}
+	return casefile.Read(path, l)
 }
 
 // datasetWith is the built-in dataset with the user's files laid over it,
@@ -82,6 +115,8 @@ func NewCheckCmd(s IO) *cobra.Command {
 		matFiles     []string
 		failOn       string
 		maxConflicts int
+		maxSize      string
+		inFormat     string
 	)
 	cmd := &cobra.Command{
 		Use:   "check CASE...",
@@ -92,12 +127,17 @@ and prints for every event the earliest and latest plausible date at each
 strength tier (hard, firm, soft) with the evidence behind every bound, the
 verdict on each claim, and any conflicts with their cheapest correction.
 
+CASE "-" reads the case from standard input (YAML unless --input-format
+says otherwise). A case file may be at most 16 MiB and nest at most 64
+levels (--max-input-size raises the size).
+
 Exit status: 0 when the evidence agrees and every claim is consistent; 1 when
 a claim is not consistent or the evidence conflicts at the --fail-on tier or a
 stronger one; 2 for bad input.`,
-		Example: `  terminus check examples/retouched-panel/case.yaml
-  terminus check --format md case.yaml > dating-section.md
-  terminus check --fail-on firm --materials my-pigments.yaml case.toml`,
+		Example: `  terminus check examples/retouched-landscape/case.yaml
+  terminus check --format md examples/dated-letter/case.yaml > dating-section.md
+  terminus check --fail-on firm examples/oak-panel/case.yaml
+  terminus check - < examples/print-series/case.yaml`,
 		Args: func(cmd *cobra.Command, args []string) error {
 			if len(args) == 0 {
 				return usageError(&hintError{err: fmt.Errorf("check needs a case file"), hint: "terminus check CASE.yaml; 'terminus init case.yaml' writes a starter case"})
@@ -113,6 +153,15 @@ stronger one; 2 for bad input.`,
 			if err != nil {
 				return usageError(err)
 			}
+			if maxConflicts < 1 {
+				return usageError(fmt.Errorf("--max-conflicts %d: expected 1 or more", maxConflicts))
+			}
+			limits := input.Limits{}
+			if maxSize != "" {
+				if limits.MaxBytes, err = parseSize(maxSize); err != nil {
+					return usageError(err)
+				}
+			}
 			ds, dsNotes, err := datasetWith(matFiles)
 			if err != nil {
 				return usageError(err)
@@ -122,13 +171,13 @@ stronger one; 2 for bad input.`,
 			var out bytes.Buffer
 			fail := false
 			for i, path := range args {
-				c, err := constraint.ReadCaseFile(path)
+				c, err := readCase(s, path, inFormat, limits)
 				if err != nil {
 					return usageError(err)
 				}
 				res, err := constraint.Analyze(cmd.Context(), c, ds, constraint.Options{MaxConflicts: maxConflicts})
 				if err != nil {
-					if _, ok := err.(*constraint.Error); ok {
+					if _, ok := err.(*input.Error); ok {
 						return usageError(err)
 					}
 					return &ExitError{Code: 2, Err: fmt.Errorf("%s: %w", path, err)}
@@ -156,5 +205,7 @@ stronger one; 2 for bad input.`,
 	f.StringArrayVar(&matFiles, "materials", nil, "a materials file (YAML or TOML) to add over the built-in dataset; repeatable")
 	f.StringVar(&failOn, "fail-on", "soft", "exit 1 when a claim fails or the evidence conflicts at this tier or a stronger one: hard, firm or soft")
 	f.IntVar(&maxConflicts, "max-conflicts", 10, "the most minimal conflicts to list per tier")
+	f.StringVar(&maxSize, "max-input-size", "", "the largest case file to read (default 16MiB)")
+	f.StringVar(&inFormat, "input-format", "yaml", "the format of a case read from standard input ('-'): yaml, toml or json")
 	return cmd
 }

@@ -76,7 +76,7 @@ func TestCheckBadInput(t *testing.T) {
 		want       []string
 	}{
 		{"unknown material", "findings:\n  - material: fixture yelow\n", []string{"case.yaml:2:15: finding finding-1: unknown material", "terminus: hint: did you mean"}},
-		{"misspelt key", "title: x\nclaimz: []\n", []string{"case.yaml:2:1: case file: unknown key \"claimz\"", "did you mean \"claims\"?"}},
+		{"misspelt key", "title: x\nclaimz: []\n", []string{"case.yaml:2:1: case file: unknown key \"claimz\"", "did you mean 'claims'?"}},
 		{"bad yaml", "title: [x\n", []string{"case.yaml:", "not valid YAML"}},
 	}
 	for _, tc := range tests {

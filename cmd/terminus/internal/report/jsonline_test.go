@@ -9,7 +9,9 @@ import (
 	"testing"
 
 	"terminus/constraint"
+	"terminus/constraint/casefile"
 	"terminus/constraint/date"
+	"terminus/constraint/input"
 	"terminus/constraint/network"
 	"terminus/materials"
 )
@@ -62,7 +64,7 @@ func TestJSONLineMatchesEncodingJSON(t *testing.T) {
 		if err != nil {
 			t.Fatal(err)
 		}
-		c, err := constraint.ParseCase(p, data, "yaml")
+		c, err := casefile.Parse(p, data, input.YAML, input.Limits{})
 		if err != nil {
 			t.Fatal(err)
 		}

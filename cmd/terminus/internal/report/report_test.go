@@ -9,6 +9,8 @@ import (
 	"unicode/utf8"
 
 	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"terminus/materials"
 )
 
@@ -20,7 +22,7 @@ func result(t *testing.T, text string) *constraint.Result {
 	if err != nil {
 		t.Fatal(err)
 	}
-	c, err := constraint.ParseCase("case.yaml", []byte(text), "yaml")
+	c, err := casefile.Parse("case.yaml", []byte(text), input.YAML, input.Limits{})
 	if err != nil {
 		t.Fatal(err)
 	}

@@ -10,6 +10,7 @@ import (
 	"testing"
 
 	"terminus/constraint"
+	"terminus/constraint/input"
 )
 
 // FuzzJSONLine checks that any line becomes a case or an error of our type
@@ -45,9 +46,9 @@ func FuzzJSONLine(f *testing.F) {
 		if err == nil {
 			return
 		}
-		var ce *constraint.Error
+		var ce *input.Error
 		if !errors.As(err, &ce) {
-			t.Fatalf("error %v (%T) is not a *constraint.Error", err, err)
+			t.Fatalf("error %v (%T) is not a *input.Error", err, err)
 		}
 		if ce.File != "f.jsonl" || ce.Line != 7 {
 			t.Fatalf("error %v is not placed on f.jsonl line 7", err)
@@ -93,9 +94,9 @@ func FuzzCSV(f *testing.F) {
 			last = r.line
 			pr, err := parse(r)
 			if err != nil {
-				var ce *constraint.Error
+				var ce *input.Error
 				if !errors.As(err, &ce) || ce.Line < r.line || ce.Line > lines {
-					t.Fatalf("error %v (%T) is not a *constraint.Error on the record's lines", err, err)
+					t.Fatalf("error %v (%T) is not a *input.Error on the record's lines", err, err)
 				}
 				continue
 			}

@@ -9,12 +9,14 @@ import (
 	"strings"
 
 	"terminus/constraint"
+	"terminus/constraint/casefile"
 	"terminus/constraint/date"
+	"terminus/constraint/input"
 	"terminus/constraint/network"
 )
 
-func recordErr(file string, line, col int, msg, suggest string) *constraint.Error {
-	return &constraint.Error{File: file, Line: line, Column: col, Msg: msg, Suggest: suggest}
+func recordErr(file string, line, col int, msg, suggest string) *input.Error {
+	return &input.Error{File: file, Line: line, Column: col, Msg: msg, Suggestion: suggest}
 }
 
 // parsed is a record made ready for the reasoner.
@@ -25,7 +27,7 @@ type parsed struct {
 }
 
 // parse turns a raw record into a case. The error, if any, is a
-// *constraint.Error whose file and line are the input's.
+// *input.Error whose file and line are the input's.
 func parse(r rawRecord) (parsed, error) {
 	p := parsed{id: "line-" + strconv.Itoa(r.line)}
 	if r.err != nil {
@@ -40,7 +42,7 @@ func parse(r rawRecord) (parsed, error) {
 // onLine moves an error that the case decoder or the reasoner placed in a
 // one-line document onto the input's line.
 func onLine(err error, file string, line int) error {
-	var ce *constraint.Error
+	var ce *input.Error
 	if errors.As(err, &ce) {
 		ce.File = file
 		if ce.Line > 1 {
@@ -61,7 +63,7 @@ func parseJSONLine(r rawRecord, p parsed) (parsed, error) {
 		// counts it as a line break (as YAML does): keep the columns.
 		text = bytes.ReplaceAll(text, []byte("\r"), []byte(" "))
 	}
-	c, err := constraint.ParseCase(name, text, "json")
+	c, err := casefile.Parse(name, text, input.JSON, input.Limits{})
 	if err != nil {
 		// The id may still be readable before the mistake.
 		if id, _, e := takeID(text); e == nil && id != "" {

@@ -11,6 +11,7 @@ import (
 	"time"
 
 	"terminus/constraint"
+	"terminus/constraint/input"
 	"terminus/materials"
 )
 
@@ -293,7 +294,7 @@ func check(ctx context.Context, j job, opt Options, fails func(*constraint.Resul
 		}
 	}
 	if err != nil {
-		var ce *constraint.Error
+		var ce *input.Error
 		if !errors.As(err, &ce) {
 			err = fmt.Errorf("%s:%d: %w", o.File, o.Line, err)
 		}

@@ -14,7 +14,8 @@ import (
 	"testing"
 	"time"
 
-	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"terminus/materials"
 )
 
@@ -101,8 +102,8 @@ func TestTakeID(t *testing.T) {
 	// The rest decodes as a case, and positions in it are those of the line.
 	line := `{"id": "a-1", "title": "t", "claimz": []}`
 	_, rest, _ := takeID([]byte(line))
-	_, err := constraint.ParseCase("c.jsonl", rest, "json")
-	var ce *constraint.Error
+	_, err := casefile.Parse("c.jsonl", rest, input.JSON, input.Limits{})
+	var ce *input.Error
 	if !errors.As(err, &ce) || ce.Column != strings.Index(line, `"claimz"`)+1 {
 		t.Errorf("error %v: want the column of \"claimz\" in the line, %d", err, strings.Index(line, `"claimz"`)+1)
 	}

@@ -1,37 +1,33 @@
-package constraint
+package input
 
 import (
 	"fmt"
 	"strconv"
 	"unicode/utf16"
 	"unicode/utf8"
-
-	"gopkg.in/yaml.v3"
 )
 
-// This file reads a JSON case (RFC 8259) straight into the yaml.Node tree
-// that the case decoder walks, with the line and column of every value, as
-// the YAML reader would give them for the same text (a differential test
-// holds the two together). Reading JSON through the YAML reader works but
-// costs most of a survey's time; this reader is about ten times faster and
-// says "not valid JSON" with the place of the mistake. Unlike the YAML
-// reader it accepts every escape of JSON, "\/" included.
-
-// maxJSONDepth bounds the nesting of arrays and objects; a case needs five.
-const maxJSONDepth = 64
+// This file reads JSON (RFC 8259) straight into the tree, with the line
+// and column of every value as the YAML reader would give them for the
+// same text (a differential test holds the two together). Reading JSON
+// through the YAML reader works but costs most of a survey's time; this
+// reader is about ten times faster and says "not valid JSON" with the
+// place of the mistake. Unlike the YAML reader it accepts every escape of
+// JSON, "\/" included.
 
 type jsonReader struct {
-	name string
-	data []byte
-	pos  int // byte offset
-	line int // 1-based
-	col  int // 1-based, in characters
+	name     string
+	data     []byte
+	pos      int // byte offset
+	line     int // 1-based
+	col      int // 1-based, in characters
+	maxDepth int
 }
 
-// jsonToNode parses data as one JSON value. Empty input (white space only)
+// parseJSON parses data as one JSON value. Empty input (white space only)
 // returns nil and no error.
-func jsonToNode(name string, data []byte) (*yaml.Node, error) {
-	r := &jsonReader{name: name, data: data, line: 1, col: 1}
+func parseJSON(name string, data []byte, maxDepth int) (*Node, error) {
+	r := &jsonReader{name: name, data: data, line: 1, col: 1, maxDepth: maxDepth}
 	r.space()
 	if r.pos == len(r.data) {
 		return nil, nil
@@ -42,14 +38,14 @@ func jsonToNode(name string, data []byte) (*yaml.Node, error) {
 	}
 	r.space()
 	if r.pos < len(r.data) {
-		return nil, r.fail("unexpected text after the end of the case (one JSON object per file, or per line)")
+		return nil, r.fail("unexpected text after the end of the value (one JSON object per file, or per line)")
 	}
 	return n, nil
 }
 
 func (r *jsonReader) fail(format string, args ...any) *Error {
 	return &Error{File: r.name, Line: r.line, Column: r.col, Msg: "not valid JSON: " + fmt.Sprintf(format, args...),
-		Suggest: `a case is one JSON object, e.g. {"findings": [{"material": "smalt"}], "claims": [{"date": "1650"}]}`}
+		Suggestion: `a case is one JSON object, e.g. {"findings": [{"material": "smalt"}], "claims": [{"date": "1650"}]}`}
 }
 
 // advance moves over n bytes that hold no line break.
@@ -90,13 +86,13 @@ func (r *jsonReader) space() {
 	}
 }
 
-func (r *jsonReader) node(kind yaml.Kind, tag string) *yaml.Node {
-	return &yaml.Node{Kind: kind, Tag: tag, Line: r.line, Column: r.col}
+func (r *jsonReader) node(kind Kind, typ Type) *Node {
+	return &Node{Kind: kind, Type: typ, Line: int32(r.line), Column: int32(r.col)}
 }
 
-func (r *jsonReader) value(depth int) (*yaml.Node, error) {
-	if depth > maxJSONDepth {
-		return nil, r.fail("nested more than %d levels deep", maxJSONDepth)
+func (r *jsonReader) value(depth int) (*Node, error) {
+	if depth > r.maxDepth {
+		return nil, r.fail("nested more than %d levels deep", r.maxDepth)
 	}
 	if r.pos >= len(r.data) {
 		return nil, r.fail("the text ends where a value was expected")
@@ -107,8 +103,8 @@ func (r *jsonReader) value(depth int) (*yaml.Node, error) {
 	case c == '[':
 		return r.array(depth)
 	case c == '"':
-		n := r.node(yaml.ScalarNode, "!!str")
-		n.Style = yaml.DoubleQuotedStyle
+		n := r.node(Scalar, String)
+		n.Quoted = true
 		s, err := r.str()
 		if err != nil {
 			return nil, err
@@ -118,9 +114,12 @@ func (r *jsonReader) value(depth int) (*yaml.Node, error) {
 	case c == '-' || c >= '0' && c <= '9':
 		return r.number()
 	default:
-		for _, lit := range [...]struct{ text, tag string }{{"true", "!!bool"}, {"false", "!!bool"}, {"null", "!!null"}} {
+		for _, lit := range [...]struct {
+			text string
+			typ  Type
+		}{{"true", Bool}, {"false", Bool}, {"null", Null}} {
 			if len(r.data)-r.pos >= len(lit.text) && string(r.data[r.pos:r.pos+len(lit.text)]) == lit.text {
-				n := r.node(yaml.ScalarNode, lit.tag)
+				n := r.node(Scalar, lit.typ)
 				n.Value = lit.text
 				r.advance(len(lit.text))
 				return n, nil
@@ -131,9 +130,8 @@ func (r *jsonReader) value(depth int) (*yaml.Node, error) {
 	}
 }
 
-func (r *jsonReader) object(depth int) (*yaml.Node, error) {
-	n := r.node(yaml.MappingNode, "!!map")
-	n.Style = yaml.FlowStyle
+func (r *jsonReader) object(depth int) (*Node, error) {
+	n := r.node(Mapping, String)
 	r.advance(1)
 	r.space()
 	if r.pos < len(r.data) && r.data[r.pos] == '}' {
@@ -179,9 +177,8 @@ func (r *jsonReader) object(depth int) (*yaml.Node, error) {
 	}
 }
 
-func (r *jsonReader) array(depth int) (*yaml.Node, error) {
-	n := r.node(yaml.SequenceNode, "!!seq")
-	n.Style = yaml.FlowStyle
+func (r *jsonReader) array(depth int) (*Node, error) {
+	n := r.node(Sequence, String)
 	r.advance(1)
 	r.space()
 	if r.pos < len(r.data) && r.data[r.pos] == ']' {
@@ -314,10 +311,10 @@ func (r *jsonReader) hex4(at int) (rune, bool) {
 	return rune(v), true
 }
 
-// number reads a JSON number; its text is the node's value, tagged !!int
-// or !!float as the YAML reader would tag it.
-func (r *jsonReader) number() (*yaml.Node, error) {
-	n := r.node(yaml.ScalarNode, "!!int")
+// number reads a JSON number; its text is the node's value, typed an
+// integer or a float as the YAML reader would type it.
+func (r *jsonReader) number() (*Node, error) {
+	n := r.node(Scalar, Int)
 	i := r.pos
 	digits := func() int {
 		from := i
@@ -336,14 +333,14 @@ func (r *jsonReader) number() (*yaml.Node, error) {
 	}
 	if i < len(r.data) && r.data[i] == '.' {
 		i++
-		n.Tag = "!!float"
+		n.Type = Float
 		if digits() == 0 {
 			return nil, r.fail("a number needs digits after its decimal point")
 		}
 	}
 	if i < len(r.data) && (r.data[i] == 'e' || r.data[i] == 'E') {
 		i++
-		n.Tag = "!!float"
+		n.Type = Float
 		if i < len(r.data) && (r.data[i] == '+' || r.data[i] == '-') {
 			i++
 		}
