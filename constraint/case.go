@@ -125,4 +125,3 @@ type Claim struct {
 	By       string
 	Pos      Pos
 }
-

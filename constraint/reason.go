@@ -105,7 +105,6 @@ func groupNote(f *resolvedFinding, g groupUse) string {
 	return f.ID + " names " + g.name + ", " + what + ": " + input.Join(names, "or") + ". The finding is read as any of them, bounded by the earliest."
 }
 
-
 func (a *analysis) errAt(p Pos, suggest, format string, args ...any) *input.Error {
 	return input.At(a.c.File, p, suggest, format, args...)
 }
@@ -380,7 +379,6 @@ func (a *analysis) arrivalNotes(b *built) []string {
 	}
 	return out
 }
-
 
 // override picks, for a milestone on which sources disagree, a claim other
 // than the most conservative one. Key: material id, kind, area.
