@@ -32,6 +32,10 @@ func TestInksAgainstSources(t *testing.T) {
 		{"hectograph-copy", materials.KindMade, "", "1869", "Wikipedia, Hectograph (2014)"},
 		// Letterology 2011: the Hektograph transfer tablet introduced in 1876 (after the Early Office Museum).
 		{"hectograph-copy", materials.KindSold, "", "1876", "Letterology 2011"},
+		// Akaroa Mail, 13 April 1880, after Ridout in Nature: recently introduced into Britain.
+		{"hectograph-copy", materials.KindArrived, "GB", "1879/1880", "Akaroa Mail 1880, after Ridout in Nature"},
+		// Akaroa Mail, 13 April 1880: many pads lately sold in Christchurch.
+		{"hectograph-copy", materials.KindArrived, "NZ", "1879/1880", "Akaroa Mail 1880"},
 		// Wikipedia, Photostat machine: stencil duplicators surfaced in 1874 (the article's background section).
 		{"stencil-duplicator-ink", materials.KindMade, "", "1874", "Wikipedia, Photostat machine"},
 		// Britannica (students), mimeograph: the machine originated with Edison's electric pen of 1875 and Dick's mimeograph of 1884.
@@ -92,6 +96,10 @@ func TestInksAgainstSources(t *testing.T) {
 		{"inkjet-dye-ink", materials.KindMade, "", "1951", "PrinterSuppliesSearch 2008"},
 		// PrinterSuppliesSearch 2008: Siemens brought drop-on-demand ink-jet printing to market with the piezoelectric PT-80 serial character printer.
 		{"inkjet-dye-ink", materials.KindSold, "", "1977", "PrinterSuppliesSearch 2008"},
+		// eHow, History of Ink Jet Printers: Siemens strip chart recorders, the first commercial continuous ink-jet devices, 1951.
+		{"inkjet-dye-ink", materials.KindSold, "", "1951", "eHow, History of Ink Jet Printers"},
+		// eHow, History of Ink Jet Printers: the IBM 4640 ink-jet printer, 1976.
+		{"inkjet-dye-ink", materials.KindSold, "", "1976", "eHow, History of Ink Jet Printers"},
 		// net.micro, April 1984: HP's ThinkJet thermal ink-jet printer announced in March 1984, with ink cartridges good for 500 pages.
 		{"inkjet-dye-ink", materials.KindSold, "", "1984", "net.micro, April 1984"},
 		// Thermal inkjet and textile printing (2011 repost): HP introduced the first commercial desktop inkjet, the ThinkJet, in 1984; Canon's BJ-80 followed in 1985.
@@ -108,6 +116,8 @@ func TestInksAgainstSources(t *testing.T) {
 		{"blueprint-paper", materials.KindMade, "", "1842", "NYPL, Atkins British Algae"},
 		// The Blueprint (2009 repost): Marion and Company of Paris marketed Herschel's process as ferroprussiate paper for copying plans from 1872.
 		{"blueprint-paper", materials.KindSold, "", "1872", "The Blueprint (2009 repost)"},
+		// Wikipedia, Photostat machine, Background: the blue process of the early 1870s.
+		{"blueprint-paper", materials.KindSold, "", "1870/1874", "Wikipedia, Photostat machine"},
 		// The Blueprint (2009 repost): local manufacture: Marion and Company, Paris.
 		{"blueprint-paper", materials.KindArrived, "FR", "1872", "The Blueprint (2009 repost)"},
 		// The Blueprint (2009 repost): first import: shown at the Philadelphia Centennial Exposition of 1876.
