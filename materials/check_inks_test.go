@@ -98,6 +98,10 @@ func TestInksAgainstSources(t *testing.T) {
 		{"inkjet-dye-ink", materials.KindSold, "", "1977", "PrinterSuppliesSearch 2008"},
 		// eHow, History of Ink Jet Printers: Siemens strip chart recorders, the first commercial continuous ink-jet devices, 1951.
 		{"inkjet-dye-ink", materials.KindSold, "", "1951", "eHow, History of Ink Jet Printers"},
+		// HP Computer Museum, inkjet accessories: the ThinkJet and its ink cartridges, 1984.
+		{"inkjet-dye-ink", materials.KindSold, "", "1984", "HP Computer Museum, inkjet accessories"},
+		// net.micro, April 1984: ThinkJets to be made in Oregon and Singapore.
+		{"inkjet-dye-ink", materials.KindArrived, "US", "1984", "net.micro, April 1984"},
 		// eHow, History of Ink Jet Printers: the IBM 4640 ink-jet printer, 1976.
 		{"inkjet-dye-ink", materials.KindSold, "", "1976", "eHow, History of Ink Jet Printers"},
 		// net.micro, April 1984: HP's ThinkJet thermal ink-jet printer announced in March 1984, with ink cartridges good for 500 pages.
