@@ -1,0 +1,163 @@
+package materials_test
+
+import (
+	"strings"
+	"testing"
+
+	"terminus/materials"
+)
+
+// pigmentsFile is the family file these checks cover: twentieth-century
+// organic pigments (arylide and diarylide yellows, beta-naphthol and BON-acid
+// reds, perylenes, isoindolines, quinacridone variants and others) and the
+// later mixed-metal-oxide and sulphide inorganics.
+const pigmentsFile = "modern-organic-pigments.yaml"
+
+// TestPigmentsAgainstSources checks that the embedded dataset holds dates as
+// the named published sources give them. One row per value; the source and
+// the place in it stand beside the value. Rows written from memory say so.
+func TestPigmentsAgainstSources(t *testing.T) {
+	d := checkBuiltin(t)
+	rows := []sourceRow{
+		// Heritage Science 2022 (Das Deutsche Farbenbuch, 1925), Table 1: Pigment Red 4 discovered 1906.
+		{"chlorinated-para-red", materials.KindMade, "", "1906", "Heritage Science 2022, Farbenbuch, Table 1"},
+		// Same table: Pigment Red 4 found by Raman in Siegle's oil colour "Echthellrot PR" on a 1925 chart.
+		{"chlorinated-para-red", materials.KindAttested, "DE", "1925", "Heritage Science 2022, Farbenbuch, Table 1"},
+		// Same table: Pigment Red 57 (BONS) discovered 1903.
+		{"lithol-rubine", materials.KindMade, "", "1903", "Heritage Science 2022, Farbenbuch, Table 1"},
+		// Same table: Pigment Red 57 (PR57:1?) found by Raman in Turm's watercolour "Karminlack", 1925 chart.
+		{"lithol-rubine", materials.KindAttested, "DE", "1925", "Heritage Science 2022, Farbenbuch, Table 1"},
+		// Seilnacht, pigment lexicon, Pigment Yellow 74: a successor of the Hansa yellow marketed in 1909.
+		{"arylide-yellow-5gx", materials.KindMade, "", "1909/..", "Seilnacht, Brillantgelb PY74, Geschichte"},
+		// chsopensource.org, PO 5: dated 1907.
+		{"dinitraniline-orange", materials.KindMade, "", "1907", "chsopensource.org, PO 5"},
+		// sandrinemaugy.com (2016), perylene family: the first perylene discovered in 1912.
+		{"perylene-scarlet", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		{"perylene-maroon", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		{"perylene-red-190", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		{"perylene-dianhydride", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		{"perylene-violet", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		{"perylene-green", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		{"perylene-black-32", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
+		// BASF, US patent 8,026,361 (filed 2007): PY185 known for about 30 years, on the market for about 25.
+		{"isoindoline-yellow-185", materials.KindMade, "", "1977~", "US 8,026,361, description"},
+		{"isoindoline-yellow-185", materials.KindSold, "", "1982~", "US 8,026,361, description"},
+		// handprint.com, magenta page: PR122 quinacridone magenta printed with 1958 (meaning not stated).
+		{"quinacridone-magenta-122", materials.KindSold, "", "1958?", "handprint.com, magenta pigments"},
+		// German Wikipedia, Mischphasenoxidpigment, Titanat-Pigmente: the rutile titanates, no date.
+		{"chrome-titanate-yellow", materials.KindMade, "", "19XX", "de.wikipedia, Mischphasenoxidpigment"},
+		{"nickel-titanate-yellow", materials.KindMade, "", "19XX", "de.wikipedia, Mischphasenoxidpigment"},
+
+		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments.
+		{"hansa-yellow-10g", materials.KindMade, "", "1909/1912", "Herbst and Hunger 2004 (from memory)"},
+		{"arylide-yellow-rn", materials.KindMade, "", "1909/..", "Herbst and Hunger 2004 (from memory)"},
+		{"arylide-yellow-4gx", materials.KindMade, "", "1909/..", "Herbst and Hunger 2004 (from memory)"},
+		{"arylide-yellow-fgl", materials.KindMade, "", "1909/..", "Herbst and Hunger 2004 (from memory)"},
+		{"diarylide-yellow-aaa", materials.KindMade, "", "1911", "Herbst and Hunger 2004 (from memory)"},
+		{"diarylide-yellow-aaa", materials.KindSold, "", "1935~", "Herbst and Hunger 2004 (from memory)"},
+		{"diarylide-yellow-aamx", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
+		{"diarylide-yellow-aaot", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
+		{"diarylide-yellow-hr", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
+		{"pyrazolone-orange-13", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
+		{"pyrazolone-orange-34", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
+		{"pyrazolone-red-38", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
+		{"parachlor-red", materials.KindMade, "", "1880/..", "Herbst and Hunger 2004 (from memory)"},
+		{"orthonitraniline-orange", materials.KindMade, "", "1880/..", "Herbst and Hunger 2004 (from memory)"},
+		{"dinitraniline-orange", materials.KindMade, "", "1907", "Herbst and Hunger 2004 (from memory)"},
+		{"permanent-red-2b", materials.KindMade, "", "1903/..", "Herbst and Hunger 2004 (from memory)"},
+		{"naphthol-red-f3rk", materials.KindMade, "", "1960/1969", "Herbst and Hunger 2004 (from memory)"},
+		{"perylene-scarlet", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
+		{"perylene-maroon", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
+		{"perylene-red-190", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
+		{"perylene-violet", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
+		{"perinone-orange", materials.KindMade, "", "1924~", "Herbst and Hunger 2004 (from memory)"},
+		{"isoindoline-yellow-139", materials.KindMade, "", "1960/1979", "Herbst and Hunger 2004 (from memory)"},
+		{"isoindoline-orange-69", materials.KindMade, "", "1960/1989", "Herbst and Hunger 2004 (from memory)"},
+		{"isoindolinone-yellow-109", materials.KindMade, "", "1957/..", "Herbst and Hunger 2004 (from memory)"},
+		{"isoindolinone-yellow-110", materials.KindMade, "", "1957/..", "Herbst and Hunger 2004 (from memory)"},
+		{"quinacridone-magenta-122", materials.KindMade, "", "1896/..", "Herbst and Hunger 2004 (from memory)"},
+		{"quinacridone-magenta-202", materials.KindMade, "", "1896/..", "Herbst and Hunger 2004 (from memory)"},
+		{"quinacridone-burnt-orange", materials.KindMade, "", "1896/..", "Herbst and Hunger 2004 (from memory)"},
+		{"quinacridone-gold", materials.KindMade, "", "1896/..", "Herbst and Hunger 2004 (from memory)"},
+		{"anthraquinoid-red-177", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
+		{"anthraquinone-yellow-147", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
+		{"dibromanthanthrone", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
+		{"nickel-azo-yellow", materials.KindMade, "", "1960/1979", "Herbst and Hunger 2004 (from memory)"},
+		{"nickel-azo-green", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
+		{"cobalt-titanate-green", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
+		{"cerium-sulphide", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
+		{"cerium-sulphide", materials.KindSold, "", "199X?", "Herbst and Hunger 2004 (from memory)"},
+	}
+	checkSourceRows(t, d, pigmentsFile, rows)
+}
+
+// TestPigmentsNames checks that the pigments resolve by the names the trade
+// and the brief use: Colour Index short and long forms, the Colour Index short and long forms.
+func TestPigmentsNames(t *testing.T) {
+	d := checkBuiltin(t)
+	for _, r := range []struct{ name, id string }{
+		{"PY3", "hansa-yellow-10g"},
+		{"Pigment Yellow 3", "hansa-yellow-10g"},
+		{"lithol rubine", "lithol-rubine"},
+		{"PR57", "lithol-rubine"},
+		{"PR57:1", "lithol-rubine"},
+		{"PR48:2", "permanent-red-2b"},
+		{"PR170", "naphthol-red-f3rk"},
+		{"PO5", "dinitraniline-orange"},
+		{"PV29", "perylene-violet"},
+		{"PBk31", "perylene-green"},
+		{"PY139", "isoindoline-yellow-139"},
+		{"PY150", "nickel-azo-yellow"},
+		{"PBr24", "chrome-titanate-yellow"},
+		{"PY53", "nickel-titanate-yellow"},
+		{"PG50", "cobalt-titanate-green"},
+	} {
+		t.Run(r.name, func(t *testing.T) {
+			if m := mustLookup(t, d, r.name); m.ID != r.id {
+				t.Errorf("Lookup(%q) = %s, want %s", r.name, m.ID, r.id)
+			}
+		})
+	}
+}
+
+// TestPigmentsFileShape checks what this family promises: every material is
+// a synthetic pigment with a Colour Index name (cerium sulphide excepted, see
+// its note) and a made milestone, every source has a type, and the file adds
+// no lint problem.
+func TestPigmentsFileShape(t *testing.T) {
+	d := checkBuiltin(t)
+	for _, p := range materials.Lint(d) {
+		if strings.HasSuffix(p.File, pigmentsFile) {
+			t.Errorf("lint: %s", p)
+		}
+	}
+	n := 0
+	for _, m := range d.Materials {
+		if !strings.HasSuffix(m.File, pigmentsFile) {
+			continue
+		}
+		n++
+		if m.Class != "pigment" || m.Origin != "synthetic" {
+			t.Errorf("%s: class %q origin %q, want a synthetic pigment", m.ID, m.Class, m.Origin)
+		}
+		if m.ColourIndex == nil && m.ID != "cerium-sulphide" {
+			t.Errorf("%s has no Colour Index name", m.ID)
+		}
+		if len(m.Claims(materials.KindMade, "")) == 0 {
+			t.Errorf("%s has no made milestone", m.ID)
+		}
+		for _, ms := range m.Milestones {
+			s, ok := d.Source(ms.Source)
+			if !ok {
+				t.Errorf("%s cites unknown source %q", m.ID, ms.Source)
+				continue
+			}
+			if s.Type == "" && strings.HasSuffix(s.File, pigmentsFile) {
+				t.Errorf("source %s has no type", s.Key)
+			}
+		}
+	}
+	if n < 42 {
+		t.Errorf("%s holds %d materials, want at least 42", pigmentsFile, n)
+	}
+}
