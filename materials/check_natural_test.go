@@ -52,12 +52,20 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"dyers-broom", materials.KindAttested, "TR", "1500/1799", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: Post-Byzantine ecclesiastical textiles of Mount Athos, 16th to early 20th century.
 		{"dyers-broom", materials.KindAttested, "GR", "1500/1930", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
+		// Dean 2012, Sawwort (after Cardon 2007): used in Europe since the Middle Ages and prized in Tuscany in the 14th and 15th centuries (after Cardon 2007); the start is left open.
+		{"sawwort", materials.KindMade, "", "../13XX", "Dean 2012, Sawwort (after Cardon 2007)"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: buckthorn berries found in Ottoman textiles of the 16th to 18th century; the start is left open.
 		{"rhamnus-berry-dye", materials.KindMade, "", "../1799", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: Ottoman textiles of the 16th to 18th century in the Topkapı Palace Museum, Istanbul.
 		{"rhamnus-berry-dye", materials.KindAttested, "TR", "1500/1799", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// TCF DATU, Berberis, Historical Data: European sources document barberry as a dye as early as the 14th century (after Cannon and Cannon, 1994); Asian use may be older, so the ...
 		{"barberry", materials.KindMade, "", "../13XX", "TCF DATU, Berberis, Historical Data"},
+		// Gao et al., J. Archaeol. Sci. (2024), abstract: Berberis among the yellow dyes of Wei and Jin textiles (220-420 CE) from Bazhou, Xinjiang.
+		{"barberry", materials.KindMade, "", "0220/0420", "Gao et al., J. Archaeol. Sci. (2024), abstract"},
+		// Gao et al., J. Archaeol. Sci. (2024), abstract: Archaeological textiles of the Wei and Jin dynasties (220-420 CE) from Bazhou, Xinjiang.
+		{"barberry", materials.KindAttested, "CN", "0220/0420", "Gao et al., J. Archaeol. Sci. (2024), abstract"},
+		// Four Tang silks of the China National Silk Museum (2024), abstract: Four Tang dynasty silk fabrics in the China National Silk Museum.
+		{"barberry", materials.KindAttested, "CN", "0618/0907", "Four Tang silks of the China National Silk Museum (2024), abstract"},
 		// TCF DATU, Berberis, Historical Data: first documented use: European sources of the 14th century.
 		{"barberry", materials.KindArrived, "150", "13XX", "TCF DATU, Berberis, Historical Data"},
 		// Nuruosmaniye colour database, Sumac: used since antiquity, more for tanning than for dyeing; the start is left open.
@@ -90,6 +98,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"turkey-red-madder", materials.KindArrived, "FR", "../1785", "Lowengard 2006, chapter Turkey Red (quoting Brown, History of Glasgow)"},
 		// From memory, not read here: Cardon, Natural Dyes (2007): local manufacture: dye works with Levantine dyers in Normandy and Languedoc from about 1747.
 		{"turkey-red-madder", materials.KindArrived, "FR", "1747?", "Cardon, Natural Dyes (2007) (from memory)"},
+		// Wertz et al., ICOM-CC 2017, abstract and introduction: local manufacture: Turkey red was produced in Western Europe from the mid-18th to the early 20th century; dyers began ...
+		{"turkey-red-madder", materials.KindArrived, "155", "1750~", "Wertz et al., ICOM-CC 2017, abstract and introduction"},
 		// Lowengard 2006, chapter Turkey Red (quoting Brown, History of Glasgow): local manufacture: George Mackintosh brought Papillon from Rouen and built a Turkey red dye-house at ...
 		{"turkey-red-madder", materials.KindArrived, "GB", "1785", "Lowengard 2006, chapter Turkey Red (quoting Brown, History of Glasgow)"},
 		// J. Raman Spectrosc. 35 (2004), Lindisfarne Gospels, abstract: earliest dated use found: the Insular palette of the Lindisfarne Gospels (about 715) and two nearly contemporary ...
@@ -106,6 +116,12 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"gromwell", materials.KindArrived, "JP", "../11XX", "JAANUS, shikon and murasaki"},
 		// Dunhuang embroidery dye palette (British Museum), abstract: Embroidery Sakyamuni preaching on Vulture Peak, from the cave temples at Dunhuang, thought to be of the 8th ...
 		{"gromwell", materials.KindAttested, "CN", "07XX?", "Dunhuang embroidery dye palette (British Museum), abstract"},
+		// Gao et al., J. Archaeol. Sci. (2024), abstract: Phellodendron amurense and P. chinense among the yellow dyes of Wei and Jin textiles (220-420 CE) from Bazhou, Xinjiang, ...
+		{"amur-cork-tree", materials.KindMade, "", "0220/0420", "Gao et al., J. Archaeol. Sci. (2024), abstract"},
+		// Gao et al., J. Archaeol. Sci. (2024), abstract: Archaeological textiles of the Wei and Jin dynasties (220-420 CE) from Bazhou, Xinjiang.
+		{"amur-cork-tree", materials.KindAttested, "CN", "0220/0420", "Gao et al., J. Archaeol. Sci. (2024), abstract"},
+		// Four Tang silks of the China National Silk Museum (2024), abstract: Four Tang dynasty silk fabrics in the China National Silk Museum.
+		{"amur-cork-tree", materials.KindAttested, "CN", "0618/0907", "Four Tang silks of the China National Silk Museum (2024), abstract"},
 		// Trip.com moment, Yellow from plant dye: the Northern Wei agricultural treatise Qimin yaoshu (about 533-544) records dyeing paper with Amur cork tree against insects; dates of ...
 		{"amur-cork-tree", materials.KindMade, "", "0533/0544?", "Trip.com moment, Yellow from plant dye"},
 		// Nara National Museum, Shōsō-in glossary, kihada: papers dyed with it were common for sutra scrolls of the Shōsō-in period; the start is left open.
@@ -138,6 +154,10 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"chinese-gallnut", materials.KindMade, "", "../17XX", "Getty AAT, gall (plant material)"},
 		// From memory, not read here: Pigment Compendium (2004): in Egyptian painting by the New Kingdom and probably earlier; the start is left open.
 		{"egyptian-green", materials.KindMade, "", "../-1069", "Pigment Compendium (2004) (from memory)"},
+		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: the green of the wall paintings of the tomb of Nakht-Djehuty (TT189), of the time of Ramesses II; the ...
+		{"egyptian-green", materials.KindMade, "", "../-1211", "Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract"},
+		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: Wall paintings of the tomb of Nakht-Djehuty (TT189), El-Qurna necropolis, Thebes, time of Ramesses II ...
+		{"egyptian-green", materials.KindAttested, "EG", "-1278/-1211", "Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract"},
 		// The Egyptian green pigment, Archaeometry 45 (2003), abstract: ancient raw cakes of Egyptian blue and green pigment and samples from paintings in the Louvre were analysed; the ...
 		{"egyptian-green", materials.KindMade, "", "../0499", "The Egyptian green pigment, Archaeometry 45 (2003), abstract"},
 		// Shen et al., Heritage Science (2024), abstract: the green of the wall paintings of the Kizil Grottoes (3rd-8th century), the earliest Buddhist caves of China.
@@ -146,6 +166,10 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"atacamite", materials.KindMade, "", "0386/0581?", "Lei, Studies in Conservation 57 (2012), abstract"},
 		// From memory, not read here: Pigment Compendium (2004): copper chlorides also occur on ancient Mediterranean and Egyptian painted objects, as pigment or alteration; the start ...
 		{"atacamite", materials.KindMade, "", "../-0029", "Pigment Compendium (2004) (from memory)"},
+		// Painting the Palace of Apries II, Heritage Science (2019), abstract: among the pigments of the painted reliefs of the Palace of Apries (Apries reigned 589-570 BCE, from ...
+		{"atacamite", materials.KindMade, "", "../-0569", "Painting the Palace of Apries II, Heritage Science (2019), abstract"},
+		// Painting the Palace of Apries II, Heritage Science (2019), abstract: Painted limestone reliefs of the Palace of Apries, Memphis, excavated by Petrie in 1908-1910 (Ny ...
+		{"atacamite", materials.KindAttested, "EG", "-0588/-0569", "Painting the Palace of Apries II, Heritage Science (2019), abstract"},
 		// Shen et al., Heritage Science (2024), abstract: Wall paintings of the Kizil Grottoes, Xinjiang (3rd-8th century).
 		{"atacamite", materials.KindAttested, "CN", "0200/0799", "Shen et al., Heritage Science (2024), abstract"},
 		// De Haro et al., Heritage 6 (2023), abstract: Andean colonial paintings of the Viceroyalty of Peru (16th-18th century), among them the altarpiece of the church of Ancoraimes, ...
@@ -194,6 +218,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"calcite", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
 		// Mogao pigments page (dhdzgy.com): gypsum, talc, kaolin and calcite are the whites of the Mogao murals; the start is left open.
 		{"calcite", materials.KindMade, "", "../1368", "Mogao pigments page (dhdzgy.com)"},
+		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: Wall paintings of the tomb of Nakht-Djehuty (TT189), El-Qurna necropolis, Thebes, time of Ramesses II ...
+		{"calcite", materials.KindAttested, "EG", "-1278/-1211", "Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract"},
 		// Pigment analysis: potentialities and problems, abstract: Egyptian ushabti of the New Kingdom (period dates conventional).
 		{"calcite", materials.KindAttested, "EG", "-1549/-1069", "Pigment analysis: potentialities and problems, abstract"},
 		// Lead(II) sulfide and pararealgar on a 13th-century manuscript, abstract: used throughout as a deep yellow in an early 13th-century Byzantine/Syriac Gospel lectionary; since ...
@@ -208,12 +234,22 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"jarosite", materials.KindMade, "", "../-1069", "Pigment Compendium (2004) (from memory)"},
 		// Siddall, Minerals 8 (2018), introduction: the earliest evidence of red ochre (hematite) extraction, in Africa, 300 to 200 thousand years ago.
 		{"mineral-hematite", materials.KindMade, "", "Y-300000/Y-200000", "Siddall, Minerals 8 (2018), introduction"},
+		// Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract: haematite the main red of the Palaeolithic paintings of Roucadour cave, France; the start is left open.
+		{"mineral-hematite", materials.KindMade, "", "../-9999", "Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract"},
+		// Uda et al., NIM B (2000), Malqata palace, abstract: Painted walls of the Malqata palace, Thebes, founded by Amenhotep III (18th Dynasty; reign dates conventional, from memory).
+		{"mineral-hematite", materials.KindAttested, "EG", "-1389/-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: haematite among the ochres in bowls and wall paintings of Pompeii and the Vesuvian area; the start is left open.
 		{"mineral-hematite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
+		// Uda et al., NIM B (2000), Malqata palace, abstract: goethite the yellow of the painted walls of Amenhotep III's Malqata palace; the start is left open.
+		{"mineral-goethite", materials.KindMade, "", "../-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
+		// Uda et al., NIM B (2000), Malqata palace, abstract: Painted walls of the Malqata palace, Thebes, founded by Amenhotep III (18th Dynasty; reign dates conventional, from memory).
+		{"mineral-goethite", materials.KindAttested, "EG", "-1389/-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: goethite among the ochres in bowls and wall paintings of Pompeii and the Vesuvian area; the start is left open.
 		{"mineral-goethite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
 		// From memory, not read here: Pigment Compendium (2004): goethite earths are prehistoric pigments; the start is left open.
 		{"mineral-goethite", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
+		// Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract: magnetite grains with haematite, manganese oxide and carbon in dark red paint of the Palaeolithic Roucadour ...
+		{"magnetite", materials.KindMade, "", "../-9999", "Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract"},
 		// From memory, not read here: Pigment Compendium (2004): a black of prehistoric painting; the start is left open.
 		{"magnetite", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
 		// Tübingen, GRAPHTEC project page: graphite decoration of pottery spread over most of the Balkans during the 5th millennium BCE.
