@@ -232,14 +232,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"pararealgar", materials.KindAttested, "IT", "1540/1594", "Pararealgar by Raman microspectroscopy (Tintoretto), abstract"},
 		// From memory, not read here: Pigment Compendium (2004): identified in Egyptian painting by the New Kingdom; the start is left open.
 		{"jarosite", materials.KindMade, "", "../-1069", "Pigment Compendium (2004) (from memory)"},
-		// Siddall, Minerals 8 (2018), introduction: the earliest evidence of red ochre (hematite) extraction, in Africa, 300 to 200 thousand years ago.
-		{"mineral-hematite", materials.KindMade, "", "Y-300000/Y-200000", "Siddall, Minerals 8 (2018), introduction"},
-		// Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract: haematite the main red of the Palaeolithic paintings of Roucadour cave, France; the start is left open.
-		{"mineral-hematite", materials.KindMade, "", "../-9999", "Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract"},
-		// Uda et al., NIM B (2000), Malqata palace, abstract: Painted walls of the Malqata palace, Thebes, founded by Amenhotep III (18th Dynasty; reign dates conventional, from memory).
-		{"mineral-hematite", materials.KindAttested, "EG", "-1389/-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
-		// J. Raman Spectrosc. abstract on Pompeii pigments: haematite among the ochres in bowls and wall paintings of Pompeii and the Vesuvian area; the start is left open.
-		{"mineral-hematite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
 		// Uda et al., NIM B (2000), Malqata palace, abstract: goethite the yellow of the painted walls of Amenhotep III's Malqata palace; the start is left open.
 		{"mineral-goethite", materials.KindMade, "", "../-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
 		// Uda et al., NIM B (2000), Malqata palace, abstract: Painted walls of the Malqata palace, Thebes, founded by Amenhotep III (18th Dynasty; reign dates conventional, from memory).
