@@ -208,6 +208,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"huntite", materials.KindMade, "", "-2685/-2180", "Boczar 2023, Exotic colour and pigments"},
 		// Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey): El Goresy's survey of 1500 samples from 126 dated sites found huntite entering use under Hatshepsut and ...
 		{"huntite", materials.KindMade, "", "-1478/-1424", "Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey)"},
+		// J. Raman Spectrosc. abstract on Pompeii pigments: the white powder in a Pompeian pigment bowl is mainly huntite; the start is left open.
+		{"huntite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
 		// Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey): Royal tomb painting of the reign of Ramesses VI (1143-1136 BCE), Thebes, in El Goresy's survey.
 		{"huntite", materials.KindAttested, "EG", "-1142/-1135", "Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey)"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: White powder in a pigment bowl from Pompeii, buried in 79 CE (National Archaeological Museum of Naples).
