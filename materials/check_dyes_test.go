@@ -224,6 +224,22 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"thioflavine-t", materials.KindMade, "", "1888", "Britannica 1911, Primuline"},
 		{"thioflavine-s", materials.KindMade, "", "1887/1911", "Britannica 1911, Primuline"},
 		{"chloramine-yellow", materials.KindMade, "", "1887/1911", "Britannica 1911, Primuline"},
+		// kraska.biz, Sulfur compounds as chromophores, History (web, no author): Immedial black 1897, Sulfur Black T 1899.
+		{"immedial-black", materials.KindMade, "", "1897", "kraska.biz, sulphur dyes, History"},
+		{"sulphur-black-t", materials.KindMade, "", "1899", "kraska.biz, sulphur dyes, History"},
+		// From memory, not read here (Colour Index; Zollinger): approximate dates of dyes added without a source read.
+		{"benzopurpurin-4b", materials.KindMade, "", "1885~", "Colour Index (from memory)"},
+		{"chrysamine-g", materials.KindMade, "", "1884~", "Colour Index (from memory)"},
+		{"chrysophenine-g", materials.KindMade, "", "1886~", "Colour Index (from memory)"},
+		{"rhodamine-6g", materials.KindMade, "", "1892~", "Colour Index (from memory)"},
+		{"phloxine-b", materials.KindMade, "", "187X/188X", "Colour Index (from memory)"},
+		{"pararosaniline", materials.KindMade, "", "1856/1878", "Zollinger (from memory)"},
+		{"victoria-blue-r", materials.KindMade, "", "1883~", "Colour Index (from memory)"},
+		{"naphthol-blue-black", materials.KindMade, "", "1891~", "Colour Index (from memory)"},
+		{"orange-g", materials.KindMade, "", "1878~", "Colour Index (from memory)"},
+		{"methyl-orange", materials.KindMade, "", "1876~", "Colour Index (from memory)"},
+		{"gallocyanine", materials.KindMade, "", "1881~", "Colour Index (from memory)"},
+		{"hydron-blue", materials.KindMade, "", "1908~", "Colour Index (from memory)"},
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
 		// Byfield, TSA Symposium 1994, pp. 45-51, opening section: Yoruba dyers took up synthetic dyes from the 1930s.
