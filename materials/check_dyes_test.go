@@ -224,6 +224,41 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"thioflavine-t", materials.KindMade, "", "1888", "Britannica 1911, Primuline"},
 		{"thioflavine-s", materials.KindMade, "", "1887/1911", "Britannica 1911, Primuline"},
 		{"chloramine-yellow", materials.KindMade, "", "1887/1911", "Britannica 1911, Primuline"},
+		// Tamburini et al., Heritage Science 11 (2023), Karen garments, abstract: synthetic dyes in the later textiles (open start, by the early 1900s).
+		{"synthetic-alizarin", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"rhodamine-b", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"malachite-green", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"brilliant-green", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"auramine", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"naphthol-yellow-s", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"chrysamine-g", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"crystal-violet", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		// Qingdao City Gazetteer, vol. 33, dyes: Weixin Chemical Works, sulphur dye from September 1919, methyl violet after 1922.
+		{"sulphur-black-t", materials.KindArrived, "CN", "1919-09", "Qingdao City Gazetteer, vol. 33"},
+		{"methyl-violet", materials.KindArrived, "CN", "1922", "Qingdao City Gazetteer, vol. 33"},
+		// Shanghai Dyestuffs 2013 (1), abstract: the 80th anniversary of China's first dye, Sulphur Black 1.
+		{"sulphur-black-t", materials.KindArrived, "CN", "../1933", "Shanghai Dyestuffs 2013, abstract"},
+		// Heibonsha World Encyclopedia, 染料: sulphur black in Okayama from 1914; alizarin red at Miike about then.
+		{"sulphur-black-t", materials.KindArrived, "JP", "1914", "Heibonsha, 染料"},
+		{"synthetic-alizarin", materials.KindArrived, "JP", "1914~", "Heibonsha, 染料"},
+		// National Museum of Nature and Science, record 904990630001: Miike indigo in full production from 1933.
+		{"synthetic-indigo", materials.KindArrived, "JP", "1933", "Kahaku 904990630001"},
+		// Tariff Commission, Report on the Dyestuff Industry (1954): sulphur black made in India by then.
+		{"sulphur-black-t", materials.KindArrived, "IN", "../1954", "Tariff Commission 1954"},
+		// Routledge chapter abstract on Uşak: anilines in use before the early 1870s.
+		{"fuchsine", materials.KindArrived, "TR", "../1873", "Uşak chapter abstract"},
+		// Heritage 8 (2025), Palestinian garments, abstract: rhodamine B and orange II.
+		{"rhodamine-b", materials.KindArrived, "PS", "../1920", "Heritage 2025, Palestinian garments"},
+		{"orange-ii", materials.KindArrived, "PS", "../1920", "Heritage 2025, Palestinian garments"},
+		// Pinto and Seixas de Melo, Pure Appl. Chem. 90 (2018), abstract: eosin Y in Portuguese stamps of 1857-1909.
+		{"eosin-y", materials.KindArrived, "PT", "../1909", "Pinto and Seixas de Melo 2018"},
+		// Open-start French arrivals from the dated French attestations above.
+		{"methyl-violet", materials.KindArrived, "FR", "../1888-06", "RCE 2018, Van Gogh's inks"},
+		{"crystal-violet", materials.KindArrived, "FR", "../1888-06", "Neevel et al., Van Gogh's drawing inks"},
+		{"eosin-y", materials.KindArrived, "FR", "../1890-05", "Heritage Science 2017, Irises and Roses"},
+		{"eosin-lake", materials.KindArrived, "FR", "../1890-05", "Heritage Science 2017, Irises and Roses"},
+		{"tartrazine", materials.KindArrived, "FR", "../1908", "Autochromes Lumière, Dyeing the Starch"},
+		{"erythrosine", materials.KindArrived, "FR", "../1908", "Autochromes Lumière, Dyeing the Starch"},
 		// kraska.biz, Sulfur compounds as chromophores, History (web, no author): Immedial black 1897, Sulfur Black T 1899.
 		{"immedial-black", materials.KindMade, "", "1897", "kraska.biz, sulphur dyes, History"},
 		{"sulphur-black-t", materials.KindMade, "", "1899", "kraska.biz, sulphur dyes, History"},
