@@ -259,6 +259,15 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"eosin-lake", materials.KindArrived, "FR", "../1890-05", "Heritage Science 2017, Irises and Roses"},
 		{"tartrazine", materials.KindArrived, "FR", "../1908", "Autochromes Lumière, Dyeing the Starch"},
 		{"erythrosine", materials.KindArrived, "FR", "../1908", "Autochromes Lumière, Dyeing the Starch"},
+		// Pinto, Oliveira and Seixas de Melo, Analyst 150 (2025), abstract: a mauveine sample from Perkin for the anniversary (taken as 1906, uncertain).
+		{"mauveine", materials.KindAttested, "GB", "1906?", "Pinto et al. 2025, abstract"},
+		// German Wikipedia, "Sudanfarbstoffe": Sudan III in animal experiments by 1886 (no start recorded).
+		{"sudan-iii", materials.KindMade, "", "../1886", "de.wikipedia, Sudanfarbstoffe"},
+		// German Wikipedia, "Acid Red 73", Geschichte: patented by Hoffmann and Cassella in 1885.
+		{"brilliant-crocein-m", materials.KindMade, "", "1885", "de.wikipedia, Acid Red 73"},
+		// Tamburini et al. 2023, Karen garments: orange I in the later textiles; made date from memory.
+		{"orange-i", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
+		{"orange-i", materials.KindMade, "", "1876~", "Colour Index (from memory)"},
 		// kraska.biz, Sulfur compounds as chromophores, History (web, no author): Immedial black 1897, Sulfur Black T 1899.
 		{"immedial-black", materials.KindMade, "", "1897", "kraska.biz, sulphur dyes, History"},
 		{"sulphur-black-t", materials.KindMade, "", "1899", "kraska.biz, sulphur dyes, History"},
