@@ -268,6 +268,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		// Tamburini et al. 2023, Karen garments: orange I in the later textiles; made date from memory.
 		{"orange-i", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
 		{"orange-i", materials.KindMade, "", "1876~", "Colour Index (from memory)"},
+		// Japan Blue (company blog), 2017-04-22: synthetic indigo imported into Japan from Meiji 31 (1898).
+		{"synthetic-indigo", materials.KindArrived, "JP", "1898", "Japan Blue, 日本の藍と明治 −インド藍"},
 		// kraska.biz, Sulfur compounds as chromophores, History (web, no author): Immedial black 1897, Sulfur Black T 1899.
 		{"immedial-black", materials.KindMade, "", "1897", "kraska.biz, sulphur dyes, History"},
 		{"sulphur-black-t", materials.KindMade, "", "1899", "kraska.biz, sulphur dyes, History"},
