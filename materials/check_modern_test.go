@@ -235,6 +235,8 @@ func TestModernAgainstSources(t *testing.T) {
 		// Shanghai paper industry gazetteer (1996), ch. 1: imported machine paper by the 1870s; the Shanghai mill begun in 1882.
 		{"fourdrinier-machine-paper", materials.KindArrived, "CN", "1882", "Shanghai paper gazetteer 1996, ch. 1"},
 		{"fourdrinier-machine-paper", materials.KindArrived, "CN", "1803/1879", "Shanghai paper gazetteer 1996, ch. 1"},
+		// Reference-work chapter "PCBs and associated aromatics", pp. 851-857: open uses of PCBs phased out about 1971.
+		{"pcb-carbonless-copy-paper", materials.KindWithdrawn, "US", "1971~", "Reference chapter, PCBs and associated aromatics"},
 		// Wikipedia, "Film stock": the industry on safety film internationally by 1955.
 		{"cellulose-nitrate-film-base", materials.KindWithdrawn, "", "1955", "Wikipedia, Film stock"},
 	}
