@@ -111,17 +111,17 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Scott, Copper and Bronze in Art (Getty, 2002), p. 323: Brunswick green made from around 1795.
 		{"brunswick-green", materials.KindSold, "", "1795~", "Scott 2002, p. 323"},
 		// Texas State Historical Association, Handbook of Texas, Carbon black industry: Wright's process, 1864.
-		{"carbon-black", materials.KindMade, "", "1864", "Handbook of Texas, Carbon black industry"},
+		{"gas-black", materials.KindMade, "", "1864", "Handbook of Texas, Carbon black industry"},
 		// Wikipedia, "Manganese violet", History: first documented production by Winsor & Newton in 1890.
 		{"manganese-violet", materials.KindSold, "", "1890", "Wikipedia, Manganese violet, History"},
 		// Eremin et al., Journal of Raman Spectroscopy 39 (2008), abstract: in 19th-century Thai manuscripts Prussian blue, then synthetic ultramarine, replaced indigo.
 		{"prussian-blue", materials.KindArrived, "TH", "18XX", "Eremin et al. 2008, abstract"},
-		{"synthetic-ultramarine", materials.KindArrived, "TH", "18XX", "Eremin et al. 2008, abstract"},
+		{"synthetic-ultramarine", materials.KindArrived, "TH", "1826/1899", "Eremin et al. 2008, abstract (bounded below by Guimet)"},
 		// Eremin et al. 2008, abstract: chrome yellow beside gamboge in one later 19th-century Thai manuscript.
 		{"chrome-yellow", materials.KindArrived, "TH", "1850/1899", "Eremin et al. 2008, abstract"},
 		// Wheeler, Burgio and Shulman, Journal of the Institute of Conservation 34 (2011), abstract: Prussian blue and chrome yellow on 19th-century Kalighat paintings.
 		{"prussian-blue", materials.KindArrived, "IN", "18XX", "Wheeler et al. 2011, abstract"},
-		{"chrome-yellow", materials.KindArrived, "IN", "18XX", "Wheeler et al. 2011, abstract"},
+		{"chrome-yellow", materials.KindArrived, "IN", "1809/1899", "Wheeler et al. 2011, abstract (bounded below by Vauquelin)"},
 		// Marx, blue paints in Ethiopian church paintings, summary: synthetic ultramarine spread in the second half of the 19th century.
 		{"synthetic-ultramarine", materials.KindArrived, "ET", "1850/1899", "Marx, Ethiopian blues, summary"},
 		// Cutts et al., British Museum Technical Research Bulletin 4 (2010), summary: early synthetic ultramarine in a painting of after 1855.
@@ -225,7 +225,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 		// two cobalt violets, are different pigments with different dates.
 		pairs := [][2]string{
 			{"viridian", "chromium oxide green"},
-			{"cobalt violet", "cobalt violet light"},
+			{"cobalt violet dark", "cobalt violet light"},
 			{"cadmium red", "cadmium red lithopone"},
 			{"ultramarine violet", "ultramarine red"},
 		}
