@@ -240,6 +240,19 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Mass et al. 2013 (Matisse, 1905-06) and Monico et al. 2020 (Munch, The Scream, about 1910).
 		{"cadmium-yellow", materials.KindAttested, "FR", "1905/1906", "Mass et al. 2013, abstract"},
 		{"cadmium-yellow", materials.KindAttested, "NO", "1910~", "Monico et al. 2020, abstract"},
+		// Journal of the Institute of Conservation 41 (2018), abstract: Hooker's green on 19th-century Chinese export watercolours.
+		{"hookers-green", materials.KindArrived, "CN", "18XX", "JIC 2018, Chinese export watercolours"},
+		// Heritage Science 2019, abstract: Prussian blue the main blue of Burmese yun lacquer, 18th-20th centuries.
+		{"prussian-blue", materials.KindArrived, "MM", "1704/1999", "Heritage Science 2019, Burmese yun lacquer"},
+		// Kantoğlu et al., Restaurator 39 (2018), abstract: Prussian blue and zinc oxide in Ottoman documents.
+		{"prussian-blue", materials.KindArrived, "TR", "1704/1922", "Kantoğlu et al. 2018, abstract"},
+		{"zinc-white", materials.KindArrived, "TR", "1782/1922", "Kantoğlu et al. 2018, abstract"},
+		// Wikipedia, "Cobalt blue": Saxon blue colour works in the 19th century.
+		{"cobalt-blue", materials.KindArrived, "DE", "18XX", "Wikipedia, Cobalt blue"},
+		// Merriam-Webster, word history of "lithopone": Leger's Belgian patent application of 1869.
+		{"lithopone", materials.KindArrived, "BE", "1869", "Merriam-Webster, lithopone"},
+		// From memory (the grant year), the patent text read: Cumberland's US patent 767 for a lead sulfate white.
+		{"lead-sulfate-white", materials.KindMade, "", "1838", "US patent 767 (year from memory)"},
 	}
 	checkSourceRows(t, d, inorganicFile, rows)
 }
