@@ -208,7 +208,7 @@ func TestStatsSmall(t *testing.T) {
 	want := Stats{Materials: 2, Milestones: 6, Documented: 1, FromMemory: 5, DocumentedLocated: 1,
 		Withdrawn: 1, Disagreeing: 1, Sources: 2, SourcesCited: 2}
 	got := s
-	got.ByClass, got.ByOrigin, got.ByKind, got.ArrivedByRegion, got.ArrivedByPlace = nil, nil, nil, nil, nil
+	got.ByClass, got.ByOrigin, got.ByKind, got.ArrivedByRegion, got.ArrivedByPlace, got.BySourceClass = nil, nil, nil, nil, nil, nil
 	if fmt.Sprint(got) != fmt.Sprint(want) {
 		t.Errorf("stats: got %+v, want %+v", got, want)
 	}
@@ -220,6 +220,50 @@ func TestStatsSmall(t *testing.T) {
 	}
 	if got := s.DocumentedShare(); got < 0.166 || got > 0.167 {
 		t.Errorf("documented share: got %v, want 1/6", got)
+	}
+}
+
+func TestStatsSourcesAndAttestations(t *testing.T) {
+	d, err := Load(mapFS(map[string]string{"a.yaml": `sources:
+  - {key: blog, cite: "A blog post", type: blog}
+  - {key: paper, cite: "A paper, abstract", type: paper}
+  - {key: wiki, cite: "An encyclopedia entry", type: reference}
+materials:
+  - id: a
+    class: pigment
+    origin: synthetic
+    markers: [a marker]
+    families: [a family]
+    milestones:
+      - {kind: made, date: "1850", source: blog, basis: documented}
+      - {kind: made, date: "1850/1852", source: paper, basis: documented}
+      - {kind: sold, date: "1860", source: blog, basis: documented}
+      - {kind: sold, date: "1870", source: paper, basis: documented}
+      - {kind: arrived, place: JP, date: "1880", source: blog, basis: documented}
+      - {kind: attested, date: "1855", place: FR, object: "a dated sketch", source: wiki, basis: documented}
+  - id: b
+    class: pigment
+    origin: synthetic
+    families: [a family]
+    milestones:
+      - {kind: made, date: "1900", source: paper, basis: documented}
+      - {kind: attested, date: "1901", object: "a dated print", source: paper, basis: documented}
+`}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := d.Stats()
+	// Weak alone: the blog's sale (the paper's 1870 does not overlap 1860)
+	// and its arrival (nothing else in JP); its made claim of 1850 overlaps
+	// the paper's 1850/1852 and is backed up.
+	if s.WeakAlone != 2 {
+		t.Errorf("weak alone: got %d, want 2", s.WeakAlone)
+	}
+	if want := map[string]int{"web": 3, "scholarly": 4, "encyclopedia": 1}; fmt.Sprint(s.BySourceClass) != fmt.Sprint(want) {
+		t.Errorf("by source class: got %v, want %v", s.BySourceClass, want)
+	}
+	if s.Attested != 2 || s.AttestedMaterials != 2 || s.Markers != 1 || s.Families != 1 {
+		t.Errorf("attested %d of %d materials, %d markers, %d families; want 2, 2, 1, 1", s.Attested, s.AttestedMaterials, s.Markers, s.Families)
 	}
 }
 

@@ -228,7 +228,7 @@ func (ix *index) nearest(key string, n int) []string {
 		dist  int
 	}
 	kr := []rune(key)
-	limit := max(2, len(kr)/3)
+	limit := spell.Limit(key)
 	kmask := runeMask(kr)
 	best := map[string]cand{}
 	for _, r := range ix.all {

@@ -15,6 +15,13 @@
 // counts two), no phonetic matching and no case folding: callers fold first.
 package spell
 
+import (
+	"cmp"
+	"slices"
+	"strings"
+	"unicode/utf8"
+)
+
 // Distance is the edit distance of a and b, counted in runes.
 func Distance(a, b string) int {
 	ra, rb := []rune(a), []rune(b)
@@ -106,4 +113,38 @@ func Within(a, b []rune, limit int) int {
 		prev, cur = cur, prev
 	}
 	return min(prev[len(b)], limit+1)
+}
+
+// Limit is how many edits a word may be from a candidate and still look
+// like a slip of spelling: a third of its length in runes, and at least
+// two. Every "did you mean" of terminus uses this one rule.
+func Limit(word string) int { return max(2, utf8.RuneCountInString(word)/3) }
+
+// Nearest returns up to n of candidates within [Limit] edits of word,
+// compared without case, nearest first and, at the same distance, in the
+// order of the candidates' text; each candidate once.
+func Nearest(word string, candidates []string, n int) []string {
+	type cand struct {
+		s string
+		d int
+	}
+	w := []rune(strings.ToLower(word))
+	limit := Limit(word)
+	var cs []cand
+	for _, c := range candidates {
+		if d := Within(w, []rune(strings.ToLower(c)), limit); d <= limit {
+			cs = append(cs, cand{c, d})
+		}
+	}
+	slices.SortStableFunc(cs, func(a, b cand) int { return cmp.Or(cmp.Compare(a.d, b.d), cmp.Compare(a.s, b.s)) })
+	out := make([]string, 0, n)
+	for _, c := range cs {
+		if len(out) == n {
+			break
+		}
+		if !slices.Contains(out, c.s) {
+			out = append(out, c.s)
+		}
+	}
+	return out
 }

@@ -2,6 +2,7 @@ package spell
 
 import (
 	"math/rand/v2"
+	"strings"
 	"testing"
 )
 
@@ -88,6 +89,35 @@ func TestWithinMatchesPlain(t *testing.T) {
 			if got, want := PrefixWithin(ra, rb, limit), min(p, limit+1); got != want {
 				t.Fatalf("PrefixWithin(%q, %q, %d) = %d, want %d", a, b, limit, got, want)
 			}
+		}
+	}
+}
+
+func TestNearest(t *testing.T) {
+	keys := []string{"id", "title", "place", "circa", "events", "findings", "records", "claims"}
+	for _, tc := range []struct {
+		word string
+		want string
+		why  string
+	}{
+		{"claimz", "claims", "one substitution"},
+		{"Findngs", "findings", "case does not count; one deletion"},
+		{"plaec", "place", "two edits, within the floor of two"},
+		{"xyz", "", "nothing near"},
+		{"ttle", "title", "one insertion"},
+		{"evnts", "events", "one deletion"},
+	} {
+		t.Run(tc.word, func(t *testing.T) {
+			got := strings.Join(Nearest(tc.word, keys, 1), "")
+			if got != tc.want {
+				t.Errorf("Nearest(%q) = %q, want %q (%s)", tc.word, got, tc.want, tc.why)
+			}
+		})
+	}
+	// Limit: a third of the length, at least two.
+	for word, want := range map[string]int{"ab": 2, "abcdefgh": 2, "abcdefghi": 3, "ultramarine blue": 5} {
+		if got := Limit(word); got != want {
+			t.Errorf("Limit(%q) = %d, want %d", word, got, want)
 		}
 	}
 }
