@@ -253,6 +253,8 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"lithopone", materials.KindArrived, "BE", "1869", "Merriam-Webster, lithopone"},
 		// From memory (the grant year), the patent text read: Cumberland's US patent 767 for a lead sulfate white.
 		{"lead-sulfate-white", materials.KindMade, "", "1838", "US patent 767 (year from memory)"},
+		// Jones, "Napoleon's wallpaper", Chemistry World: arsenic by XRF in the Longwood wallpaper, St Helena, 1815-1821.
+		{"scheeles-green", materials.KindAttested, "SH", "1815/1821", "Jones, Chemistry World, Napoleon's wallpaper"},
 	}
 	checkSourceRows(t, d, inorganicFile, rows)
 }
