@@ -255,6 +255,9 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"lead-sulfate-white", materials.KindMade, "", "1838", "US patent 767 (year from memory)"},
 		// Jones, "Napoleon's wallpaper", Chemistry World: arsenic by XRF in the Longwood wallpaper, St Helena, 1815-1821.
 		{"scheeles-green", materials.KindAttested, "SH", "1815/1821", "Jones, Chemistry World, Napoleon's wallpaper"},
+		// Journal of Raman Spectroscopy 1999, abstract: chrome orange and baryte on Javanese and Thai manuscripts.
+		{"chrome-orange", materials.KindArrived, "035", "1809/1999", "J. Raman Spectrosc. 1999, Asian manuscripts"},
+		{"barytes", materials.KindArrived, "035", "1782/1999", "J. Raman Spectrosc. 1999, Asian manuscripts"},
 	}
 	checkSourceRows(t, d, inorganicFile, rows)
 }
