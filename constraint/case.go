@@ -83,7 +83,10 @@ type Finding struct {
 	Method     string
 	Sample     string
 	Note       string
-	Pos        Pos
+	// Unlisted says that the material is not in the dataset: the finding
+	// is reported but bounds nothing, and its names are not looked up.
+	Unlisted bool
+	Pos      Pos
 }
 
 // RecordKind is how a record bounds its event.
@@ -128,7 +131,7 @@ var (
 	caseKeys    = []string{"id", "title", "place", "circa", "stock_allowance", "events", "findings", "records", "claims"}
 	eventKeys   = []string{"id", "label", "place", "after"}
 	orderKeys   = []string{"event", "at_least", "at_most", "id", "strength", "note"}
-	findingKeys = []string{"id", "material", "event", "confidence", "method", "sample", "note"}
+	findingKeys = []string{"id", "material", "event", "confidence", "method", "sample", "note", "unlisted"}
 	recordKeys  = []string{"id", "event", "on", "not_before", "not_after", "between", "strength", "source", "note", "calendar"}
 	claimKeys   = []string{"id", "event", "date", "by", "calendar"}
 	circaKeys   = []string{"day", "month", "season", "year", "decade", "century"}
@@ -433,6 +436,14 @@ func (d *decoder) finding(n *yaml.Node, i int) (Finding, error) {
 		default:
 			return Finding{}, d.errAt(v.value, didYouMean(s, []string{"certain", "probable", "possible"}), "confidence %q: expected certain, probable or possible", s)
 		}
+	}
+	if v, ok := f["unlisted"]; ok {
+		n := deref(v.value)
+		if n.Kind != yaml.ScalarNode || n.Tag != "!!bool" {
+			return Finding{}, d.errAt(v.value, "write 'unlisted: true' for a material the dataset does not have, or leave it out",
+				"finding %s: unlisted: expected true or false, found %s", fi.ID, kindName(v.value))
+		}
+		fi.Unlisted = n.Value == "true" || n.Value == "True" || n.Value == "TRUE"
 	}
 	for _, k := range []struct {
 		key string

@@ -38,12 +38,13 @@ type memoKey struct {
 }
 
 // memoEntry is what materialBounds works out for one key: the items (with
-// their texts made), the disagreements it records and whether the place
-// has no arrival data for the material. Nothing in it is changed after it
+// their texts made), the disagreements and notes it records and whether
+// the place has no arrival data for the material. Nothing in it is changed after it
 // is stored.
 type memoEntry struct {
 	items         []boundItem
 	disagreements []Disagreement
+	notes         []string
 	noArrival     bool
 }
 
@@ -69,7 +70,7 @@ func (a *analysis) memoBounds(memo *Memo, m *materials.Material, place string, c
 			items[i].txt = a.itemText(&items[i])
 			items[i].iso = items[i].day.ISO()
 		}
-		e = &memoEntry{items: items[:len(items):len(items)], disagreements: scratch.disagreements, noArrival: len(scratch.noArrival) > 0}
+		e = &memoEntry{items: items[:len(items):len(items)], disagreements: scratch.disagreements, notes: scratch.notes, noArrival: len(scratch.noArrival) > 0}
 		memo.mu.Lock()
 		if prev, ok := memo.entries[key]; ok {
 			e = prev // another analysis got there first; keep one
@@ -79,6 +80,7 @@ func (a *analysis) memoBounds(memo *Memo, m *materials.Material, place string, c
 		memo.mu.Unlock()
 	}
 	b.disagreements = append(b.disagreements, e.disagreements...)
+	b.notes = append(b.notes, e.notes...)
 	if e.noArrival {
 		b.addNoArrival(place, displayName(m))
 	}

@@ -74,7 +74,41 @@ type analysis struct {
 
 type resolvedFinding struct {
 	Finding
-	mats []*materials.Material
+	mats   []*materials.Material
+	groups []groupUse // the markers and families among its names
+}
+
+// groupUse is a name in a finding that stands for several materials.
+type groupUse struct {
+	name  string // as the case wrote it
+	group *materials.Group
+}
+
+// groupNote says in words how a finding that names a marker or a family
+// is read.
+func groupNote(f *resolvedFinding, g groupUse) string {
+	names := make([]string, len(g.group.Members))
+	for i, m := range g.group.Members {
+		names[i] = displayName(m)
+	}
+	what := "a " + string(g.group.Kind)
+	switch g.group.Kind {
+	case materials.GroupColourIndex:
+		what = "a Colour Index name that several materials share"
+	case materials.GroupCAS:
+		what = "a CAS Registry Number that several materials share"
+	}
+	if len(names) == 1 {
+		return f.ID + " names " + g.name + ", " + what + " that only " + names[0] + " carries in the dataset."
+	}
+	return f.ID + " names " + g.name + ", " + what + ": " + orList(names) + ". The finding is read as any of them, bounded by the earliest."
+}
+
+func orList(list []string) string {
+	if len(list) < 2 {
+		return strings.Join(list, "")
+	}
+	return strings.Join(list[:len(list)-1], ", ") + " or " + list[len(list)-1]
 }
 
 func (a *analysis) errAt(p Pos, suggest, format string, args ...any) *Error {
@@ -151,8 +185,12 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 			return nil, a.errAt(f.EventPos, didYouMean(f.Event, ids), "finding %s: unknown event %q (events: %s)", f.ID, f.Event, strings.Join(ids, ", "))
 		}
 		rf := resolvedFinding{Finding: f, mats: make([]*materials.Material, 0, len(f.Materials))}
+		if f.Unlisted {
+			a.findings = append(a.findings, rf)
+			continue
+		}
 		for i, name := range f.Materials {
-			m, err := ds.Lookup(name)
+			r, err := ds.Resolve(name)
 			if err != nil {
 				var hint string
 				var h interface{ Hint() string }
@@ -162,12 +200,20 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 				if hint == "" {
 					hint = "'terminus materials list' shows the materials; --materials FILE adds your own"
 				}
-				return nil, a.errAt(f.MatPos[i], hint, "finding %s: unknown material %q", f.ID, name)
+				at := f.Pos
+				if i < len(f.MatPos) {
+					at = f.MatPos[i]
+				}
+				return nil, a.errAt(at, hint, "finding %s: unknown material %q", f.ID, name)
 			}
-			if slices.Contains(rf.mats, m) { // named twice, perhaps by two names
-				continue
+			if r.Group != nil {
+				rf.groups = append(rf.groups, groupUse{name: name, group: r.Group})
 			}
-			rf.mats = append(rf.mats, m)
+			for _, m := range r.Materials {
+				if !slices.Contains(rf.mats, m) { // named twice, perhaps by two names
+					rf.mats = append(rf.mats, m)
+				}
+			}
 		}
 		a.findings = append(a.findings, rf)
 	}
@@ -387,11 +433,18 @@ func (a *analysis) itemText(it *boundItem) string {
 	if it.txt != "" {
 		return it.txt
 	}
-	what := string(it.ms.Kind)
-	if it.ms.Kind == materials.KindArrived {
-		what = "arrived in " + a.placeName(it.area)
+	what := string(it.ms.Kind) + " " + it.ms.Date.String()
+	switch it.ms.Kind {
+	case materials.KindArrived:
+		what = "arrived in " + a.placeName(it.area) + " " + it.ms.Date.String()
+	case materials.KindWithdrawn:
+		if it.area != "" {
+			what = "withdrawn in " + a.placeName(it.area) + " " + it.ms.Date.String()
+		}
+	case materials.KindAttested:
+		what = "attested " + it.ms.Date.String() + " in " + it.ms.Object + " (earlier than its dated milestones)"
 	}
-	t := it.name + ": " + what + " " + it.ms.Date.String() + " [" + it.ms.Source + ", " + string(it.ms.Basis) + "]"
+	t := it.name + ": " + what + " [" + it.ms.Source + ", " + string(it.ms.Basis) + "]"
 	if it.upper {
 		t += ", plus a stock allowance of " + durationText(it.allow)
 	}
@@ -441,7 +494,18 @@ func monthName(m int) string {
 }
 
 // materialBounds returns the bounds a material's milestones give an event
-// made at place, and notes about fallbacks and disagreements.
+// made at place, and notes about fallbacks, open ends and disagreements.
+//
+// Each kind gives one bound from its claims (several claims are the
+// claims of sources that disagree): made a hard lower bound, sold a firm
+// one, the arrivals of the most specific area containing place a soft one,
+// and the withdrawals of the most specific area containing place (or the
+// worldwide ones) a soft upper bound. The most conservative claim bounds:
+// the earliest start for a lower bound, the latest end for an upper one;
+// a claim open at that end leaves the kind without a bound. An attestation
+// earlier than a kind's lower bound (any attestation for made and sold,
+// one in the area for an arrival) takes its place, so that no bound is
+// later than an object known to hold the material.
 func (a *analysis) materialBounds(m *materials.Material, place string, cap network.Tier, ov override, b *built) []boundItem {
 	items := make([]boundItem, 0, 4)
 	name := displayName(m)
@@ -452,41 +516,63 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 	var buf [8]cand
 	group := func(kind materials.Kind, area string, base network.Tier, upper bool) {
 		cands := buf[:0]
+		var open *materials.Milestone
 		for i := range m.Milestones {
 			ms := &m.Milestones[i]
-			if ms.Kind != kind || kind == materials.KindArrived && ms.Place != area {
+			if ms.Kind != kind || !a.inGroup(ms, kind, area) {
 				continue
 			}
-			d := ms.Date
-			if d.Approximate {
-				d = d.Widen(a.circa)
-			}
-			var day date.Day
-			var ok bool
-			if upper {
-				day, ok = d.Latest()
-				if ok {
-					day = a.stockAllowance(ms).AddTo(day)
+			day, ok := a.claimEnd(ms, upper)
+			if !ok {
+				if open == nil {
+					open = ms
 				}
-			} else {
-				day, ok = d.Earliest()
+				continue
 			}
-			if ok {
-				cands = append(cands, cand{day, ms})
+			cands = append(cands, cand{day, ms})
+		}
+		if open != nil {
+			if b != nil {
+				b.notes = append(b.notes, openEndNote(name, kind, a.placeName(area), open, upper))
 			}
+			return
 		}
 		if len(cands) == 0 {
 			return
 		}
-		// Most conservative first: the earliest lower bound, the latest upper;
-		// a stable insertion sort (the lists are short).
+		// Most conservative first: the earliest lower bound, the latest
+		// upper; on a tie, a documented claim before one from memory and a
+		// scholarly source before a weak one. A stable insertion sort: the
+		// lists are short.
+		better := func(x, y cand) bool {
+			if x.day != y.day {
+				return upper && x.day > y.day || !upper && x.day < y.day
+			}
+			return a.claimRank(x.ms) < a.claimRank(y.ms)
+		}
 		for i := 1; i < len(cands); i++ {
-			for j := i; j > 0; j-- {
-				if upper && cands[j].day > cands[j-1].day || !upper && cands[j].day < cands[j-1].day {
-					cands[j], cands[j-1] = cands[j-1], cands[j]
-				} else {
-					break
+			for j := i; j > 0 && better(cands[j], cands[j-1]); j-- {
+				cands[j], cands[j-1] = cands[j-1], cands[j]
+			}
+		}
+		if !upper {
+			// An earlier attestation caps the bound.
+			var att *cand
+			for i := range m.Milestones {
+				ms := &m.Milestones[i]
+				if ms.Kind != materials.KindAttested || kind == materials.KindArrived && !a.ds.InArea(ms, area) {
+					continue
 				}
+				day, ok := a.claimEnd(ms, false)
+				if !ok || day >= cands[0].day || att != nil && !better(cand{day, ms}, *att) {
+					continue
+				}
+				att = &cand{day, ms}
+			}
+			if att != nil {
+				cands = append(cands, cand{})
+				copy(cands[1:], cands)
+				cands[0] = *att
 			}
 		}
 		pick := 0
@@ -498,7 +584,7 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		if b != nil && len(cands) > 1 && cands[0].day != cands[len(cands)-1].day {
 			cl := make([]string, len(cands))
 			for i, c := range cands {
-				cl[i] = c.ms.Date.String() + " (" + c.ms.Source + ")"
+				cl[i] = claimLabel(c.ms)
 			}
 			b.disagreements = append(b.disagreements, Disagreement{
 				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl, Used: cl[pick],
@@ -525,8 +611,101 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 			b.addNoArrival(place, name)
 		}
 	}
-	group(materials.KindWithdrawn, "", network.Soft, true)
+	if area, ok := a.ds.WithdrawalArea(m, place); ok {
+		group(materials.KindWithdrawn, area, network.Soft, true)
+	}
 	return items
+}
+
+// inGroup reports whether the milestone ms of the given kind belongs to
+// the claims of area: an arrival recorded for that area, a withdrawal
+// recorded for it ("" being the whole world), any made or sold claim.
+func (a *analysis) inGroup(ms *materials.Milestone, kind materials.Kind, area string) bool {
+	switch kind {
+	case materials.KindArrived:
+		return ms.Place == area
+	case materials.KindWithdrawn:
+		if area == "" {
+			return ms.Place == "" || ms.Place == "001"
+		}
+		return ms.Place == area
+	}
+	return true
+}
+
+// claimEnd is the day a claim bounds from: its first day for a lower
+// bound, its last day plus the stock allowance for an upper one, after
+// widening an approximate date. ok is false when the claim is open there.
+func (a *analysis) claimEnd(ms *materials.Milestone, upper bool) (date.Day, bool) {
+	d := ms.Date
+	if d.Approximate {
+		d = d.Widen(a.circa)
+	}
+	if upper {
+		day, ok := d.Latest()
+		if ok {
+			day = a.stockAllowance(ms).AddTo(day)
+		}
+		return day, ok
+	}
+	return d.Earliest()
+}
+
+// claimRank orders claims of one day: documented before from memory, and
+// within each the stronger kind of source first (scholarly, reference,
+// trade, unclassified, weak).
+func (a *analysis) claimRank(ms *materials.Milestone) int {
+	r := 0
+	if ms.Basis != materials.BasisDocumented {
+		r = 10
+	}
+	typ := ""
+	if s, ok := a.ds.Source(ms.Source); ok {
+		typ = s.Type
+	}
+	switch materials.SourceClass(typ) {
+	case "scholarly":
+	case "encyclopedia":
+		r++
+	case "trade":
+		r += 2
+	case "unclassified":
+		r += 3
+	default:
+		r += 4
+	}
+	return r
+}
+
+// claimLabel names a claim in a list of disagreeing ones: its date and
+// source, and for an attestation what it is.
+func claimLabel(ms *materials.Milestone) string {
+	if ms.Kind == materials.KindAttested {
+		return ms.Date.String() + " (attested in " + ms.Object + "; " + ms.Source + ")"
+	}
+	return ms.Date.String() + " (" + ms.Source + ")"
+}
+
+// openEndNote says that a kind gives no bound because a claim is open on
+// the side it would bound.
+func openEndNote(name string, kind materials.Kind, area string, ms *materials.Milestone, upper bool) string {
+	what := "the first making of " + name
+	switch kind {
+	case materials.KindSold:
+		what = "the first sale of " + name
+	case materials.KindArrived:
+		what = "the arrival of " + name + " in " + area
+	case materials.KindWithdrawn:
+		what = "the withdrawal of " + name
+		if area != "" {
+			what += " in " + area
+		}
+	}
+	side, end := "lower", "start"
+	if upper {
+		side, end = "upper", "end"
+	}
+	return "No " + side + " bound from " + what + ": " + ms.Source + " gives " + ms.Date.String() + ", which leaves its " + end + " open."
 }
 
 // stockAllowance is how long stocks may have lingered after the withdrawal
@@ -669,7 +848,18 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		}
 	}
 	// Findings.
-	for _, f := range a.findings {
+	for fi := range a.findings {
+		f := &a.findings[fi]
+		if f.Unlisted {
+			what := strings.Join(f.Materials, " or ")
+			b.evidence = append(b.evidence, Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: what,
+				Method: f.Method, Sample: f.Sample, Confidence: string(f.Confidence), Unlisted: true})
+			b.notes = append(b.notes, f.ID+": "+what+" is not in the dataset and gives no bound.")
+			continue
+		}
+		for _, g := range f.groups {
+			b.notes = append(b.notes, groupNote(f, g))
+		}
 		ev := a.events[a.eventIdx[f.Event]]
 		v := b.vars[a.eventIdx[f.Event]]
 		cap := a.confidenceCap(f.Confidence)
@@ -684,7 +874,11 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 			}
 			names = append(names, displayName(m))
 		}
-		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: strings.Join(names, " or "),
+		what := strings.Join(names, " or ")
+		if len(f.groups) > 0 {
+			what = strings.Join(f.Materials, " or ") + " (read as " + orList(names) + ")"
+		}
+		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: what,
 			Method: f.Method, Sample: f.Sample, Confidence: string(f.Confidence)}
 		nb := 0
 		for _, items := range perMat {

@@ -136,6 +136,9 @@ type Evidence struct {
 	Confidence string
 	Bounds     []EvidenceBound
 	Source     string
+	// Unlisted marks a finding of a material that is not in the dataset:
+	// it is reported, and bounds nothing.
+	Unlisted bool
 }
 
 // EvidenceBound is one bound that an evidence item puts on its event.

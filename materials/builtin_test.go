@@ -208,7 +208,7 @@ func TestStatsSmall(t *testing.T) {
 	want := Stats{Materials: 2, Milestones: 6, Documented: 1, FromMemory: 5, DocumentedLocated: 1,
 		Withdrawn: 1, Disagreeing: 1, Sources: 2, SourcesCited: 2}
 	got := s
-	got.ByClass, got.ByOrigin, got.ByKind, got.ArrivedByRegion, got.ArrivedByPlace = nil, nil, nil, nil, nil
+	got.ByClass, got.ByOrigin, got.ByKind, got.ArrivedByRegion, got.ArrivedByPlace, got.BySourceClass = nil, nil, nil, nil, nil, nil
 	if fmt.Sprint(got) != fmt.Sprint(want) {
 		t.Errorf("stats: got %+v, want %+v", got, want)
 	}
@@ -220,6 +220,50 @@ func TestStatsSmall(t *testing.T) {
 	}
 	if got := s.DocumentedShare(); got < 0.166 || got > 0.167 {
 		t.Errorf("documented share: got %v, want 1/6", got)
+	}
+}
+
+func TestStatsSourcesAndAttestations(t *testing.T) {
+	d, err := Load(mapFS(map[string]string{"a.yaml": `sources:
+  - {key: blog, cite: "A blog post", type: blog}
+  - {key: paper, cite: "A paper, abstract", type: paper}
+  - {key: wiki, cite: "An encyclopedia entry", type: reference}
+materials:
+  - id: a
+    class: pigment
+    origin: synthetic
+    markers: [a marker]
+    families: [a family]
+    milestones:
+      - {kind: made, date: "1850", source: blog, basis: documented}
+      - {kind: made, date: "1850/1852", source: paper, basis: documented}
+      - {kind: sold, date: "1860", source: blog, basis: documented}
+      - {kind: sold, date: "1870", source: paper, basis: documented}
+      - {kind: arrived, place: JP, date: "1880", source: blog, basis: documented}
+      - {kind: attested, date: "1855", place: FR, object: "a dated sketch", source: wiki, basis: documented}
+  - id: b
+    class: pigment
+    origin: synthetic
+    families: [a family]
+    milestones:
+      - {kind: made, date: "1900", source: paper, basis: documented}
+      - {kind: attested, date: "1901", object: "a dated print", source: paper, basis: documented}
+`}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	s := d.Stats()
+	// Weak alone: the blog's sale (the paper's 1870 does not overlap 1860)
+	// and its arrival (nothing else in JP); its made claim of 1850 overlaps
+	// the paper's 1850/1852 and is backed up.
+	if s.WeakAlone != 2 {
+		t.Errorf("weak alone: got %d, want 2", s.WeakAlone)
+	}
+	if want := map[string]int{"web": 3, "scholarly": 4, "encyclopedia": 1}; fmt.Sprint(s.BySourceClass) != fmt.Sprint(want) {
+		t.Errorf("by source class: got %v, want %v", s.BySourceClass, want)
+	}
+	if s.Attested != 2 || s.AttestedMaterials != 2 || s.Markers != 1 || s.Families != 1 {
+		t.Errorf("attested %d of %d materials, %d markers, %d families; want 2, 2, 1, 1", s.Attested, s.AttestedMaterials, s.Markers, s.Families)
 	}
 }
 
@@ -262,19 +306,36 @@ materials:
       - {kind: made, date: "1850", source: k, basis: from-memory}
       - {kind: sold, date: "1840", source: k, basis: from-memory}
       - {kind: withdrawn, date: "1830", source: k, basis: from-memory}
-  - id: disagreeing-but-fine
+  - id: disagreeing
     class: pigment
     origin: synthetic
     milestones:
       - {kind: made, date: "1704", source: k, basis: from-memory}
       - {kind: made, date: "1706", source: k, basis: from-memory}
       - {kind: sold, date: "1705", source: k, basis: from-memory}
-      - {kind: arrived, place: JP, date: "1700", source: k, basis: from-memory}
+      - {kind: arrived, place: JP, date: "1700/1750", source: k, basis: from-memory}
   - id: never-made
     class: dye
     origin: natural
     milestones:
       - {kind: sold, date: "1800", source: k, basis: from-memory}
+  - id: attested-early
+    class: pigment
+    origin: synthetic
+    milestones:
+      - {kind: made, date: "1710", source: k, basis: from-memory}
+      - {kind: sold, date: "1720", source: k, basis: from-memory}
+      - {kind: arrived, place: "150", date: "1715", source: k, basis: from-memory}
+      - {kind: arrived, place: JP, date: "1780", source: k, basis: from-memory}
+      - {kind: attested, date: "1709", place: NL, object: "a dated painting", source: k, basis: from-memory}
+  - id: attested-open
+    class: pigment
+    origin: synthetic
+    milestones:
+      - {kind: made, date: "../1600", source: k, basis: from-memory}
+      - {kind: made, date: "1650", source: k, basis: from-memory}
+      - {kind: arrived, place: JP, date: "1700", source: k, basis: from-memory}
+      - {kind: attested, date: "1500", place: DE, object: "a dated altarpiece", source: k, basis: from-memory}
 `}))
 	if err != nil {
 		t.Fatal(err)
@@ -283,12 +344,22 @@ materials:
 	for _, p := range Lint(d) {
 		got = append(got, p.String())
 	}
+	// Why each: a sale before the making; an end before the sale; an
+	// arrival starting before the making (a claim that only overlaps the
+	// making still starts before it); no making at all; made, sold and the
+	// European arrival later than an attestation in the Netherlands (the
+	// Japanese arrival is not bounded by it); and nothing for a material
+	// whose made claim is open at its start, since it gives no lower bound
+	// for an attestation to cap, nor for an arrival to start before.
 	want := []string{
 		`a.yaml:3:5: source "unused" is never cited`,
-		`a.yaml:10:9: sold milestone of "early-sale" (1840) lies wholly before its earliest made claim`,
+		`a.yaml:10:9: sold milestone of "early-sale" (1840) starts before its earliest made claim (1850-01-01)`,
 		`a.yaml:11:9: withdrawn milestone of "early-sale" (1830) lies wholly before its earliest sold claim`,
-		`a.yaml:19:9: arrived milestone of "disagreeing-but-fine" (1700) lies wholly before its earliest made claim`,
+		`a.yaml:19:9: arrived milestone of "disagreeing" (1700/1750) starts before its earliest made claim (1704-01-01)`,
 		`a.yaml:20:5: material "never-made" has no made milestone`,
+		`a.yaml:29:9: the earliest made claim of "attested-early" (1710) is later than its attestation 1709 in a dated painting (a.yaml:33)`,
+		`a.yaml:30:9: the earliest sold claim of "attested-early" (1720) is later than its attestation 1709`,
+		`a.yaml:31:9: the earliest arrival in 150 of "attested-early" (1715) is later than its attestation 1709`,
 	}
 	if len(got) != len(want) {
 		t.Fatalf("got %d problems, want %d:\n%s", len(got), len(want), strings.Join(got, "\n"))

@@ -91,16 +91,25 @@ func (e *NotFoundError) Hint() string {
 	return "did you mean " + orList(e.Suggestions) + "?"
 }
 
-// AmbiguousError is a lookup by a Colour Index name or number or a CAS RN
+// AmbiguousError is a lookup of one material by a name that stands for
+// several: a marker, a family, or a Colour Index name or number or a CAS RN
 // that several materials share (the two crystal forms of titanium dioxide
 // white have one Colour Index number).
 type AmbiguousError struct {
 	Name    string
+	Kind    GroupKind
 	Matches []string // the ids that match
 }
 
 func (e *AmbiguousError) Error() string {
-	return fmt.Sprintf("%q names %d materials: %s", e.Name, len(e.Matches), strings.Join(e.Matches, ", "))
+	what := ""
+	switch e.Kind {
+	case GroupMarker:
+		what = " (a marker)"
+	case GroupFamily:
+		what = " (a family)"
+	}
+	return fmt.Sprintf("%q%s names %d materials: %s", e.Name, what, len(e.Matches), strings.Join(e.Matches, ", "))
 }
 
 // Hint asks for one of the ids.

@@ -41,9 +41,11 @@ func Problems(err error) []Problem {
 // enforces:
 //
 //   - every material has a made milestone;
-//   - no sold claim lies wholly before the earliest made claim, no arrived
-//     claim before it, and no withdrawn claim wholly before the earliest sold
-//     claim (or made, when there is no sold);
+//   - no sold or arrived claim starts before the earliest made claim, and
+//     no withdrawn claim lies wholly before the earliest sold claim (or
+//     made, when there is no sold);
+//   - no made, sold or arrived bound is later than an attestation that
+//     should bound it (see lintOrder);
 //   - every milestone names a source, and every source key cited exists;
 //   - every source in the bibliography is cited by some milestone;
 //   - no name (folded as [Dataset.Lookup] folds it) belongs to two materials;
@@ -119,7 +121,7 @@ func lint(d *Dataset, known func(key string) bool) []Problem {
 		if ci := m.ColourIndex; ci != nil && ci.Name != "" && !ciNameShape(ci.Name) {
 			add(m.File, m.Line, m.col, "Colour Index name %q of %q is not of the form 'Pigment Blue 27'", ci.Name, m.ID)
 		}
-		ps = append(ps, lintOrder(m)...)
+		ps = append(ps, d.lintOrder(m)...)
 	}
 	for _, s := range d.Sources {
 		if !cited[s.Key] {
@@ -137,35 +139,100 @@ func hasKey(m map[string]Source, k string) bool {
 	return ok
 }
 
-// lintOrder checks that a material's milestones come in a possible order.
-// A claim is out of order only when it lies wholly before the earliest
-// claim it must follow, so disagreeing sources alone are not a problem.
-func lintOrder(m *Material) []Problem {
+// lintOrder checks that a material's milestones come in a possible order
+// and that none is later than the material's own dated evidence:
+//
+//   - a sold or arrived claim must not start before the earliest made
+//     claim, and a withdrawn claim must not lie wholly before the earliest
+//     sold claim (or made, when there is no sold);
+//   - the earliest made claim, the earliest sold claim, and the earliest
+//     arrived claim of each area must not be later than an attestation
+//     that bounds them (any attestation for made and sold; one in the
+//     area or inside it for an arrival), since that would put a bound
+//     after an object known to hold the material.
+//
+// A kind with a claim open at its start gives no lower bound, so it is
+// not compared.
+func (d *Dataset) lintOrder(m *Material) []Problem {
 	var ps []Problem
 	made := m.Claims(KindMade, "")
 	if len(made) == 0 {
 		return []Problem{{File: m.File, Line: m.Line, Column: m.col, Msg: fmt.Sprintf("material %q has no made milestone", m.ID)}}
 	}
+	at := func(ms Milestone, format string, args ...any) {
+		ps = append(ps, Problem{File: ms.File, Line: ms.Line, Column: ms.Column, Msg: fmt.Sprintf(format, args...)})
+	}
 	firstMade, okMade := earliestStart(made)
-	check := func(claims []Milestone, after date.Day, ok bool, what string) {
-		if !ok {
-			return
-		}
-		for _, ms := range claims {
-			if last, ok := ms.Date.Latest(); ok && last < after {
-				ps = append(ps, Problem{File: ms.File, Line: ms.Line, Column: ms.Column,
-					Msg: fmt.Sprintf("%s milestone of %q (%s) lies wholly before its earliest %s claim", ms.Kind, m.ID, ms.Date.EDTF(), what)})
+	if okMade {
+		for _, k := range []Kind{KindSold, KindArrived} {
+			for _, ms := range m.Claims(k, "") {
+				if first, ok := ms.Date.Earliest(); ok && first < firstMade {
+					at(ms, "%s milestone of %q (%s) starts before its earliest made claim (%s)", ms.Kind, m.ID, ms.Date.EDTF(), firstMade.ISO())
+				}
 			}
 		}
 	}
-	check(m.Claims(KindSold, ""), firstMade, okMade, "made")
-	check(m.Claims(KindArrived, ""), firstMade, okMade, "made")
 	sold := m.Claims(KindSold, "")
+	end := func(after date.Day, ok bool, what string) {
+		if !ok {
+			return
+		}
+		for _, ms := range m.Claims(KindWithdrawn, "") {
+			if last, ok := ms.Date.Latest(); ok && last < after {
+				at(ms, "withdrawn milestone of %q (%s) lies wholly before its earliest %s claim", m.ID, ms.Date.EDTF(), what)
+			}
+		}
+	}
 	if len(sold) > 0 {
 		first, ok := earliestStart(sold)
-		check(m.Claims(KindWithdrawn, ""), first, ok, "sold")
+		end(first, ok, "sold")
 	} else {
-		check(m.Claims(KindWithdrawn, ""), firstMade, okMade, "made")
+		end(firstMade, okMade, "made")
+	}
+
+	// Attestations cap the lower bounds.
+	attested := m.Claims(KindAttested, "")
+	capped := func(claims []Milestone, area string, what string) {
+		first, ok := earliestStart(claims)
+		if !ok {
+			return
+		}
+		var by *Milestone
+		var byDay date.Day
+		for i := range attested {
+			a := &attested[i]
+			if !d.InArea(a, area) {
+				continue
+			}
+			if day, ok := a.Date.Earliest(); ok && day < first && (by == nil || day < byDay) {
+				by, byDay = a, day
+			}
+		}
+		if by == nil {
+			return
+		}
+		for _, ms := range claims {
+			if day, ok := ms.Date.Earliest(); ok && day == first {
+				at(ms, "the earliest %s of %q (%s) is later than its attestation %s in %s (%s:%d): record the earlier evidence as another %s claim, or correct the attestation",
+					what, m.ID, ms.Date.EDTF(), by.Date.EDTF(), by.Object, by.File, by.Line, ms.Kind)
+				break
+			}
+		}
+	}
+	if len(attested) > 0 {
+		capped(made, "", "made claim")
+		if len(sold) > 0 {
+			capped(sold, "", "sold claim")
+		}
+		var areas []string
+		for _, ms := range m.Claims(KindArrived, "") {
+			if !slices.Contains(areas, ms.Place) {
+				areas = append(areas, ms.Place)
+			}
+		}
+		for _, a := range areas {
+			capped(m.Claims(KindArrived, a), a, "arrival in "+a)
+		}
 	}
 	return ps
 }

@@ -358,6 +358,7 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 			}
 		}
 	}
+	errs = append(errs, checkGroups(d.Materials, names, base)...)
 	if base != nil {
 		for _, m := range d.Materials {
 			for _, n := range append([]string{m.ID}, m.Names...) {
@@ -375,6 +376,48 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 		}
 	}
 	return errs, names
+}
+
+// checkGroups finds marker and family names that are also the name of a
+// material (here or in base), which would make a specific name read as
+// several materials or a group read as one, and names written as a marker
+// by one material and a family by another.
+func checkGroups(ms []*Material, names map[string]*Material, base *Dataset) ErrorList {
+	var errs ErrorList
+	type first struct {
+		m    *Material
+		kind string
+	}
+	kinds := map[string]first{}
+	for _, m := range ms {
+		for _, gl := range [...]struct {
+			kind  string
+			names []string
+		}{{"marker", m.Markers}, {"family", m.Families}} {
+			for _, g := range gl.names {
+				k := fold(g)
+				if other, ok := names[k]; ok {
+					errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
+						Msg:        fmt.Sprintf("%s %q of %q is also a name of the material %q (%s:%d)", gl.kind, g, m.ID, other.ID, other.File, other.Line),
+						Suggestion: "a name that several materials answer to belongs in their markers or families, not in one material's names"})
+				} else if base != nil && base.index != nil {
+					if other, ok := base.index.names[k]; ok {
+						errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
+							Msg:        fmt.Sprintf("%s %q of %q is a name of the built-in material %q", gl.kind, g, m.ID, other.ID),
+							Suggestion: "choose another group name, or replace the built-in entry by giving yours its id"})
+					}
+				}
+				if f, ok := kinds[k]; ok && f.kind != gl.kind {
+					errs = append(errs, &Error{File: m.File, Line: m.Line, Column: m.col,
+						Msg:        fmt.Sprintf("%q is a %s of %q but a %s of %q (%s:%d)", g, gl.kind, m.ID, f.kind, f.m.ID, f.m.File, f.m.Line),
+						Suggestion: "list it the same way on every material: markers for compounds an analysis finds, families for trade names"})
+				} else if !ok {
+					kinds[k] = first{m, gl.kind}
+				}
+			}
+		}
+	}
+	return errs
 }
 
 // nearestWords returns up to n of words within a small edit distance of w,

@@ -122,6 +122,10 @@ func TestLoadErrors(t *testing.T) {
 		{"syntax.yaml", "10", "YAML syntax", "indentation"},
 		{"syntax.toml", "2:18", "TOML syntax", "quoting"},
 		{"two-docs.yaml", "11:1", "one YAML document", "'---'"},
+		{"object-on-made.yaml", "10:76", "object on a made milestone", "only an attested milestone"},
+		{"attested-no-object.yaml", "11:9", "names no object", "add object:"},
+		{"bad-source-type.yaml", "4:11", `unknown type "bok" of source "handbook-a"`, "did you mean 'book'"},
+		{"group-is-a-name.yaml", "11:5", `family "Ultramarine" of "natural-ultramarine" is also a name of the material "synthetic-ultramarine"`, "markers or families"},
 	} {
 		t.Run(tc.file, func(t *testing.T) {
 			name := filepath.Join("testdata", "bad", tc.file)

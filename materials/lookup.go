@@ -12,16 +12,62 @@ import (
 
 // index maps folded keys to materials.
 type index struct {
-	names map[string]*Material   // id and every name
-	ci    map[string][]*Material // Colour Index name, its short form and number
-	cas   map[string][]*Material // CAS RN digits
-	all   []nameRef              // every id and name, for suggestions
+	names  map[string]*Material   // id and every name
+	groups map[string]*Group      // every marker and family name
+	ci     map[string][]*Material // Colour Index name, its short form and number
+	cas    map[string][]*Material // CAS RN digits
+	all    []nameRef              // every id, name and group name, for suggestions
 }
 
 type nameRef struct {
 	key, shown string
 	runes      []rune // key, as runes for the edit distance
 	mask       uint64 // runeMask(runes)
+	group      bool   // a marker or family name
+}
+
+// GroupKind says what a [Group] name is.
+type GroupKind string
+
+// The kinds of group.
+const (
+	// GroupMarker is a compound or phase that an analysis identifies and
+	// that several materials may carry: carminic acid, indigotin.
+	GroupMarker GroupKind = "marker"
+	// GroupFamily is a name the trade gives a group of materials: carbon
+	// black, ultramarine.
+	GroupFamily GroupKind = "family"
+	// GroupColourIndex is a Colour Index name or number that several
+	// materials share.
+	GroupColourIndex GroupKind = "Colour Index"
+	// GroupCAS is a CAS Registry Number that several materials share.
+	GroupCAS GroupKind = "CAS RN"
+)
+
+// Group is a name that stands for several materials, and those materials
+// in dataset order.
+type Group struct {
+	Name    string // as the dataset first writes it, or as asked
+	Kind    GroupKind
+	Members []*Material
+}
+
+// Groups returns every marker and family of the dataset, sorted by name.
+func (d *Dataset) Groups() []*Group {
+	ix := d.index
+	if ix == nil {
+		ix = buildIndex(d.Materials, nil)
+	}
+	seen := make(map[*Group]bool, len(ix.groups))
+	out := make([]*Group, 0, len(ix.groups))
+	for _, g := range ix.groups {
+		if !seen[g] {
+			seen[g] = true
+			out = append(out, g)
+		}
+	}
+	slices.SortFunc(out, func(a, b *Group) int { return cmp.Compare(strings.ToLower(a.Name), strings.ToLower(b.Name)) })
+	return out
 }
 
 // runeMask sets bit r%64 for every rune r of rs. A key's bits missing from
@@ -45,7 +91,7 @@ func buildIndex(ms []*Material, names map[string]*Material) *index {
 	}
 	// Sized for what goes in: a Colour Index name, its short form and its
 	// number per material at most, and one CAS RN.
-	ix := &index{names: names, ci: make(map[string][]*Material, 3*len(ms)), cas: make(map[string][]*Material, len(ms))}
+	ix := &index{names: names, groups: map[string]*Group{}, ci: make(map[string][]*Material, 3*len(ms)), cas: make(map[string][]*Material, len(ms))}
 	ix.all = make([]nameRef, 0, nKeys)
 	fill := names == nil
 	if fill {
@@ -72,7 +118,25 @@ func buildIndex(ms []*Material, names map[string]*Material) *index {
 			if _, ok := ix.names[k]; !ok && fill {
 				ix.names[k] = m
 			}
-			ix.all = append(ix.all, nameRef{k, n, []rune(k), runeMask([]rune(k))})
+			ix.all = append(ix.all, nameRef{key: k, shown: n, runes: []rune(k), mask: runeMask([]rune(k))})
+		}
+		for _, gl := range [...]struct {
+			kind  GroupKind
+			names []string
+		}{{GroupMarker, m.Markers}, {GroupFamily, m.Families}} {
+			kind := gl.kind
+			for _, name := range gl.names {
+				k := fold(name)
+				g, ok := ix.groups[k]
+				if !ok {
+					g = &Group{Name: name, Kind: kind}
+					ix.groups[k] = g
+					ix.all = append(ix.all, nameRef{key: k, shown: name, runes: []rune(k), mask: runeMask([]rune(k)), group: true})
+				}
+				if !slices.Contains(g.Members, m) {
+					g.Members = append(g.Members, m)
+				}
+			}
 		}
 		if ci := m.ColourIndex; ci != nil {
 			addMulti(ix.ci, fold(ci.Name), m)
@@ -84,41 +148,73 @@ func buildIndex(ms []*Material, names map[string]*Material) *index {
 	return ix
 }
 
-// Lookup finds a material by its id, any of its names, its Colour Index
+// Lookup finds one material by its id, any of its names, its Colour Index
 // generic name ("Pigment Blue 27", short "PB27" or "PB 27") or number
 // ("77510", "C.I. 77510"), or its CAS RN. Case, accents, hyphens, spaces and
 // punctuation do not count. A miss is a [*NotFoundError] with the nearest
-// names; a Colour Index or CAS key that several materials share is an
-// [*AmbiguousError].
+// names; a marker, a family, or a Colour Index or CAS key that several
+// materials share is an [*AmbiguousError] (use [Dataset.Resolve] to read it
+// as their alternatives).
 func (d *Dataset) Lookup(name string) (*Material, error) {
+	r, err := d.Resolve(name)
+	if err != nil {
+		return nil, err
+	}
+	if r.Group != nil {
+		ids := make([]string, len(r.Materials))
+		for i, m := range r.Materials {
+			ids[i] = m.ID
+		}
+		return nil, &AmbiguousError{Name: name, Kind: r.Group.Kind, Matches: ids}
+	}
+	return r.Materials[0], nil
+}
+
+// Resolution is what a name in a finding stands for: one material, or the
+// members of a group (a marker, a family, a shared Colour Index or CAS key),
+// every one of which the finding may be.
+type Resolution struct {
+	Materials []*Material // one, or the group's members in dataset order
+	Group     *Group      // nil when the name names one material
+}
+
+// Resolve reads a name as [Dataset.Lookup] does, except that a marker
+// ("carminic acid"), a family ("carbon black") or a Colour Index or CAS
+// key that several materials share resolves to all of them: an analysis
+// that found the compound cannot tell which of them it was. A material's own
+// name always wins, so a specific name resolves to one material.
+func (d *Dataset) Resolve(name string) (Resolution, error) {
 	ix := d.index
 	if ix == nil {
 		ix = buildIndex(d.Materials, nil)
 	}
 	k := fold(name)
 	if m, ok := ix.names[k]; ok {
-		return m, nil
+		return Resolution{Materials: []*Material{m}}, nil
+	}
+	if g, ok := ix.groups[k]; ok {
+		return Resolution{Materials: g.Members, Group: g}, nil
 	}
 	try := []string{k}
 	if rest, ok := strings.CutPrefix(k, "ci"); ok && rest != "" {
 		try = append(try, rest)
 	}
 	for _, t := range try {
-		for _, tab := range []map[string][]*Material{ix.ci, ix.cas} {
+		for i, tab := range []map[string][]*Material{ix.ci, ix.cas} {
 			switch ms := tab[t]; len(ms) {
 			case 0:
 			case 1:
-				return ms[0], nil
+				return Resolution{Materials: ms}, nil
 			default:
-				ids := make([]string, len(ms))
-				for i, m := range ms {
-					ids[i] = m.ID
+				kind := GroupColourIndex
+				if i == 1 {
+					kind = GroupCAS
 				}
-				return nil, &AmbiguousError{Name: name, Matches: ids}
+				return Resolution{Materials: ms, Group: &Group{Name: name, Kind: kind, Members: ms}}, nil
 			}
 		}
 	}
-	return nil, &NotFoundError{Name: name, Suggestions: ix.nearest(k, 3)}
+	return Resolution{}, &NotFoundError{Name: name, Suggestions: ix.nearest(k, 3)}
 }
 
 // nearest returns up to n names nearest to key by edit distance, within a
@@ -153,9 +249,12 @@ func (ix *index) nearest(key string, n int) []string {
 		if dist > limit {
 			continue
 		}
-		m := ix.names[r.key]
-		if c, ok := best[m.ID]; !ok || dist < c.dist {
-			best[m.ID] = cand{r.shown, dist}
+		id := "group:" + r.key // a marker or family is one candidate of its own
+		if !r.group {
+			id = ix.names[r.key].ID
+		}
+		if c, ok := best[id]; !ok || dist < c.dist {
+			best[id] = cand{r.shown, dist}
 		}
 	}
 	cs := make([]cand, 0, len(best))

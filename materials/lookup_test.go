@@ -306,3 +306,68 @@ func TestNearestMatchesPlainRule(t *testing.T) {
 		}
 	}
 }
+
+func TestResolveGroups(t *testing.T) {
+	d, err := Load(mapFS(map[string]string{"a.yaml": `sources:
+  - {key: k, cite: "Gettens, R. J. and Stout, G. L., Painting Materials, 1942, p. 1"}
+materials:
+  - id: natural-blue
+    names: [natural blue]
+    families: [ultramarine]
+    markers: [lazurite]
+    class: pigment
+    origin: mineral
+    colour_index: {name: Pigment Blue 29, number: "77007"}
+    milestones:
+      - {kind: made, date: "0500", source: k, basis: from-memory}
+  - id: synthetic-blue
+    names: [synthetic blue]
+    families: [Ultramarine]
+    markers: [lazurite]
+    class: pigment
+    origin: synthetic
+    colour_index: {name: Pigment Blue 29, number: "77007"}
+    milestones:
+      - {kind: made, date: "1826", source: k, basis: from-memory}
+`}))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, tc := range []struct {
+		name string
+		kind GroupKind // "" for one material
+		ids  string
+		why  string
+	}{
+		{"ultra-marine", GroupFamily, "natural-blue synthetic-blue", "a family, folded"},
+		{"Lazurite", GroupMarker, "natural-blue synthetic-blue", "a marker"},
+		{"PB29", GroupColourIndex, "natural-blue synthetic-blue", "a shared Colour Index short name"},
+		{"synthetic blue", "", "synthetic-blue", "a material's own name is one material"},
+	} {
+		t.Run(tc.name, func(t *testing.T) {
+			r, err := d.Resolve(tc.name)
+			if err != nil {
+				t.Fatal(err)
+			}
+			var ids []string
+			for _, m := range r.Materials {
+				ids = append(ids, m.ID)
+			}
+			kind := GroupKind("")
+			if r.Group != nil {
+				kind = r.Group.Kind
+			}
+			if kind != tc.kind || strings.Join(ids, " ") != tc.ids {
+				t.Errorf("Resolve(%q) = %s %v, want %s %s (%s)", tc.name, kind, ids, tc.kind, tc.ids, tc.why)
+			}
+		})
+	}
+	var amb *AmbiguousError
+	if _, err := d.Lookup("ultramarine"); !errors.As(err, &amb) || amb.Kind != GroupFamily || len(amb.Matches) != 2 {
+		t.Errorf("Lookup of a family: %v, want an ambiguity naming two materials", err)
+	}
+	var nf *NotFoundError
+	if _, err := d.Lookup("lazurit"); !errors.As(err, &nf) || len(nf.Suggestions) == 0 || nf.Suggestions[0] != "lazurite" {
+		t.Errorf("a misspelt marker: %v, want the marker suggested", err)
+	}
+}

@@ -73,12 +73,18 @@ const (
 	KindSold Kind = "sold"
 	// KindArrived is the first availability in a place.
 	KindArrived Kind = "arrived"
-	// KindWithdrawn is the end of manufacture, or a ban.
+	// KindWithdrawn is the end of manufacture, or a ban; with a place, in
+	// that place only.
 	KindWithdrawn Kind = "withdrawn"
+	// KindAttested is a securely dated object or context in which the
+	// material was identified: evidence that it existed by then (and, with
+	// a place, was at hand there). It bounds nothing by itself; it caps the
+	// lower bounds of the other kinds, which must never be later.
+	KindAttested Kind = "attested"
 )
 
 // Kinds lists the milestone kinds in order.
-func Kinds() []Kind { return []Kind{KindMade, KindSold, KindArrived, KindWithdrawn} }
+func Kinds() []Kind { return []Kind{KindMade, KindSold, KindArrived, KindWithdrawn, KindAttested} }
 
 // Basis says how a milestone's date was taken from its source.
 type Basis string
@@ -96,6 +102,48 @@ func Classes() []string {
 	return []string{"pigment", "dye", "lake", "ink", "binder", "filler", "brightener", "support"}
 }
 
+// SourceTypes are the kinds of publication a source may be, the scholarly
+// ones first: a journal or conference paper or thesis, a book or handbook,
+// a museum, library or archive publication, a reference work (encyclopedia,
+// thesaurus), an official text (patent, law, standard, government report,
+// the Colour Index), a trade publication (catalogue, maker's printed
+// literature), then the web pages of a company, a news site, a blog, a
+// forum, a shop, and any other web page.
+func SourceTypes() []string {
+	return []string{"paper", "book", "museum", "reference", "official", "trade", "company", "news", "blog", "forum", "shop", "web"}
+}
+
+// WeakSource reports whether a source type is a weak one for a report that
+// a court or a curator reads: a company, news, blog, forum, shop or other
+// web page.
+func WeakSource(typ string) bool {
+	switch typ {
+	case "company", "news", "blog", "forum", "shop", "web":
+		return true
+	}
+	return false
+}
+
+// SourceClass groups a source type for statistics: scholarly (paper, book,
+// museum, official), encyclopedia (reference), trade, web (the weak types),
+// or unclassified.
+func SourceClass(typ string) string {
+	switch typ {
+	case "paper", "book", "museum", "official":
+		return "scholarly"
+	case "reference":
+		return "encyclopedia"
+	case "trade":
+		return "trade"
+	case "":
+		return "unclassified"
+	}
+	if WeakSource(typ) {
+		return "web"
+	}
+	return "unclassified"
+}
+
 // Origins are the values a material's origin may take.
 func Origins() []string {
 	return []string{"natural", "mineral", "synthetic", "semi-synthetic"}
@@ -106,6 +154,9 @@ type Source struct {
 	Key  string // unique across the dataset
 	Cite string // the full citation: authors, title, publisher or journal, year, pages
 	URL  string // optional address
+	// Type is what kind of publication it is, one of [SourceTypes]; empty
+	// when a user's file does not say.
+	Type string
 
 	File string // where it was defined
 	Line int
@@ -131,6 +182,9 @@ type Milestone struct {
 	// Allowance is the time stocks may have lingered after a withdrawal;
 	// only withdrawn milestones carry it.
 	Allowance *date.Duration
+	// Object names the dated object or context of an attestation; only
+	// attested milestones carry it.
+	Object string
 
 	File         string
 	Line, Column int
@@ -148,7 +202,14 @@ type Material struct {
 	CAS         string // CAS Registry Number, "14038-43-8"
 	Formula     string
 	Note        string
-	Milestones  []Milestone
+	// Markers are the compounds or phases an analysis identifies that this
+	// material carries ("carminic acid", "indigotin"); Families are names
+	// the trade gives a group of materials it belongs to ("carbon black",
+	// "ultramarine"). A finding that names either is read as every material
+	// that carries it (see [Dataset.Resolve]).
+	Markers    []string
+	Families   []string
+	Milestones []Milestone
 
 	File string
 	Line int
@@ -260,11 +321,54 @@ func (d *Dataset) ArrivalArea(m *Material, place string) string {
 	return ""
 }
 
-func (m *Material) hasArrivals() bool {
+func (m *Material) hasArrivals() bool { return m.has(KindArrived) }
+
+func (m *Material) has(k Kind) bool {
 	for i := range m.Milestones {
-		if m.Milestones[i].Kind == KindArrived {
+		if m.Milestones[i].Kind == k {
 			return true
 		}
 	}
 	return false
+}
+
+// WithdrawalArea returns the area whose withdrawn claims bound m for an
+// object made at place: the most specific area containing place that has
+// any ("001" and no place at all stand for the whole world, and come
+// last). A withdrawal in one country bounds only what was made there; an
+// object of unknown place is bounded only by worldwide ones. ok is false
+// when no withdrawal applies; the world is returned as "".
+func (d *Dataset) WithdrawalArea(m *Material, place string) (area string, ok bool) {
+	if m == nil || !m.has(KindWithdrawn) {
+		return "", false
+	}
+	if d.Regions != nil && place != "" {
+		for code := place; d.Regions.Valid(code) && code != "001"; code = d.Regions.Parent(code) {
+			for i := range m.Milestones {
+				if ms := &m.Milestones[i]; ms.Kind == KindWithdrawn && ms.Place == code {
+					return code, true
+				}
+			}
+		}
+	}
+	for i := range m.Milestones {
+		if ms := &m.Milestones[i]; ms.Kind == KindWithdrawn && (ms.Place == "" || ms.Place == "001") {
+			return "", true
+		}
+	}
+	return "", false
+}
+
+// InArea reports whether a milestone's place lies in area ("" for the
+// world, which holds every milestone).
+func (d *Dataset) InArea(ms *Milestone, area string) bool {
+	switch {
+	case area == "" || area == "001":
+		return true
+	case ms.Place == "" || ms.Place == "001":
+		return false
+	case d.Regions == nil:
+		return ms.Place == area
+	}
+	return d.Regions.Within(ms.Place, area)
 }

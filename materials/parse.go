@@ -40,10 +40,10 @@ type schemaKeys struct {
 func newSchemaKeys() schemaKeys {
 	return schemaKeys{
 		top:         []string{"sources", "materials"},
-		source:      []string{"key", "cite", "url"},
-		material:    []string{"id", "names", "class", "origin", "colour_index", "cas", "formula", "note", "milestones"},
+		source:      []string{"key", "cite", "url", "type"},
+		material:    []string{"id", "names", "class", "origin", "colour_index", "cas", "formula", "note", "markers", "families", "milestones"},
 		colourIndex: []string{"name", "number"},
-		milestone:   []string{"kind", "date", "place", "source", "basis", "note", "allowance"},
+		milestone:   []string{"kind", "date", "place", "source", "basis", "note", "allowance", "object"},
 	}
 }
 
@@ -127,8 +127,8 @@ type field struct {
 // allowed there.
 type fieldSet struct {
 	keys []string
-	f    [10]field
-	set  [10]bool
+	f    [12]field
+	set  [12]bool
 }
 
 // lookup returns the field key; a nil set (not a mapping) has none.
@@ -299,6 +299,16 @@ func (p *parser) source(n *node) (Source, bool) {
 			p.errAt(f.val, fmt.Sprintf("url %q of source %q is not a web address", s.URL, s.Key), "write it in full, starting with https://")
 		}
 	}
+	if f, ok := fs.given("type"); ok {
+		s.Type = strings.TrimSpace(p.str(f, "a source type"))
+		if s.Type != "" && !slices.Contains(SourceTypes(), s.Type) {
+			hint := "type is one of " + strings.Join(SourceTypes(), ", ")
+			if n := nearestWords(strings.ToLower(s.Type), SourceTypes(), 1); len(n) == 1 {
+				hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
+			}
+			p.errAt(f.val, fmt.Sprintf("unknown type %q of source %q", s.Type, s.Key), hint)
+		}
+	}
 	if s.Key != "" && !validID(s.Key) {
 		p.errAt(fs.at("key").val, fmt.Sprintf("source key %q is not lower case letters, digits and hyphens", s.Key),
 			"write it like 'artists-pigments-1'")
@@ -358,6 +368,12 @@ func (p *parser) material(n *node) *Material {
 	if f, ok := fs.given("note"); ok {
 		m.Note = strings.TrimSpace(p.str(f, "note"))
 	}
+	if f, ok := fs.given("markers"); ok {
+		m.Markers = p.groupNames(f, "markers", what)
+	}
+	if f, ok := fs.given("families"); ok {
+		m.Families = p.groupNames(f, "families", what)
+	}
 	if len(m.keys) == 0 {
 		m.keys = []string{fold(m.ID)}
 	}
@@ -371,6 +387,25 @@ func (p *parser) material(n *node) *Material {
 		}
 	}
 	return m
+}
+
+// groupNames reads a list of marker or family names.
+func (p *parser) groupNames(f field, key, what string) []string {
+	list := p.list(f.val, key)
+	out := make([]string, 0, len(list))
+	for _, nn := range list {
+		nn = deref(nn)
+		s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
+		switch {
+		case s == "":
+			p.errAt(nn, "empty name in the "+key+" of "+what, "")
+		case fold(s) == "":
+			p.errAt(nn, fmt.Sprintf("name %q in the %s of %s has no letters or digits", s, key, what), "")
+		default:
+			out = append(out, s)
+		}
+	}
+	return out
 }
 
 func (p *parser) oneOf(fs *fieldSet, key, what string, at *node, allowed []string) string {
@@ -422,13 +457,13 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	ok := true
 	kind := p.required(fs, "kind", where, n)
 	switch Kind(kind) {
-	case KindMade, KindSold, KindArrived, KindWithdrawn:
+	case KindMade, KindSold, KindArrived, KindWithdrawn, KindAttested:
 		ms.Kind = Kind(kind)
 	case "":
 		ok = false
 	default:
-		hint := "kind is one of made, sold, arrived, withdrawn"
-		if s := nearestWords(strings.ToLower(kind), []string{"made", "sold", "arrived", "withdrawn"}, 1); len(s) == 1 {
+		hint := "kind is one of made, sold, arrived, withdrawn, attested"
+		if s := nearestWords(strings.ToLower(kind), []string{"made", "sold", "arrived", "withdrawn", "attested"}, 1); len(s) == 1 {
 			hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
 		}
 		p.errAt(fs.at("kind").val, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
@@ -505,6 +540,18 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	}
 	if f, has := fs.given("note"); has {
 		ms.Note = strings.TrimSpace(p.str(f, "a note"))
+	}
+	if f, has := fs.given("object"); has {
+		ms.Object = strings.TrimSpace(p.str(f, "an object"))
+		if ms.Kind != "" && ms.Kind != KindAttested {
+			p.errAt(f.key, fmt.Sprintf("object on a %s milestone of %s", ms.Kind, what),
+				"only an attested milestone names an object; put what you want to say in its note")
+			ok = false
+		}
+	}
+	if ms.Kind == KindAttested && ms.Object == "" && !fs.at("object").typo {
+		p.errAt(n, "an attested milestone of "+what+" names no object", "add object: with the dated object or context in which the material was identified")
+		ok = false
 	}
 	if f, has := fs.given("allowance"); has {
 		text := strings.TrimSpace(p.str(f, "an allowance"))

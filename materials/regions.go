@@ -125,6 +125,17 @@ func (r *Regions) Ancestors(code string) []string {
 	return out
 }
 
+// Within reports whether place lies in area: it is area itself or one of
+// the areas that contain it. The world ("001") contains every known place.
+func (r *Regions) Within(place, area string) bool {
+	for p, ok := r.places[place]; ok; p, ok = r.places[p.parent] {
+		if p.code == area {
+			return true
+		}
+	}
+	return false
+}
+
 // Region returns the top-level M49 region (Africa "002", Americas "019",
 // Asia "142", Europe "150", Oceania "009") that holds code; "001" for the
 // world and places directly in it; "" when code is unknown.

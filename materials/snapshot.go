@@ -33,7 +33,7 @@ var builtinSnapshot string
 // change.
 const (
 	snapshotMagic  = "terminus materials snapshot\n"
-	snapshotFormat = 1
+	snapshotFormat = 2
 )
 
 // errStaleSnapshot is a snapshot made from other files than those embedded.
@@ -111,7 +111,7 @@ func decodeSnapshot(snap string, data fs.FS) (*Dataset, error) {
 		d.Sources = make([]Source, n)
 		for i := range d.Sources {
 			s := &d.Sources[i]
-			s.Key, s.Cite, s.URL, s.File = r.str(), r.str(), r.str(), r.str()
+			s.Key, s.Cite, s.URL, s.Type, s.File = r.str(), r.str(), r.str(), r.str(), r.str()
 			s.Line, s.col = r.int(), r.int()
 		}
 	}
@@ -181,31 +181,21 @@ func checksum(fsys fs.FS, name string, buf []byte) (int, uint32, error) {
 // their text.
 func (r *snapReader) material(m *Material, dates map[string]*date.Date) error {
 	m.ID = r.str()
-	if n, ok := r.list(2); ok {
-		m.Names = make([]string, n)
-		for i := range m.Names {
-			m.Names[i] = r.str()
-		}
-	}
-	if n, ok := r.list(2); ok {
-		m.keys = make([]string, n)
-		for i := range m.keys {
-			m.keys[i] = r.str()
-		}
-	}
+	m.Names, m.keys = r.strs(), r.strs()
 	m.Class, m.Origin = r.str(), r.str()
 	if r.flag() {
 		m.ColourIndex = &ColourIndex{Name: r.str(), Number: r.str()}
 	}
 	m.CAS, m.Formula, m.Note, m.File = r.str(), r.str(), r.str(), r.str()
 	m.Line, m.col = r.int(), r.int()
+	m.Markers, m.Families = r.strs(), r.strs()
 	if n, ok := r.list(16); ok {
 		m.Milestones = make([]Milestone, n)
 		for i := range m.Milestones {
 			ms := &m.Milestones[i]
 			ms.Kind = Kind(r.str())
 			text := r.str()
-			ms.Place, ms.Source, ms.Basis, ms.Note = r.str(), r.str(), Basis(r.str()), r.str()
+			ms.Place, ms.Source, ms.Basis, ms.Note, ms.Object = r.str(), r.str(), Basis(r.str()), r.str(), r.str()
 			if r.flag() {
 				ms.Allowance = &date.Duration{Years: r.int64(), Months: r.int64(), Weeks: r.int64(), Days: r.int64()}
 			}
@@ -325,6 +315,19 @@ func (r *snapReader) str() string {
 		return ""
 	}
 	return r.pool[off : off+n]
+}
+
+// strs reads a list of strings written as a list; nil for a nil list.
+func (r *snapReader) strs() []string {
+	n, ok := r.list(2)
+	if !ok {
+		return nil
+	}
+	out := make([]string, n)
+	for i := range out {
+		out[i] = r.str()
+	}
+	return out
 }
 
 func (r *snapReader) bytes(n int) string {

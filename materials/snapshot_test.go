@@ -39,6 +39,7 @@ func encodeSnapshot(d *Dataset, data fs.FS) ([]byte, error) {
 		w.str(s.Key)
 		w.str(s.Cite)
 		w.str(s.URL)
+		w.str(s.Type)
 		w.str(s.File)
 		w.int(int64(s.Line))
 		w.int(int64(s.col))
@@ -61,6 +62,8 @@ func encodeSnapshot(d *Dataset, data fs.FS) ([]byte, error) {
 		w.str(m.File)
 		w.int(int64(m.Line))
 		w.int(int64(m.col))
+		w.strs(m.Markers)
+		w.strs(m.Families)
 		w.list(m.Milestones == nil, len(m.Milestones))
 		for _, ms := range m.Milestones {
 			w.str(string(ms.Kind))
@@ -69,6 +72,7 @@ func encodeSnapshot(d *Dataset, data fs.FS) ([]byte, error) {
 			w.str(ms.Source)
 			w.str(string(ms.Basis))
 			w.str(ms.Note)
+			w.str(ms.Object)
 			w.flag(ms.Allowance != nil)
 			if a := ms.Allowance; a != nil {
 				w.int(a.Years)

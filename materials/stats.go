@@ -2,6 +2,8 @@ package materials
 
 import (
 	"regexp"
+
+	"terminus/constraint/date"
 )
 
 // Stats are the counts that show how far a dataset reaches and how well it
@@ -25,6 +27,22 @@ type Stats struct {
 	// ArrivedByPlace counts arrived milestones by place as written.
 	ArrivedByPlace map[string]int
 	Withdrawn      int
+
+	// Attested counts attestations, AttestedMaterials the materials that
+	// have one.
+	Attested          int
+	AttestedMaterials int
+	// Markers and Families count the group names.
+	Markers, Families int
+
+	// BySourceClass counts milestones by the class of their source
+	// ([SourceClass]: scholarly, encyclopedia, trade, web, unclassified).
+	BySourceClass map[string]int
+	// WeakAlone counts milestones that rest on a weak source alone: their
+	// source is a company, news, blog, forum, shop or other web page, and
+	// no milestone of the same material, kind and place from a stronger
+	// source overlaps their date.
+	WeakAlone int
 
 	// Disagreeing counts materials with two or more claims of the same kind
 	// and place: sources that disagree.
@@ -63,7 +81,18 @@ func HasLocator(cite string) bool { return locator.MatchString(cite) }
 func (d *Dataset) Stats() Stats {
 	s := Stats{
 		ByClass: map[string]int{}, ByOrigin: map[string]int{}, ByKind: map[Kind]int{},
-		ArrivedByRegion: map[string]int{}, ArrivedByPlace: map[string]int{},
+		ArrivedByRegion: map[string]int{}, ArrivedByPlace: map[string]int{}, BySourceClass: map[string]int{},
+	}
+	for _, g := range d.Groups() {
+		if g.Kind == GroupMarker {
+			s.Markers++
+		} else {
+			s.Families++
+		}
+	}
+	typeOf := make(map[string]string, len(d.Sources))
+	for _, src := range d.Sources {
+		typeOf[src.Key] = src.Type
 	}
 	located := map[string]bool{}
 	for _, src := range d.Sources {
@@ -80,7 +109,13 @@ func (d *Dataset) Stats() Stats {
 		}
 		seen := map[kp]int{}
 		disagree := false
-		for _, ms := range m.Milestones {
+		attested := false
+		for i := range m.Milestones {
+			ms := &m.Milestones[i]
+			s.BySourceClass[SourceClass(typeOf[ms.Source])]++
+			if WeakSource(typeOf[ms.Source]) && !backedUp(m, i, typeOf) {
+				s.WeakAlone++
+			}
 			s.Milestones++
 			s.ByKind[ms.Kind]++
 			cited[ms.Source] = true
@@ -101,6 +136,9 @@ func (d *Dataset) Stats() Stats {
 				}
 			case KindWithdrawn:
 				s.Withdrawn++
+			case KindAttested:
+				s.Attested++
+				attested = true
 			}
 			seen[kp{ms.Kind, ms.Place}]++
 			if seen[kp{ms.Kind, ms.Place}] == 2 {
@@ -110,6 +148,9 @@ func (d *Dataset) Stats() Stats {
 		if disagree {
 			s.Disagreeing++
 		}
+		if attested {
+			s.AttestedMaterials++
+		}
 	}
 	s.Sources = len(d.Sources)
 	for _, src := range d.Sources {
@@ -118,4 +159,30 @@ func (d *Dataset) Stats() Stats {
 		}
 	}
 	return s
+}
+
+// backedUp reports whether milestone i of m is backed up by another of the
+// same kind and place, from a source that is not weak, whose date overlaps
+// its own.
+func backedUp(m *Material, i int, typeOf map[string]string) bool {
+	ms := &m.Milestones[i]
+	for j := range m.Milestones {
+		o := &m.Milestones[j]
+		if j == i || o.Kind != ms.Kind || o.Place != ms.Place || WeakSource(typeOf[o.Source]) || typeOf[o.Source] == "" {
+			continue
+		}
+		if overlaps(ms.Date, o.Date) {
+			return true
+		}
+	}
+	return false
+}
+
+// overlaps reports whether two dates share a day (open ends reach out).
+func overlaps(a, b date.Date) bool {
+	aFirst, aHasFirst := a.Earliest()
+	aLast, aHasLast := a.Latest()
+	bFirst, bHasFirst := b.Earliest()
+	bLast, bHasLast := b.Latest()
+	return (!aHasFirst || !bHasLast || aFirst <= bLast) && (!bHasFirst || !aHasLast || bFirst <= aLast)
 }

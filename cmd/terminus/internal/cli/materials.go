@@ -289,6 +289,8 @@ type materialJSON struct {
 	CAS         *string          `json:"cas"`
 	Formula     *string          `json:"formula"`
 	Note        *string          `json:"note"`
+	Markers     []string         `json:"markers,omitempty"`
+	Families    []string         `json:"families,omitempty"`
 	Milestones  []milestoneJSON  `json:"milestones"`
 }
 
@@ -305,6 +307,7 @@ type milestoneJSON struct {
 	Basis     string  `json:"basis"`
 	Note      string  `json:"note,omitempty"`
 	Allowance string  `json:"allowance,omitempty"`
+	Object    string  `json:"object,omitempty"`
 }
 
 func optional(s string) *string {
@@ -316,7 +319,8 @@ func optional(s string) *string {
 
 func materialJSONOf(m *materials.Material) materialJSON {
 	out := materialJSON{ID: m.ID, Names: m.Names, Class: m.Class, Origin: m.Origin,
-		CAS: optional(m.CAS), Formula: optional(m.Formula), Note: optional(m.Note), Milestones: []milestoneJSON{}}
+		CAS: optional(m.CAS), Formula: optional(m.Formula), Note: optional(m.Note), Markers: m.Markers, Families: m.Families,
+		Milestones: []milestoneJSON{}}
 	if out.Names == nil {
 		out.Names = []string{}
 	}
@@ -325,7 +329,7 @@ func materialJSONOf(m *materials.Material) materialJSON {
 	}
 	for _, ms := range m.Milestones {
 		j := milestoneJSON{Kind: string(ms.Kind), Date: ms.Date.EDTF(), Place: optional(ms.Place),
-			Source: ms.Source, Basis: string(ms.Basis), Note: ms.Note}
+			Source: ms.Source, Basis: string(ms.Basis), Note: ms.Note, Object: ms.Object}
 		if ms.Allowance != nil {
 			j.Allowance = ms.Allowance.String()
 		}
@@ -357,9 +361,13 @@ func newMaterialsShowCmd(s IO, load datasetLoader) *cobra.Command {
 		Long: `Show one material: its names, Colour Index and CAS numbers, and every
 milestone with its date, place, basis and the full citation of its source.
 NAME is an id, any name, a Colour Index name or number, or a CAS RN; case,
-accents, hyphens and spaces do not count.`,
+accents, hyphens and spaces do not count. A marker (a compound an analysis
+finds, such as carminic acid) or a family (a trade name for several
+materials, such as carbon black) lists the materials it stands for: a
+finding that names it is read as any of them.`,
 		Example: `  terminus materials show "Prussian blue"
-  terminus materials show PB27 --place JP`,
+  terminus materials show PB27 --place JP
+  terminus materials show "carminic acid"`,
 		Args: cobra.MinimumNArgs(1),
 		RunE: func(c *cobra.Command, args []string) error {
 			ds, err := load()
@@ -367,7 +375,7 @@ accents, hyphens and spaces do not count.`,
 				return err
 			}
 			name := strings.Join(args, " ")
-			m, err := ds.Lookup(name)
+			r, err := ds.Resolve(name)
 			if err != nil {
 				return usageError(err)
 			}
@@ -376,9 +384,15 @@ accents, hyphens and spaces do not count.`,
 			}
 			switch format {
 			case "text", "":
-				return showText(s.Out, ds, m, place)
+				if r.Group != nil {
+					return showGroupText(s.Out, r.Group)
+				}
+				return showText(s.Out, ds, r.Materials[0], place)
 			case "json":
-				return writeJSON(s.Out, materialJSONOf(m))
+				if r.Group != nil {
+					return writeJSON(s.Out, groupJSON{Group: r.Group.Name, Kind: string(r.Group.Kind), Materials: materialsJSON(r.Materials)})
+				}
+				return writeJSON(s.Out, materialJSONOf(r.Materials[0]))
 			}
 			return usageError(fmt.Errorf("unknown --format %q: expected text or json", format))
 		},
@@ -386,6 +400,31 @@ accents, hyphens and spaces do not count.`,
 	cmd.Flags().StringVarP(&format, "format", "f", "text", "output format: text or json")
 	cmd.Flags().StringVar(&place, "place", "", "also say which arrival applies to this place")
 	return cmd
+}
+
+// groupJSON is a marker or family and the materials it stands for.
+type groupJSON struct {
+	Group     string         `json:"group"`
+	Kind      string         `json:"kind"`
+	Materials []materialJSON `json:"materials"`
+}
+
+// showGroupText lists the materials a marker or family stands for, each
+// with its earliest made and sold dates.
+func showGroupText(w io.Writer, g *materials.Group) error {
+	var b strings.Builder
+	fmt.Fprintf(&b, "%s is a %s: a finding that names it is read as any of these %d materials, bounded by the earliest\n\n", g.Name, g.Kind, len(g.Members))
+	tw := tabwriter.NewWriter(&b, 0, 4, 2, ' ', 0)
+	fmt.Fprintln(tw, "  id\tname\tmade\tsold")
+	for _, m := range g.Members {
+		fmt.Fprintf(tw, "  %s\t%s\t%s\t%s\n", m.ID, m.Name(), claimsText(m.Claims(materials.KindMade, "")), claimsText(m.Claims(materials.KindSold, "")))
+	}
+	if err := tw.Flush(); err != nil {
+		return err
+	}
+	b.WriteString("\n'terminus materials show ID' shows one of them with its sources.\n")
+	_, err := io.WriteString(w, b.String())
+	return err
 }
 
 func showText(w io.Writer, ds *materials.Dataset, m *materials.Material, place string) error {
@@ -403,6 +442,12 @@ func showText(w io.Writer, ds *materials.Dataset, m *materials.Material, place s
 	}
 	if m.Formula != "" {
 		fmt.Fprintf(&b, "  formula        %s\n", m.Formula)
+	}
+	if len(m.Markers) > 0 {
+		fmt.Fprintf(&b, "  markers        %s\n", strings.Join(m.Markers, "; "))
+	}
+	if len(m.Families) > 0 {
+		fmt.Fprintf(&b, "  families       %s\n", strings.Join(m.Families, "; "))
 	}
 	if m.Note != "" {
 		fmt.Fprintf(&b, "  note           %s\n", m.Note)
@@ -423,6 +468,9 @@ func showText(w io.Writer, ds *materials.Dataset, m *materials.Material, place s
 				when += " (" + people + ")"
 			}
 			fmt.Fprintf(&b, "  %-9s  %s%s  [%s]\n", ms.Kind, when, where, ms.Basis)
+			if ms.Object != "" {
+				fmt.Fprintf(&b, "             in %s\n", ms.Object)
+			}
 			if ms.Allowance != nil {
 				fmt.Fprintf(&b, "             stocks may have lasted %s more\n", ms.Allowance.String())
 			}
@@ -637,6 +685,10 @@ func statsText(w io.Writer, ds *materials.Dataset, st materials.Stats) error {
 	fmt.Fprintf(tw, "  by region\t%s\n", counts(st.ArrivedByRegion, region))
 	fmt.Fprintf(tw, "  by place\t%s\n", counts(st.ArrivedByPlace, plain))
 	fmt.Fprintf(tw, "withdrawn\t%d\n", st.Withdrawn)
+	fmt.Fprintf(tw, "attested\t%d, of %d materials\n", st.Attested, st.AttestedMaterials)
+	fmt.Fprintf(tw, "markers and families\t%d markers, %d families\n", st.Markers, st.Families)
+	fmt.Fprintf(tw, "milestones by kind of source\t%s\n", counts(st.BySourceClass, plain))
+	fmt.Fprintf(tw, "  resting on a weak source alone\t%d (company, news, blog, forum, shop or other web page, with no stronger source beside it)\n", st.WeakAlone)
 	fmt.Fprintf(tw, "materials with disagreeing claims\t%d\n", st.Disagreeing)
 	fmt.Fprintf(tw, "sources\t%d (%d cited)\n", st.Sources, st.SourcesCited)
 	return tw.Flush()
@@ -658,6 +710,12 @@ type statsJSON struct {
 	ArrivedByRegion   map[string]int `json:"arrived_by_region"`
 	ArrivedByPlace    map[string]int `json:"arrived_by_place"`
 	Withdrawn         int            `json:"withdrawn"`
+	Attested          int            `json:"attested"`
+	AttestedMaterials int            `json:"attested_materials"`
+	Markers           int            `json:"markers"`
+	Families          int            `json:"families"`
+	BySourceClass     map[string]int `json:"milestones_by_source_class"`
+	WeakAlone         int            `json:"milestones_on_a_weak_source_alone"`
 	Disagreeing       int            `json:"materials_with_disagreeing_claims"`
 	Sources           int            `json:"sources"`
 	SourcesCited      int            `json:"sources_cited"`
@@ -676,7 +734,9 @@ func statsJSONOf(ds *materials.Dataset, st materials.Stats) statsJSON {
 		Documented: st.Documented, FromMemory: st.FromMemory, DocumentedShare: st.DocumentedShare(),
 		DocumentedLocated: st.DocumentedLocated, LocatedShare: st.LocatedShare(),
 		ArrivedByRegion: st.ArrivedByRegion, ArrivedByPlace: st.ArrivedByPlace,
-		Withdrawn: st.Withdrawn, Disagreeing: st.Disagreeing,
-		Sources: st.Sources, SourcesCited: st.SourcesCited,
+		Withdrawn: st.Withdrawn, Attested: st.Attested, AttestedMaterials: st.AttestedMaterials,
+		Markers: st.Markers, Families: st.Families, BySourceClass: st.BySourceClass, WeakAlone: st.WeakAlone,
+		Disagreeing: st.Disagreeing,
+		Sources:     st.Sources, SourcesCited: st.SourcesCited,
 	}
 }

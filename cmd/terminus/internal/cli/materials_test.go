@@ -268,7 +268,7 @@ func TestMaterialsLint(t *testing.T) {
 
 	order := writeFile(t, "order.yaml", strings.Replace(cliGood, `date: "16XX"`, `date: "14XX"`, 1))
 	code, out, _ = runTerminus(t, "materials", "lint", order)
-	if code != 1 || !strings.Contains(out, order+":11:9: sold milestone of \"smalt-test\" (14XX) lies wholly before its earliest made claim") {
+	if code != 1 || !strings.Contains(out, order+":11:9: sold milestone of \"smalt-test\" (14XX) starts before its earliest made claim") {
 		t.Errorf("lint order: exit %d, got %q", code, out)
 	}
 

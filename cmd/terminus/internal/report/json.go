@@ -119,6 +119,7 @@ type jsonEvidence struct {
 	Confidence string              `json:"confidence,omitempty"`
 	Bounds     []jsonEvidenceBound `json:"bounds"`
 	Source     string              `json:"source,omitempty"`
+	Unlisted   bool                `json:"unlisted,omitempty"`
 }
 
 type jsonEvidenceBound struct {
@@ -260,7 +261,7 @@ func toJSON(r *constraint.Result) jsonResult {
 	}
 	for _, e := range r.Evidence {
 		je := jsonEvidence{ID: e.ID, Kind: e.Kind, Event: e.Event, What: e.What, Method: e.Method, Sample: e.Sample,
-			Confidence: e.Confidence, Source: e.Source, Bounds: []jsonEvidenceBound{}}
+			Confidence: e.Confidence, Source: e.Source, Unlisted: e.Unlisted, Bounds: []jsonEvidenceBound{}}
 		for _, b := range e.Bounds {
 			je.Bounds = append(je.Bounds, jsonEvidenceBound{Side: b.Side, Date: b.Date, Tier: b.Tier.String(),
 				Milestone: b.Milestone, Material: b.Material, Source: b.Source})

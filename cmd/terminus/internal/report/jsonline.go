@@ -176,6 +176,9 @@ func AppendJSONLine(b []byte, r *constraint.Result) []byte {
 		}
 		b = append(b, ']')
 		b = appendOmitEmpty(b, `,"source":`, e.Source)
+		if e.Unlisted {
+			b = append(b, `,"unlisted":true`...)
+		}
 		b = append(b, '}')
 	}
 	b = append(b, `],"disagreements":[`...)

@@ -126,7 +126,7 @@ func oddResult(s string, full bool) *constraint.Result {
 	r.Conflicts = []constraint.Conflict{{Tier: network.Soft, Evidence: []string{s}, Steps: []constraint.Step{step}}, {Tier: network.Hard}}
 	r.Corrections = []constraint.Correction{{Tier: network.Firm, Evidence: []string{s, s}}, {}}
 	r.Evidence = []constraint.Evidence{
-		{ID: s, Kind: s, Event: s, What: s, Method: s, Sample: s, Confidence: s, Source: s,
+		{ID: s, Kind: s, Event: s, What: s, Method: s, Sample: s, Confidence: s, Source: s, Unlisted: true,
 			Bounds: []constraint.EvidenceBound{{Side: s, Date: s, Tier: network.Soft, Milestone: s, Material: s, Source: s}, {}}},
 		{},
 	}

@@ -97,8 +97,12 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 			method += " (" + e.Sample + ")"
 		}
 		if len(e.Bounds) == 0 {
-			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | none | | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(e.What),
-				mdEscape(method), e.Confidence, mdEscape(e.Source))
+			none := "none"
+			if e.Unlisted {
+				none = "none: not in the dataset"
+			}
+			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(e.What),
+				mdEscape(method), e.Confidence, none, mdEscape(e.Source))
 			continue
 		}
 		for _, b := range e.Bounds {

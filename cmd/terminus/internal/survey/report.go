@@ -256,6 +256,9 @@ func (r *ReportWriter) closeMarkdown(w *bufio.Writer, c Counts) error {
 	if c.Unbounded > 0 {
 		fmt.Fprintf(w, "No finding or record bounds the date of %d %s: a verdict of consistent there only says that nothing speaks against the claim.\n\n", c.Unbounded, plural(c.Unbounded, "record", "records"))
 	}
+	if c.Unlisted > 0 {
+		fmt.Fprintf(w, "%d %s of %d %s name materials not in the dataset, which bound nothing.\n\n", c.Unlisted, plural(c.Unlisted, "finding", "findings"), c.UnlistedRecords, plural(c.UnlistedRecords, "record", "records"))
+	}
 	if r.info.FailOn != "" {
 		fmt.Fprintf(w, "%d %s fail at the %s tier or a stronger one, or could not be checked.\n\n", c.Failing, plural(c.Failing, "record", "records"), r.info.FailOn)
 	}
@@ -319,6 +322,7 @@ h2.doubtful { color: #875; }
 {{end}}<tr><th>total</th><th class="n">{{.Records}}</th></tr></table>
 {{if .Conflicting}}<p>The evidence of {{.Conflicting}} {{if eq .Conflicting 1}}record{{else}}records{{end}} conflicts at some tier; see the deciding column.</p>
 {{end}}{{if .Unbounded}}<p>No finding or record bounds the date of {{.Unbounded}} {{if eq .Unbounded 1}}record{{else}}records{{end}}: a verdict of consistent there only says that nothing speaks against the claim.</p>
+{{end}}{{if .Unlisted}}<p>{{.Unlisted}} {{if eq .Unlisted 1}}finding{{else}}findings{{end}} of {{.UnlistedRecords}} {{if eq .UnlistedRecords 1}}record name{{else}}records name{{end}} materials not in the dataset, which bound nothing.</p>
 {{end}}{{if .FailOn}}<p>{{.Failing}} {{if eq .Failing 1}}record fails{{else}}records fail{{end}} at the {{.FailOn}} tier or a stronger one, or could not be checked.</p>
 {{end}}`
 
@@ -343,9 +347,11 @@ func (r *ReportWriter) closeHTML(w *bufio.Writer, c Counts) error {
 	}
 	head := struct {
 		Records, Conflicting, Failing, Unbounded int
+		Unlisted, UnlistedRecords                int
 		Inputs, Version, SHA, FailOn             string
 		Rows                                     []countRow
-	}{Records: c.Records, Conflicting: c.Conflicting, Failing: c.Failing, Unbounded: c.Unbounded, Inputs: strings.Join(r.info.Inputs, ", "),
+	}{Records: c.Records, Conflicting: c.Conflicting, Failing: c.Failing, Unbounded: c.Unbounded,
+		Unlisted: c.Unlisted, UnlistedRecords: c.UnlistedRecords, Inputs: strings.Join(r.info.Inputs, ", "),
 		Version: r.info.DatasetVersion, SHA: shortSum(r.info.DatasetSHA256), FailOn: r.info.FailOn}
 	for _, s := range Statuses() {
 		if n := c.ByStatus[s]; n > 0 {

@@ -65,6 +65,9 @@ type Summary struct {
 	// Unbounded is true when no evidence bounds the shown event at any
 	// tier: its claims are consistent only because nothing speaks to them.
 	Unbounded bool
+	// Unlisted counts the record's findings of materials not in the
+	// dataset, which bound nothing.
+	Unlisted int
 	// Fails is true when the record counts toward exit status 1.
 	Fails bool
 	// Err and Hint describe a record error.
@@ -79,6 +82,9 @@ func summarize(r *constraint.Result, fails bool) Summary {
 	what := map[string]string{}
 	for _, e := range r.Evidence {
 		what[e.ID] = e.What
+		if e.Unlisted {
+			s.Unlisted++
+		}
 	}
 	var claims, deciding []string
 	for _, c := range r.Claims {
@@ -168,6 +174,9 @@ type Counts struct {
 	Failing int
 	// Unbounded counts the records that no evidence bounds.
 	Unbounded int
+	// Unlisted counts the findings of materials not in the dataset, and
+	// UnlistedRecords the records that have any.
+	Unlisted, UnlistedRecords int
 }
 
 func (c *Counts) add(s Summary) {
@@ -184,6 +193,10 @@ func (c *Counts) add(s Summary) {
 	}
 	if s.Unbounded {
 		c.Unbounded++
+	}
+	if s.Unlisted > 0 {
+		c.Unlisted += s.Unlisted
+		c.UnlistedRecords++
 	}
 }
 

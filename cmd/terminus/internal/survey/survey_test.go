@@ -458,3 +458,29 @@ func TestUnboundedRecordsAreCounted(t *testing.T) {
 		}
 	}
 }
+
+// Findings of materials not in the dataset are counted, and the summaries
+// say they bound nothing.
+func TestUnlistedFindingsAreCounted(t *testing.T) {
+	const text = `{"id":"a","claims":[{"date":"1850"}],"findings":[{"material":"an unknown lake","unlisted":true},{"material":"smalt"}]}
+{"id":"b","claims":[{"date":"1850"}],"findings":[{"material":"x","unlisted":true},{"material":"y","unlisted":true}]}
+{"id":"c","claims":[{"date":"1850"}],"findings":[{"material":"smalt"}]}
+`
+	for _, format := range []string{"md", "html"} {
+		var out bytes.Buffer
+		var w Writer = NewMarkdownWriter(&out, ReportInfo{})
+		if format == "html" {
+			w = NewHTMLWriter(&out, ReportInfo{})
+		}
+		c, err := Run(context.Background(), []*Input{openText(t, "c.jsonl", text)}, w, Options{Dataset: builtin(t)})
+		if err != nil {
+			t.Fatal(err)
+		}
+		if c.Unlisted != 3 || c.UnlistedRecords != 2 {
+			t.Errorf("%s: %d unlisted findings in %d records; want 3 in 2", format, c.Unlisted, c.UnlistedRecords)
+		}
+		if !strings.Contains(out.String(), "3 findings of 2 records name materials not in the dataset, which bound nothing.") {
+			t.Errorf("%s: the report does not count the unlisted findings:\n%s", format, out.String())
+		}
+	}
+}
