@@ -293,6 +293,10 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"lead-tin-yellow-i", materials.KindAttested, "NL", "1657/1658", "Wikipedia, Lead-tin-yellow, captions"},
 		// Dictionarium Polygraphicum (London, 1735), entry Turmerick: a dated document of its use.
 		{"turmeric", materials.KindAttested, "GB", "1735", "Dictionarium Polygraphicum 1735"},
+		// Nakamura et al., Studies in Conservation 59 (2014) and Analytical Chemistry 81 (2009), abstracts: Shōsōin textiles.
+		{"safflower", materials.KindAttested, "JP", "0752", "Nakamura et al. 2014, abstract"},
+		{"madder", materials.KindAttested, "JP", "07XX", "Nakamura et al. 2009, abstract"},
+		{"natural-indigo", materials.KindAttested, "JP", "07XX", "Nakamura et al. 2009, abstract"},
 		// Heritage Science 7 (2019), abstract: Palace of Apries reliefs (reign 589-570 BCE, conventional).
 		{"lead-tin-yellow-i", materials.KindMade, "", "-0588/-0569", "Palace of Apries 2019, abstract"},
 		{"lead-tin-yellow-ii", materials.KindMade, "", "-0588/-0569", "Palace of Apries 2019, abstract"},
