@@ -293,6 +293,9 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"lead-tin-yellow-i", materials.KindAttested, "NL", "1657/1658", "Wikipedia, Lead-tin-yellow, captions"},
 		// Dictionarium Polygraphicum (London, 1735), entry Turmerick: a dated document of its use.
 		{"turmeric", materials.KindAttested, "GB", "1735", "Dictionarium Polygraphicum 1735"},
+		// Haude, JAIC 37 (1998), section 5, and Straulino-Mainou et al., Coatings 11 (2021): Maya blue in colonial Mexico.
+		{"maya-blue", materials.KindAttested, "MX", "1578/1585", "Haude 1998, section 5"},
+		{"maya-blue", materials.KindAttested, "MX", "1521/1600", "Straulino-Mainou et al. 2021, abstract"},
 		// Nakamura et al., Studies in Conservation 59 (2014) and Analytical Chemistry 81 (2009), abstracts: Shōsōin textiles.
 		{"safflower", materials.KindAttested, "JP", "0752", "Nakamura et al. 2014, abstract"},
 		{"madder", materials.KindAttested, "JP", "07XX", "Nakamura et al. 2009, abstract"},
