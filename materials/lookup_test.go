@@ -220,7 +220,6 @@ func TestHandMadeDataset(t *testing.T) {
 	}
 }
 
-
 // nearestPlain is the suggestion rule spelt out with the exact edit
 // distance (held to the textbook table in package spell) and no
 // shortcuts: the reference for index.nearest.

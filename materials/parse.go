@@ -376,7 +376,7 @@ func (p *parser) milestone(n *input.Node, what string) (Milestone, bool) {
 				hint = "did you mean " + orList(s) + "? (" + hint + ")"
 			}
 			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where())
-			if (f.Value.Type == input.Int) {
+			if f.Value.Type == input.Int {
 				msg += " (an unquoted number loses its leading zeros)"
 			}
 			p.errAt(f.Value, msg, hint)
