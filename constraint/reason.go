@@ -11,6 +11,7 @@ import (
 	"terminus/constraint/date"
 	"terminus/constraint/input"
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 	"terminus/materials"
 )
 
@@ -50,16 +51,8 @@ func Analyze(ctx context.Context, c *Case, ds *materials.Dataset, opt Options) (
 	return res, nil
 }
 
-// Cautions are the limits every report states.
-func Cautions() []string {
-	return []string{
-		"Material evidence can rule dates out; it never proves a date, nor that an object is authentic.",
-		"A bound from a material holds only if the finding belongs to that event: not to a later retouching, a consolidant, a fill or a contamination.",
-		"Absence proves nothing: a material not detected may be below the detection limit, or not sampled.",
-		"Dataset dates are only as good as their sources and may be revised; a first date of making, sale or arrival is the earliest known, not a rule of nature.",
-		"This is no authentication certificate and no legal opinion: defer to qualified conservators, accredited laboratories and the laws on cultural property that apply.",
-	}
-}
+// Cautions are the limits every report states (see package wording).
+func Cautions() []string { return wording.Cautions() }
 
 // analysis is a case resolved against a dataset, ready to build networks.
 type analysis struct {
@@ -433,7 +426,7 @@ func (a *analysis) itemText(it *boundItem) string {
 	}
 	t := it.name + ": " + what + " [" + it.ms.Source + ", " + string(it.ms.Basis) + "]"
 	if it.upper {
-		t += ", plus a stock allowance of " + durationText(it.allow)
+		t += ", plus a stock allowance of " + wording.Duration(it.allow)
 	}
 	return t
 }
@@ -448,37 +441,7 @@ func (a *analysis) confidenceCap(c Confidence) network.Tier {
 	return network.Hard
 }
 
-func dayText(d date.Day, upper bool) string { return FormatBound(d, upper) }
-
-// FormatBound shows a day as people write a bound: the year alone when the
-// bound is the first (lower) or last (upper) day of a year, the month when
-// it is the first or last of a month.
-func FormatBound(d date.Day, upper bool) string {
-	y, m, dd := d.Civil()
-	yearText := date.FormatYear(y)
-	if y < 1 {
-		yearText = fmt.Sprintf("%d BCE", 1-y)
-	} else if y < 1000 {
-		yearText = fmt.Sprintf("%d", y)
-	}
-	if !upper && m == 1 && dd == 1 || upper && m == 12 && dd == 31 {
-		return yearText
-	}
-	if !upper && dd == 1 || upper && dd == date.DaysInMonth(y, m) {
-		if y < 1000 {
-			return fmt.Sprintf("%s %s", monthName(m), yearText)
-		}
-		return fmt.Sprintf("%s-%02d", date.FormatYear(y), m)
-	}
-	if y < 1000 {
-		return fmt.Sprintf("%d %s %s", dd, monthName(m), yearText)
-	}
-	return d.ISO()
-}
-
-func monthName(m int) string {
-	return [...]string{"", "Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"}[m]
-}
+func dayText(d date.Day, upper bool) string { return wording.Bound(d, upper) }
 
 // materialBounds returns the bounds a material's milestones give an event
 // made at place, and notes about fallbacks, open ends and disagreements.
@@ -720,28 +683,6 @@ func displayName(m *materials.Material) string {
 	return m.ID
 }
 
-func durationText(d date.Duration) string {
-	var parts []string
-	add := func(n int64, unit string) {
-		if n == 0 {
-			return
-		}
-		if n == 1 {
-			parts = append(parts, "1 "+unit)
-		} else {
-			parts = append(parts, fmt.Sprintf("%d %ss", n, unit))
-		}
-	}
-	add(d.Years, "year")
-	add(d.Months, "month")
-	add(d.Weeks, "week")
-	add(d.Days, "day")
-	if len(parts) == 0 {
-		return "0 days"
-	}
-	return strings.Join(parts, " ")
-}
-
 // window is a material's availability at one tier: [lo, hi], either side
 // possibly open, with the items that set each side.
 type window struct {
@@ -807,14 +748,14 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 			gap := ""
 			if o.AtLeast != nil {
 				lo = o.AtLeast.MinDays()
-				gap += " at least " + durationText(*o.AtLeast)
+				gap += " at least " + wording.Duration(*o.AtLeast)
 			}
 			if o.AtMost != nil {
 				hi = o.AtMost.MaxDays()
 				if gap != "" {
 					gap += " and"
 				}
-				gap += " at most " + durationText(*o.AtMost)
+				gap += " at most " + wording.Duration(*o.AtMost)
 			}
 			text := e.ID + " comes after " + o.Event
 			if gap != "" {
@@ -1391,10 +1332,10 @@ func recordText(r Record, alts []network.Alt) string {
 	lo, hi := alts[0].Lo, alts[len(alts)-1].Hi
 	first, last := "open", "open"
 	if lo > -network.Inf {
-		first = FormatBound(date.Day(lo), false)
+		first = wording.Bound(date.Day(lo), false)
 	}
 	if hi < network.Inf {
-		last = FormatBound(date.Day(hi), true)
+		last = wording.Bound(date.Day(hi), true)
 	}
 	q := ""
 	if r.Date.Uncertain {
