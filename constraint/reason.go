@@ -64,6 +64,10 @@ type analysis struct {
 	circa     date.Circa
 	allowance date.Duration
 	notes     []string
+	// place is the case's place and eventPlaces each event's own, read as
+	// codes ("" where none is given).
+	place       string
+	eventPlaces []string
 }
 
 type resolvedFinding struct {
@@ -126,11 +130,13 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	for i, e := range a.events {
 		ids[i] = e.ID
 	}
-	if err := a.checkPlace(c.Place, c.PlacePos); err != nil {
+	var err error
+	if a.place, err = a.resolvePlace(c.Place, c.PlacePos); err != nil {
 		return nil, err
 	}
-	for _, e := range a.events {
-		if err := a.checkPlace(e.Place, e.PlacePos); err != nil {
+	a.eventPlaces = make([]string, len(a.events))
+	for i, e := range a.events {
+		if a.eventPlaces[i], err = a.resolvePlace(e.Place, e.PlacePos); err != nil {
 			return nil, err
 		}
 		for _, o := range e.After {
@@ -233,18 +239,37 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	return a, nil
 }
 
-func (a *analysis) checkPlace(place string, p Pos) error {
-	if place == "" {
-		return nil
+// resolvePlace reads a place as a code, or as a name or former name of a
+// country or area (a note then says how it was read); "" stays "".
+func (a *analysis) resolvePlace(place string, p Pos) (string, error) {
+	if place == "" || a.ds.Regions == nil {
+		return place, nil
 	}
-	if a.ds.Regions == nil || a.ds.Regions.Valid(place) {
-		return nil
+	code, note, ok := a.ds.Regions.ResolvePlace(place)
+	if ok {
+		if note != "" {
+			a.notes = append(a.notes, note)
+		}
+		return code, nil
 	}
-	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP) or a UN M49 area code (\"155\" Western Europe)"
-	if s := a.ds.Regions.Suggest(place); len(s) > 0 {
-		hint = "did you mean " + input.OrList(s) + "?"
+	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP), a UN M49 area code (\"155\" Western Europe) or a country's English name"
+	if s := a.ds.Regions.SuggestPlace(place); len(s) > 0 {
+		named := make([]string, len(s))
+		for i, c := range s {
+			named[i] = c
+		}
+		hint = "did you mean " + input.OrList(named) + "? (" + placeList(a.ds.Regions, s) + ")"
 	}
-	return a.errAt(p, hint, "unknown place %q", place)
+	return "", a.errAt(p, hint, "unknown place %q", place)
+}
+
+// placeList names codes: "NL Netherlands, BE Belgium".
+func placeList(r *materials.Regions, codes []string) string {
+	parts := make([]string, len(codes))
+	for i, c := range codes {
+		parts[i] = c + " " + r.Name(c)
+	}
+	return strings.Join(parts, ", ")
 }
 
 // checkCycles rejects 'after' orders that go round in a loop with no gap
@@ -279,11 +304,12 @@ func (a *analysis) checkCycles() error {
 	return nil
 }
 
-func (a *analysis) placeOf(e Event) string {
-	if e.Place != "" {
-		return e.Place
+// placeOf is where event i was made: its own place, else the case's.
+func (a *analysis) placeOf(i int) string {
+	if a.eventPlaces[i] != "" {
+		return a.eventPlaces[i]
 	}
-	return a.c.Place
+	return a.place
 }
 
 // A link ties a network constraint to the evidence it came from. Its
@@ -788,10 +814,10 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		for _, g := range f.groups {
 			b.notes = append(b.notes, groupNote(f, g))
 		}
-		ev := a.events[a.eventIdx[f.Event]]
-		v := b.vars[a.eventIdx[f.Event]]
+		ei := a.eventIdx[f.Event]
+		v := b.vars[ei]
 		cap := a.confidenceCap(f.Confidence)
-		place := a.placeOf(ev)
+		place := a.placeOf(ei)
 		perMat := make([][]boundItem, len(f.mats))
 		var names []string
 		for i, m := range f.mats {
@@ -1012,13 +1038,13 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 	if err != nil {
 		return nil, err
 	}
-	res := &Result{ID: a.c.ID, Title: a.c.Title, File: a.c.File, Place: a.c.Place, Evidence: b.evidence, Disagreements: b.disagreements}
+	res := &Result{ID: a.c.ID, Title: a.c.Title, File: a.c.File, Place: a.place, Evidence: b.evidence, Disagreements: b.disagreements}
 	res.Dataset = DatasetInfo{Version: a.ds.Version, SHA256: a.ds.SHA256}
 	res.Notes = append(res.Notes, a.arrivalNotes(b)...)
 	res.Notes = append(res.Notes, dedupe(b.notes)...)
 	res.Events = make([]EventResult, len(a.events))
 	for i, e := range a.events {
-		res.Events[i] = EventResult{ID: e.ID, Label: e.Label, Place: a.placeOf(e)}
+		res.Events[i] = EventResult{ID: e.ID, Label: e.Label, Place: a.placeOf(i)}
 	}
 	reported := map[string]bool{}
 	sols, err := b.net.SolveTiers(ctx, network.Options{MaxConflicts: opt.MaxConflicts})
