@@ -153,7 +153,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	}
 	first := a.events[0].ID
 	evidenceIDs := map[string]Pos{}
-	claimIDs := map[string]bool{}
+	claimIDs := map[string]Pos{}
 	useID := func(id string, p Pos) error {
 		if prev, dup := evidenceIDs[id]; dup {
 			return a.errAt(p, "give each finding, record and order its own id", "id %q is used twice (first at line %d)", id, prev.Line)
@@ -223,10 +223,10 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	}
 	for i := range c.Claims {
 		cl := &c.Claims[i]
-		if claimIDs[cl.ID] {
-			return nil, a.errAt(cl.Pos, "", "claim id %q is used twice", cl.ID)
+		if prev, dup := claimIDs[cl.ID]; dup {
+			return nil, a.errAt(cl.Pos, "give each claim its own id", "claim id %q is used twice (first at line %d)", cl.ID, prev.Line)
 		}
-		claimIDs[cl.ID] = true
+		claimIDs[cl.ID] = cl.Pos
 		if cl.Event == "" {
 			cl.Event = first
 		} else if _, ok := a.eventIdx[cl.Event]; !ok {
