@@ -99,7 +99,7 @@ func groupNote(f *resolvedFinding, g groupUse) string {
 	if len(names) == 1 {
 		return f.ID + " names " + g.name + ", " + what + " that only " + names[0] + " carries in the dataset."
 	}
-	return f.ID + " names " + g.name + ", " + what + ": " + input.Join(names, "or") + ". The finding is read as any of them, bounded by the earliest."
+	return f.ID + " names " + g.name + ", " + what + ": " + wording.Join(names, "or") + ". The finding is read as any of them, bounded by the earliest."
 }
 
 func (a *analysis) errAt(p Pos, suggest, format string, args ...any) *input.Error {
@@ -394,7 +394,7 @@ func (a *analysis) arrivalNotes(b *built) []string {
 			out = append(out, "No arrival data for "+names[0]+" in "+a.placeName(p)+": its soft bound falls back to its firm bound.")
 			continue
 		}
-		out = append(out, "No arrival data for "+input.Join(names, "and")+" in "+a.placeName(p)+": their soft bounds fall back to their firm bounds.")
+		out = append(out, "No arrival data for "+wording.Join(names, "and")+" in "+a.placeName(p)+": their soft bounds fall back to their firm bounds.")
 	}
 	return out
 }
@@ -830,7 +830,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		}
 		what := strings.Join(names, " or ")
 		if len(f.groups) > 0 {
-			what = strings.Join(f.Materials, " or ") + " (read as " + input.Join(names, "or") + ")"
+			what = strings.Join(f.Materials, " or ") + " (read as " + wording.Join(names, "or") + ")"
 		}
 		row := Evidence{ID: f.ID, Kind: "finding", Event: f.Event, What: what,
 			Method: f.Method, Sample: f.Sample, Confidence: string(f.Confidence)}
@@ -1202,116 +1202,6 @@ func dedupe(list []string) []string {
 	return out
 }
 
-// judge gives each claim its verdict from the windows.
-func (a *analysis) judge(res *Result) {
-	strongest := -1 // the weakest tier that is still consistent
-	for _, t := range tiers() {
-		if !res.Consistent[t] {
-			break
-		}
-		strongest = int(t)
-	}
-	if strongest < int(network.Soft) && strongest >= 0 {
-		res.Notes = append(res.Notes, fmt.Sprintf("The evidence of the %s tier conflicts, so verdicts are judged at the %s tier, the weakest that agrees.", network.Tier(strongest+1), network.Tier(strongest)))
-	}
-	for _, c := range a.c.Claims {
-		cr := ClaimResult{ID: c.ID, Event: c.Event, Date: c.Date.EDTF(), DateText: c.Date.String(), By: c.By}
-		d := c.Date
-		if d.Approximate {
-			d = d.Widen(a.circa)
-		}
-		ev := res.Events[a.eventIdx[c.Event]]
-		var claim []Span
-		for _, iv := range d.Alternatives {
-			claim = append(claim, Span{First: iv.First, Last: iv.Last, OpenStart: iv.OpenStart, OpenEnd: iv.OpenEnd})
-		}
-		if strongest < 0 {
-			cr.Verdict = Undetermined
-			cr.Note = "the hard evidence contradicts itself; resolve the conflicts first"
-			res.Claims = append(res.Claims, cr)
-			continue
-		}
-		cr.Verdict = Consistent
-		cr.JudgedAt = network.Tier(strongest)
-		failed := -1
-		for _, t := range tiers() {
-			if int(t) > strongest {
-				break
-			}
-			w := ev.Windows[t]
-			cr.Surviving[t] = intersect(claim, w.Intervals)
-			if len(cr.Surviving[t]) == 0 && failed < 0 {
-				failed = int(t)
-			}
-		}
-		if failed >= 0 {
-			cr.Verdict = [...]Verdict{Excluded, Improbable, Doubtful}[failed]
-			w := ev.Windows[failed]
-			cr.Deciding = deciding(claim, w)
-		}
-		res.Claims = append(res.Claims, cr)
-	}
-}
-
-// deciding names the evidence behind the bound a claim falls outside.
-func deciding(claim []Span, w *Window) []string {
-	if len(claim) == 0 {
-		return nil
-	}
-	last := claim[len(claim)-1]
-	first := claim[0]
-	var out []string
-	if w.Earliest.Bounded && !last.OpenEnd && last.Last < w.Earliest.Day {
-		return append(out, w.Earliest.Because...)
-	}
-	if w.Latest.Bounded && !first.OpenStart && first.First > w.Latest.Day {
-		return append(out, w.Latest.Because...)
-	}
-	// The claim falls in a gap of the window: both sides count.
-	out = append(out, w.Earliest.Because...)
-	for _, id := range w.Latest.Because {
-		if !slices.Contains(out, id) {
-			out = append(out, id)
-		}
-	}
-	return out
-}
-
-// intersect returns the days in both a and b, as spans.
-func intersect(a, b []Span) []Span {
-	var out []Span
-	for _, x := range a {
-		for _, y := range b {
-			s := Span{}
-			switch {
-			case x.OpenStart && y.OpenStart:
-				s.OpenStart = true
-			case x.OpenStart:
-				s.First = y.First
-			case y.OpenStart:
-				s.First = x.First
-			default:
-				s.First = max(x.First, y.First)
-			}
-			switch {
-			case x.OpenEnd && y.OpenEnd:
-				s.OpenEnd = true
-			case x.OpenEnd:
-				s.Last = y.Last
-			case y.OpenEnd:
-				s.Last = x.Last
-			default:
-				s.Last = min(x.Last, y.Last)
-			}
-			if !s.OpenStart && !s.OpenEnd && s.First > s.Last {
-				continue
-			}
-			out = append(out, s)
-		}
-	}
-	return out
-}
-
 // sensitivity re-solves the case under the other claim of every
 // disagreement (the least conservative one) and says whether a verdict or
 // the consistency of a tier would change.
@@ -1373,6 +1263,9 @@ func recordText(r Record, alts []network.Alt) string {
 	switch r.Kind {
 	case RecordOn:
 		if len(alts) > 1 {
+			if text := r.Date.String(); strings.HasPrefix(text, "one of") {
+				return "dated " + text + q
+			}
 			return "dated one of " + r.Date.String() + q
 		}
 		if first == last {

@@ -492,3 +492,60 @@ func TestPlacesByName(t *testing.T) {
 		t.Errorf("a misspelt name: %v (hint %q)", err, e.Hint())
 	}
 }
+
+// Every piece of evidence that alone rules a claim out is deciding, and
+// the sentence says how robust the verdict is; a chain decides only
+// together.
+func TestDecidingEvidence(t *testing.T) {
+	// fixture late: made 1950 (hard). Three findings, two samples.
+	r := analyze(t, `findings:
+  - {id: f1, material: fixture late, sample: S1}
+  - {id: f2, material: fixture late, sample: S2}
+  - {id: f3, material: fixture late, sample: S2}
+  - {id: f4, material: fixture yellow, sample: S3}
+claims:
+  - {date: "1898"}
+`)
+	c := r.Claims[0]
+	if c.Verdict != constraint.Excluded || strings.Join(c.Deciding, ",") != "f1,f2,f3" || !c.DecidingEachAlone {
+		t.Fatalf("got %s deciding %v each alone %v; want excluded by f1, f2, f3 each alone (f4, yellow of 1809, allows 1898)", c.Verdict, c.Deciding, c.DecidingEachAlone)
+	}
+	if !strings.Contains(c.Sentence, "f1, f2 and f3, three independent findings from two samples, each enough on its own") {
+		t.Errorf("sentence %q", c.Sentence)
+	}
+	// A record on one event carried to another by an order: the chain.
+	r = analyze(t, `events:
+  - id: a
+  - {id: b, after: [{event: a, at_least: P10Y}]}
+records:
+  - {id: r, event: a, not_before: "1900"}
+claims:
+  - {event: b, date: "1905"}
+`)
+	c = r.Claims[0]
+	if c.Verdict != constraint.Improbable || c.DecidingEachAlone || !strings.Contains(c.Sentence, "(r → order:b>a, together)") {
+		t.Errorf("chain: %s each alone %v, sentence %q", c.Verdict, c.DecidingEachAlone, c.Sentence)
+	}
+}
+
+// When the soft tier conflicts, a claim is judged at the firm tier and
+// its sentence says so, in every format (they all show this sentence).
+func TestVerdictJudgedAtTheWeakestAgreeingTier(t *testing.T) {
+	// fixture yellow arrived NL 1830 (soft); a soft record not after 1820
+	// contradicts it: the soft tier conflicts.
+	r := analyze(t, `place: NL
+findings:
+  - {id: f, material: fixture yellow}
+records:
+  - {id: r, not_after: "1820", strength: soft}
+claims:
+  - {date: "1818"}
+`)
+	c := r.Claims[0]
+	if r.Consistent[network.Soft] || c.Verdict != constraint.Consistent || c.JudgedAt != network.Firm {
+		t.Fatalf("soft consistent %v, verdict %s judged at %s", r.Consistent[network.Soft], c.Verdict, c.JudgedAt)
+	}
+	if strings.Contains(c.Sentence, "all the evidence") || !strings.Contains(c.Sentence, "judged at the firm tier") {
+		t.Errorf("sentence %q", c.Sentence)
+	}
+}

@@ -105,9 +105,16 @@ type ClaimResult struct {
 	// Surviving is, per tier, the part of the claim that the evidence of
 	// that tier allows (nil: none, or the tier is inconsistent).
 	Surviving [3][]Span
-	// Deciding lists the evidence that rules the claim out at the weakest
-	// tier where it fails (empty when consistent).
-	Deciding []string
+	// Deciding lists the evidence that rules the claim out at the tier
+	// where it fails (empty when consistent), strongest first.
+	// DecidingEachAlone is true when each item alone rules it out (the
+	// verdict does not hang on one sample); false when they do so only
+	// together, as a chain.
+	Deciding          []string
+	DecidingEachAlone bool
+	// Sentence says the verdict, the tier that judged it and why, and the
+	// deciding evidence, in the words of every format.
+	Sentence string
 	Note     string
 }
 

@@ -4,6 +4,7 @@ import (
 	"slices"
 	"strings"
 
+	"terminus/constraint/wording"
 	"terminus/materials/spell"
 )
 
@@ -121,17 +122,5 @@ func OrList(xs []string) string {
 	for i, x := range xs {
 		q[i] = "'" + x + "'"
 	}
-	return Join(q, "or")
-}
-
-// Join joins a list as people write it: "a", "a and b", "a, b and c"
-// (with "or" for a choice).
-func Join(xs []string, and string) string {
-	switch len(xs) {
-	case 0:
-		return ""
-	case 1:
-		return xs[0]
-	}
-	return strings.Join(xs[:len(xs)-1], ", ") + " " + and + " " + xs[len(xs)-1]
+	return wording.Join(q, "or")
 }

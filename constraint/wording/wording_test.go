@@ -48,3 +48,38 @@ func TestTierWords(t *testing.T) {
 		t.Errorf("the five cautions of the contract: got %d", len(Cautions()))
 	}
 }
+
+func TestVerdictSentence(t *testing.T) {
+	all := [3]bool{true, true, true}
+	softConflicts := [3]bool{true, true, false}
+	for _, tc := range []struct {
+		facts VerdictFacts
+		want  string
+		why   string
+	}{
+		{VerdictFacts{Verdict: "consistent", JudgedAt: 2, Consistent: all},
+			"It meets the window of all the evidence (hard, firm and soft). This does not prove the date; it only fails to rule it out.",
+			"every tier agrees: judged at the soft tier"},
+		{VerdictFacts{Verdict: "consistent", JudgedAt: 1, Consistent: softConflicts},
+			"It meets the window of the hard and firm evidence. This does not prove the date; it only fails to rule it out. The soft evidence contradicts itself and was set aside, so the claim was judged at the firm tier (see the conflicts).",
+			"the soft tier conflicts: the sentence must not say 'all the evidence'"},
+		{VerdictFacts{Verdict: "excluded", JudgedAt: 2, Consistent: all, Deciding: []string{"f1", "f2", "f3"}, EachAlone: true, Findings: 3, Samples: 2},
+			"It contradicts hard evidence: f1, f2 and f3, three independent findings from two samples, each enough on its own; if the findings belong to this event, the object cannot date from then.",
+			"several findings each exclude: the reader sees how robust it is"},
+		{VerdictFacts{Verdict: "improbable", JudgedAt: 1, Consistent: softConflicts, Deciding: []string{"r", "o"}},
+			"It contradicts firm evidence (r → o, together); very unlikely, and it needs an explanation to stand. The soft evidence contradicts itself and was set aside, so the claim was judged at the firm tier (see the conflicts).",
+			"a chain decides only together; the soft tier was set aside"},
+		{VerdictFacts{Verdict: "doubtful", JudgedAt: 2, Consistent: all, Deciding: []string{"f"}, EachAlone: true, Findings: 1},
+			"It contradicts only soft evidence (f); unusual rather than unlikely, worth a note.",
+			"one finding"},
+		{VerdictFacts{Verdict: "excluded", JudgedAt: 0, Consistent: [3]bool{true, false, false}, Deciding: []string{"f"}, EachAlone: true},
+			"It contradicts hard evidence (f); if the findings belong to this event, the object cannot date from then. The firm and soft evidence contradict themselves and were set aside, so the claim was judged at the hard tier alone (see the conflicts).",
+			"the firm tier conflicts: judged at hard"},
+		{VerdictFacts{Verdict: "undetermined", Note: "the hard evidence contradicts itself; resolve the conflicts first"},
+			"No verdict: the hard evidence contradicts itself; resolve the conflicts first.", "no tier agrees"},
+	} {
+		if got := VerdictSentence(tc.facts); got != tc.want {
+			t.Errorf("%s:\n got %q\nwant %q", tc.why, got, tc.want)
+		}
+	}
+}

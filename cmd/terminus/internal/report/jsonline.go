@@ -86,6 +86,10 @@ func AppendJSONLine(b []byte, r *constraint.Result) []byte {
 		}
 		b = append(b, `,"deciding":`...)
 		b = appendStrings(b, c.Deciding)
+		b = append(b, `,"deciding_each_alone":`...)
+		b = strconv.AppendBool(b, c.DecidingEachAlone)
+		b = append(b, `,"sentence":`...)
+		b = AppendJSONString(b, c.Sentence)
 		b = append(b, `,"surviving":`...)
 		b = appendTiers(b, func(b []byte, t network.Tier) []byte {
 			s := c.Surviving[t]

@@ -85,6 +85,8 @@ type jsonClaim struct {
 	Verdict            string                  `json:"verdict"`
 	JudgedAt           *string                 `json:"judged_at"`
 	Deciding           []string                `json:"deciding"`
+	DecidingEachAlone  bool                    `json:"deciding_each_alone"`
+	Sentence           string                  `json:"sentence"`
 	Surviving          jsonTiers[*[2]*string]  `json:"surviving"`
 	SurvivingIntervals jsonTiers[[][2]*string] `json:"surviving_intervals"`
 	Note               string                  `json:"note,omitempty"`
@@ -210,7 +212,8 @@ func toJSON(r *constraint.Result) jsonResult {
 		out.Events = append(out.Events, je)
 	}
 	for _, c := range r.Claims {
-		jc := jsonClaim{ID: c.ID, Event: c.Event, Date: c.Date, By: c.By, Verdict: string(c.Verdict), Deciding: nonNil(c.Deciding), Note: c.Note}
+		jc := jsonClaim{ID: c.ID, Event: c.Event, Date: c.Date, By: c.By, Verdict: string(c.Verdict), Deciding: nonNil(c.Deciding),
+			DecidingEachAlone: c.DecidingEachAlone, Sentence: c.Sentence, Note: c.Note}
 		if c.Verdict != constraint.Undetermined {
 			jc.JudgedAt = strPtr(c.JudgedAt.String())
 		}

@@ -60,7 +60,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 				hi = wording.Bound(win.Latest.Day, true)
 			}
 			if len(win.Intervals) > 1 {
-				hi += " (gaps: " + spansText(win.Intervals) + ")"
+				hi += " (only within " + spansText(win.Intervals) + ")"
 			}
 			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), wording.Tier(t), lo, mdEscape(hi),
 				mdEscape(strings.Join(win.Earliest.Because, " → ")), mdEscape(strings.Join(win.Latest.Because, " → ")))
@@ -257,19 +257,13 @@ func claimParagraph(c constraint.ClaimResult, events []constraint.EventResult) s
 	if c.By != "" {
 		by = " by " + c.By
 	}
-	head := fmt.Sprintf("The date claimed%s for %s, %s, is **%s**", mdEscape(by), mdEscape(eventName), mdEscape(c.DateText), c.Verdict)
+	head := fmt.Sprintf("The date claimed%s for %s, %s, is **%s**. ", mdEscape(by), mdEscape(eventName), mdEscape(c.DateText), c.Verdict)
+	tail := ""
 	switch c.Verdict {
-	case constraint.Consistent:
-		return head + ": it meets the window of all the evidence. This does not prove the date; it only fails to rule it out."
 	case constraint.Doubtful:
-		return head + fmt.Sprintf(": it contradicts only soft evidence (%s), which makes it unusual rather than unlikely. Of the claim, %s remains within the firm window.",
-			mdEscape(strings.Join(c.Deciding, ", ")), spansText(c.Surviving[network.Firm]))
+		tail = fmt.Sprintf(" Of the claim, %s remains within the firm window.", spansText(c.Surviving[network.Firm]))
 	case constraint.Improbable:
-		return head + fmt.Sprintf(": it contradicts firm evidence (%s) and needs an explanation to stand. Of the claim, %s remains possible on the hard evidence alone.",
-			mdEscape(strings.Join(c.Deciding, ", ")), spansText(c.Surviving[network.Hard]))
-	case constraint.Excluded:
-		return head + fmt.Sprintf(": it contradicts hard evidence (%s). If the findings belong to this event, the object cannot date from then.",
-			mdEscape(strings.Join(c.Deciding, ", ")))
+		tail = fmt.Sprintf(" Of the claim, %s remains possible on the hard evidence alone.", spansText(c.Surviving[network.Hard]))
 	}
-	return head + ": " + mdEscape(c.Note) + "."
+	return head + mdEscape(c.Sentence) + tail
 }

@@ -170,7 +170,7 @@ func Text(w io.Writer, r *constraint.Result) error {
 				head += " (by " + c.By + ")"
 			}
 			wrap(ew, "  ", head+" → "+strings.ToUpper(string(c.Verdict)))
-			wrap(ew, "      ", verdictSentence(c))
+			wrap(ew, "      ", c.Sentence)
 			if c.Verdict != constraint.Undetermined {
 				var parts []string
 				for t := network.Hard; t <= c.JudgedAt; t++ {
@@ -257,21 +257,6 @@ func writeChain(w io.Writer, which string, b constraint.Bound) {
 			wrap(w, strings.Repeat(" ", len([]rune(prefix))-2)+"→ ", s.Text)
 		}
 	}
-}
-
-// verdictSentence says in words what a verdict means for the claim.
-func verdictSentence(c constraint.ClaimResult) string {
-	switch c.Verdict {
-	case constraint.Consistent:
-		return fmt.Sprintf("The claim meets the window of all the evidence (judged at the %s tier).", c.JudgedAt)
-	case constraint.Doubtful:
-		return "The claim contradicts only soft evidence: unusual, worth a note."
-	case constraint.Improbable:
-		return "The claim contradicts firm evidence: very unlikely without an explanation."
-	case constraint.Excluded:
-		return "The claim contradicts hard evidence: impossible if the findings belong to this event."
-	}
-	return "No verdict: " + c.Note + "."
 }
 
 type errWriter struct {
