@@ -11,6 +11,7 @@ import (
 	"terminus/constraint/date"
 	"terminus/constraint/input"
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 	"terminus/materials"
 )
 
@@ -50,16 +51,8 @@ func Analyze(ctx context.Context, c *Case, ds *materials.Dataset, opt Options) (
 	return res, nil
 }
 
-// Cautions are the limits every report states.
-func Cautions() []string {
-	return []string{
-		"Material evidence can rule dates out; it never proves a date, nor that an object is authentic.",
-		"A bound from a material holds only if the finding belongs to that event: not to a later retouching, a consolidant, a fill or a contamination.",
-		"Absence proves nothing: a material not detected may be below the detection limit, or not sampled.",
-		"Dataset dates are only as good as their sources and may be revised; a first date of making, sale or arrival is the earliest known, not a rule of nature.",
-		"This is no authentication certificate and no legal opinion: defer to qualified conservators, accredited laboratories and the laws on cultural property that apply.",
-	}
-}
+// Cautions are the limits every report states (see package wording).
+func Cautions() []string { return wording.Cautions() }
 
 // analysis is a case resolved against a dataset, ready to build networks.
 type analysis struct {
@@ -71,6 +64,10 @@ type analysis struct {
 	circa     date.Circa
 	allowance date.Duration
 	notes     []string
+	// place is the case's place and eventPlaces each event's own, read as
+	// codes ("" where none is given).
+	place       string
+	eventPlaces []string
 }
 
 type resolvedFinding struct {
@@ -133,11 +130,13 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	for i, e := range a.events {
 		ids[i] = e.ID
 	}
-	if err := a.checkPlace(c.Place, c.PlacePos); err != nil {
+	var err error
+	if a.place, err = a.resolvePlace(c.Place, c.PlacePos); err != nil {
 		return nil, err
 	}
-	for _, e := range a.events {
-		if err := a.checkPlace(e.Place, e.PlacePos); err != nil {
+	a.eventPlaces = make([]string, len(a.events))
+	for i, e := range a.events {
+		if a.eventPlaces[i], err = a.resolvePlace(e.Place, e.PlacePos); err != nil {
 			return nil, err
 		}
 		for _, o := range e.After {
@@ -154,7 +153,7 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	}
 	first := a.events[0].ID
 	evidenceIDs := map[string]Pos{}
-	claimIDs := map[string]bool{}
+	claimIDs := map[string]Pos{}
 	useID := func(id string, p Pos) error {
 		if prev, dup := evidenceIDs[id]; dup {
 			return a.errAt(p, "give each finding, record and order its own id", "id %q is used twice (first at line %d)", id, prev.Line)
@@ -224,10 +223,10 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	}
 	for i := range c.Claims {
 		cl := &c.Claims[i]
-		if claimIDs[cl.ID] {
-			return nil, a.errAt(cl.Pos, "", "claim id %q is used twice", cl.ID)
+		if prev, dup := claimIDs[cl.ID]; dup {
+			return nil, a.errAt(cl.Pos, "give each claim its own id", "claim id %q is used twice (first at line %d)", cl.ID, prev.Line)
 		}
-		claimIDs[cl.ID] = true
+		claimIDs[cl.ID] = cl.Pos
 		if cl.Event == "" {
 			cl.Event = first
 		} else if _, ok := a.eventIdx[cl.Event]; !ok {
@@ -240,18 +239,37 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 	return a, nil
 }
 
-func (a *analysis) checkPlace(place string, p Pos) error {
-	if place == "" {
-		return nil
+// resolvePlace reads a place as a code, or as a name or former name of a
+// country or area (a note then says how it was read); "" stays "".
+func (a *analysis) resolvePlace(place string, p Pos) (string, error) {
+	if place == "" || a.ds.Regions == nil {
+		return place, nil
 	}
-	if a.ds.Regions == nil || a.ds.Regions.Valid(place) {
-		return nil
+	code, note, ok := a.ds.Regions.ResolvePlace(place)
+	if ok {
+		if note != "" {
+			a.notes = append(a.notes, note)
+		}
+		return code, nil
 	}
-	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP) or a UN M49 area code (\"155\" Western Europe)"
-	if s := a.ds.Regions.Suggest(place); len(s) > 0 {
-		hint = "did you mean " + input.OrList(s) + "?"
+	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP), a UN M49 area code (\"155\" Western Europe) or a country's English name"
+	if s := a.ds.Regions.SuggestPlace(place); len(s) > 0 {
+		named := make([]string, len(s))
+		for i, c := range s {
+			named[i] = c
+		}
+		hint = "did you mean " + input.OrList(named) + "? (" + placeList(a.ds.Regions, s) + ")"
 	}
-	return a.errAt(p, hint, "unknown place %q", place)
+	return "", a.errAt(p, hint, "unknown place %q", place)
+}
+
+// placeList names codes: "NL Netherlands, BE Belgium".
+func placeList(r *materials.Regions, codes []string) string {
+	parts := make([]string, len(codes))
+	for i, c := range codes {
+		parts[i] = c + " " + r.Name(c)
+	}
+	return strings.Join(parts, ", ")
 }
 
 // checkCycles rejects 'after' orders that go round in a loop with no gap
@@ -286,11 +304,12 @@ func (a *analysis) checkCycles() error {
 	return nil
 }
 
-func (a *analysis) placeOf(e Event) string {
-	if e.Place != "" {
-		return e.Place
+// placeOf is where event i was made: its own place, else the case's.
+func (a *analysis) placeOf(i int) string {
+	if a.eventPlaces[i] != "" {
+		return a.eventPlaces[i]
 	}
-	return a.c.Place
+	return a.place
 }
 
 // A link ties a network constraint to the evidence it came from. Its
@@ -433,7 +452,7 @@ func (a *analysis) itemText(it *boundItem) string {
 	}
 	t := it.name + ": " + what + " [" + it.ms.Source + ", " + string(it.ms.Basis) + "]"
 	if it.upper {
-		t += ", plus a stock allowance of " + durationText(it.allow)
+		t += ", plus a stock allowance of " + wording.Duration(it.allow)
 	}
 	return t
 }
@@ -448,37 +467,7 @@ func (a *analysis) confidenceCap(c Confidence) network.Tier {
 	return network.Hard
 }
 
-func dayText(d date.Day, upper bool) string { return FormatBound(d, upper) }
-
-// FormatBound shows a day as people write a bound: the year alone when the
-// bound is the first (lower) or last (upper) day of a year, the month when
-// it is the first or last of a month.
-func FormatBound(d date.Day, upper bool) string {
-	y, m, dd := d.Civil()
-	yearText := date.FormatYear(y)
-	if y < 1 {
-		yearText = fmt.Sprintf("%d BCE", 1-y)
-	} else if y < 1000 {
-		yearText = fmt.Sprintf("%d", y)
-	}
-	if !upper && m == 1 && dd == 1 || upper && m == 12 && dd == 31 {
-		return yearText
-	}
-	if !upper && dd == 1 || upper && dd == date.DaysInMonth(y, m) {
-		if y < 1000 {
-			return fmt.Sprintf("%s %s", monthName(m), yearText)
-		}
-		return fmt.Sprintf("%s-%02d", date.FormatYear(y), m)
-	}
-	if y < 1000 {
-		return fmt.Sprintf("%d %s %s", dd, monthName(m), yearText)
-	}
-	return d.ISO()
-}
-
-func monthName(m int) string {
-	return [...]string{"", "Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul", "Aug", "Sep", "Oct", "Nov", "Dec"}[m]
-}
+func dayText(d date.Day, upper bool) string { return wording.Bound(d, upper) }
 
 // materialBounds returns the bounds a material's milestones give an event
 // made at place, and notes about fallbacks, open ends and disagreements.
@@ -720,28 +709,6 @@ func displayName(m *materials.Material) string {
 	return m.ID
 }
 
-func durationText(d date.Duration) string {
-	var parts []string
-	add := func(n int64, unit string) {
-		if n == 0 {
-			return
-		}
-		if n == 1 {
-			parts = append(parts, "1 "+unit)
-		} else {
-			parts = append(parts, fmt.Sprintf("%d %ss", n, unit))
-		}
-	}
-	add(d.Years, "year")
-	add(d.Months, "month")
-	add(d.Weeks, "week")
-	add(d.Days, "day")
-	if len(parts) == 0 {
-		return "0 days"
-	}
-	return strings.Join(parts, " ")
-}
-
 // window is a material's availability at one tier: [lo, hi], either side
 // possibly open, with the items that set each side.
 type window struct {
@@ -807,14 +774,14 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 			gap := ""
 			if o.AtLeast != nil {
 				lo = o.AtLeast.MinDays()
-				gap += " at least " + durationText(*o.AtLeast)
+				gap += " at least " + wording.Duration(*o.AtLeast)
 			}
 			if o.AtMost != nil {
 				hi = o.AtMost.MaxDays()
 				if gap != "" {
 					gap += " and"
 				}
-				gap += " at most " + durationText(*o.AtMost)
+				gap += " at most " + wording.Duration(*o.AtMost)
 			}
 			text := e.ID + " comes after " + o.Event
 			if gap != "" {
@@ -847,10 +814,10 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		for _, g := range f.groups {
 			b.notes = append(b.notes, groupNote(f, g))
 		}
-		ev := a.events[a.eventIdx[f.Event]]
-		v := b.vars[a.eventIdx[f.Event]]
+		ei := a.eventIdx[f.Event]
+		v := b.vars[ei]
 		cap := a.confidenceCap(f.Confidence)
-		place := a.placeOf(ev)
+		place := a.placeOf(ei)
 		perMat := make([][]boundItem, len(f.mats))
 		var names []string
 		for i, m := range f.mats {
@@ -1071,13 +1038,13 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 	if err != nil {
 		return nil, err
 	}
-	res := &Result{ID: a.c.ID, Title: a.c.Title, File: a.c.File, Place: a.c.Place, Evidence: b.evidence, Disagreements: b.disagreements}
+	res := &Result{ID: a.c.ID, Title: a.c.Title, File: a.c.File, Place: a.place, Evidence: b.evidence, Disagreements: b.disagreements}
 	res.Dataset = DatasetInfo{Version: a.ds.Version, SHA256: a.ds.SHA256}
 	res.Notes = append(res.Notes, a.arrivalNotes(b)...)
 	res.Notes = append(res.Notes, dedupe(b.notes)...)
 	res.Events = make([]EventResult, len(a.events))
 	for i, e := range a.events {
-		res.Events[i] = EventResult{ID: e.ID, Label: e.Label, Place: a.placeOf(e)}
+		res.Events[i] = EventResult{ID: e.ID, Label: e.Label, Place: a.placeOf(i)}
 	}
 	reported := map[string]bool{}
 	sols, err := b.net.SolveTiers(ctx, network.Options{MaxConflicts: opt.MaxConflicts})
@@ -1391,10 +1358,10 @@ func recordText(r Record, alts []network.Alt) string {
 	lo, hi := alts[0].Lo, alts[len(alts)-1].Hi
 	first, last := "open", "open"
 	if lo > -network.Inf {
-		first = FormatBound(date.Day(lo), false)
+		first = wording.Bound(date.Day(lo), false)
 	}
 	if hi < network.Inf {
-		last = FormatBound(date.Day(hi), true)
+		last = wording.Bound(date.Day(hi), true)
 	}
 	q := ""
 	if r.Date.Uncertain {

@@ -3,6 +3,7 @@ package constraint_test
 import (
 	"context"
 	"errors"
+	"slices"
 	"strings"
 	"terminus/constraint"
 	"terminus/constraint/casefile"
@@ -456,5 +457,38 @@ func TestUnboundedEventNote(t *testing.T) {
 	r = analyze(t, "records:\n  - {id: r, not_after: \"1900\"}\nclaims:\n  - {date: \"1850\"}\n")
 	if hasNote(r) {
 		t.Errorf("an event bounded above got the note: %q", r.Notes)
+	}
+}
+
+// A place may be written as a country's or area's English name or a
+// former name; the report says how it was read. A name that matches
+// nothing is an error that suggests codes.
+func TestPlacesByName(t *testing.T) {
+	for _, tc := range []struct {
+		place, code, note string
+	}{
+		{"Holland", "NL", "Place 'Holland' is read as Netherlands (NL)."},
+		{"western europe", "155", "Place 'western europe' is read as Western Europe (155)."},
+		{"Japan", "JP", "Place 'Japan' is read as Japan (JP)."},
+		{"Persia", "IR", "Place 'Persia' is read as Iran (IR)."},
+		{"Ottoman Empire", "TR", "the Ottoman Empire is read as Türkiye, its heartland"},
+		{"NL", "NL", ""},
+	} {
+		r := analyze(t, "place: "+tc.place+"\nfindings:\n  - {id: f, material: fixture yellow}\n")
+		if r.Place != tc.code || r.Events[0].Place != tc.code {
+			t.Errorf("%s: read as %q, want %q", tc.place, r.Place, tc.code)
+		}
+		if tc.note != "" && !slices.ContainsFunc(r.Notes, func(n string) bool { return strings.Contains(n, tc.note) }) {
+			t.Errorf("%s: no note %q in %q", tc.place, tc.note, r.Notes)
+		}
+	}
+	c, err := casefile.Parse("case.yaml", []byte("place: Neatherlands\n"), input.YAML, input.Limits{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	_, err = constraint.Analyze(context.Background(), c, fixture(t), constraint.Options{})
+	var e *input.Error
+	if !errors.As(err, &e) || !strings.Contains(e.Msg, `unknown place "Neatherlands"`) || !strings.Contains(e.Hint(), "'NL'") || !strings.Contains(e.Hint(), "NL Netherlands") {
+		t.Errorf("a misspelt name: %v (hint %q)", err, e.Hint())
 	}
 }

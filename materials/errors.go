@@ -5,28 +5,13 @@ import (
 	"fmt"
 	"slices"
 	"strings"
+
+	"terminus/constraint/input"
 )
 
-// Error is a problem in a materials file, at a position.
-type Error struct {
-	File         string
-	Line, Column int    // 1-based; Column is 0 when only the line is known
-	Msg          string // what is wrong and what was expected
-	Suggestion   string // a fix, when one fits; see [Error.Hint]
-	Err          error  // the underlying error, if any (a date parse error)
-}
-
-func (e *Error) Error() string {
-	if e.Column > 0 {
-		return fmt.Sprintf("%s:%d:%d: %s", e.File, e.Line, e.Column, e.Msg)
-	}
-	return fmt.Sprintf("%s:%d: %s", e.File, e.Line, e.Msg)
-}
-
-// Hint returns a suggested fix, or "".
-func (e *Error) Hint() string { return e.Suggestion }
-
-func (e *Error) Unwrap() error { return e.Err }
+// Error is a problem in a materials file, at a position: the one shape of
+// every input problem of terminus (see package input).
+type Error = input.Error
 
 // ErrorList is every problem found in a set of files, sorted by file,
 // line and column. Its Error method reports the first and counts the rest;

@@ -6,6 +6,8 @@ import (
 	"path/filepath"
 	"strings"
 	"testing"
+
+	"terminus/constraint/input"
 )
 
 // FuzzLoad feeds arbitrary text to the loader as YAML and as TOML. It must
@@ -30,7 +32,11 @@ func FuzzLoad(f *testing.F) {
 		if isTOML {
 			name = "fuzz.toml"
 		}
-		d, err := loadFiles([]rawFile{{name: name, data: []byte(text), toml: isTOML}}, nil)
+		format := input.YAML
+		if isTOML {
+			format = input.TOML
+		}
+		d, err := loadFiles([]rawFile{{name: name, data: []byte(text), format: format}}, nil)
 		if err == nil {
 			if d == nil {
 				t.Fatal("no dataset and no error")

@@ -7,12 +7,12 @@ import (
 	"errors"
 	"fmt"
 	"io/fs"
-	"os"
 	"path"
 	"slices"
 	"strings"
 	"sync"
 
+	"terminus/constraint/input"
 	"terminus/materials/spell"
 )
 
@@ -181,19 +181,23 @@ func (d *Dataset) finishWith(names map[string]*Material) {
 
 // rawFile is one file's text, ready to parse.
 type rawFile struct {
-	name string // as shown in messages
-	data []byte
-	toml bool
+	name   string // as shown in messages
+	data   []byte
+	format input.Format
 }
 
-func formatOf(name string) (isTOML, ok bool) {
+// formatOf gives the format of a materials file by its name; ok is false
+// for a name that is not one.
+func formatOf(name string) (f input.Format, ok bool) {
 	switch strings.ToLower(path.Ext(name)) {
-	case ".yaml", ".yml", ".json":
-		return false, true
+	case ".yaml", ".yml":
+		return input.YAML, true
+	case ".json":
+		return input.JSON, true
 	case ".toml":
-		return true, true
+		return input.TOML, true
 	}
-	return false, false
+	return 0, false
 }
 
 func loadFS(fsys fs.FS, prefix string, base *Dataset) (*Dataset, error) {
@@ -206,15 +210,15 @@ func loadFS(fsys fs.FS, prefix string, base *Dataset) (*Dataset, error) {
 		if e.IsDir() {
 			continue
 		}
-		isTOML, ok := formatOf(e.Name())
-		if !ok || strings.EqualFold(path.Ext(e.Name()), ".json") {
+		format, ok := formatOf(e.Name())
+		if !ok || format == input.JSON {
 			continue
 		}
 		b, err := fs.ReadFile(fsys, e.Name())
 		if err != nil {
 			return nil, fmt.Errorf("materials: reading %s: %w", prefix+e.Name(), err)
 		}
-		files = append(files, rawFile{name: prefix + e.Name(), data: b, toml: isTOML})
+		files = append(files, rawFile{name: prefix + e.Name(), data: b, format: format})
 	}
 	return loadFiles(files, base)
 }
@@ -222,16 +226,22 @@ func loadFS(fsys fs.FS, prefix string, base *Dataset) (*Dataset, error) {
 func loadPaths(names []string, base *Dataset) (*Dataset, error) {
 	var files []rawFile
 	for _, n := range names {
-		isTOML, ok := formatOf(n)
+		format, ok := formatOf(n)
 		if !ok {
 			return nil, &Error{File: n, Line: 1, Msg: "not a materials file: expected a name ending in .yaml, .yml, .json or .toml",
 				Suggestion: "materials files are YAML or TOML; rename the file to show which"}
 		}
-		b, err := os.ReadFile(n)
+		b, err := input.ReadFile(n, input.Limits{})
 		if err != nil {
-			return nil, fmt.Errorf("materials: %w", err)
+			// A file that cannot be read at all is no problem in a file:
+			// the caller reports it as bad use.
+			var ie *input.Error
+			if errors.As(err, &ie) && ie.Err != nil {
+				return nil, fmt.Errorf("%s: %w", n, ie.Err)
+			}
+			return nil, errors.New(err.Error())
 		}
-		files = append(files, rawFile{name: n, data: b, toml: isTOML})
+		files = append(files, rawFile{name: n, data: b, format: format})
 	}
 	return loadFiles(files, base)
 }

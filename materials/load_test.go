@@ -100,9 +100,9 @@ func TestLoadErrors(t *testing.T) {
 		msg  string // part of the message
 		hint string // part of the hint; "" for none expected
 	}{
-		{"unknown-key.yaml", "10:56", `unknown key "bassis" in a milestone`, "did you mean 'basis'"},
-		{"unknown-key.toml", "20:1", `unknown key "sorce" in a milestone`, "did you mean 'source'"},
-		{"unknown-top.yaml", "1:1", `unknown key "source" in a materials file`, "did you mean 'sources'"},
+		{"unknown-key.yaml", "10:56", `milestone: unknown key "bassis"`, "did you mean 'basis'"},
+		{"unknown-key.toml", "20:1", `milestone: unknown key "sorce"`, "did you mean 'source'"},
+		{"unknown-top.yaml", "1:1", `materials file: unknown key "source"`, "did you mean 'sources'"},
 		{"bad-date.yaml", "10:", `bad date "17x6"`, "EDTF"},
 		{"unknown-source.yaml", "10:44", `cites source "handbok-a", which is not in the bibliography`, "did you mean 'handbook-a'"},
 		{"unknown-place.yaml", "11:32", `unknown place "Japan"`, "did you mean 'JP'"},
@@ -119,8 +119,8 @@ func TestLoadErrors(t *testing.T) {
 		{"bad-cas.yaml", "7:10", "check digit is 9, but the digits before it give 8", "mistyped"},
 		{"bad-id.yaml", "5:9", `id "Prussian Blue" is not lower case`, "'prussian-blue'"},
 		{"ci-number.yaml", "7:51", `Colour Index number "7751"`, `"77510"`},
-		{"syntax.yaml", "10", "YAML syntax", "indentation"},
-		{"syntax.toml", "2:18", "TOML syntax", "quoting"},
+		{"syntax.yaml", "10", "not valid YAML", "indentation"},
+		{"syntax.toml", "2:18", "not valid TOML", "quoting"},
 		{"two-docs.yaml", "11:1", "one YAML document", "'---'"},
 		{"object-on-made.yaml", "10:76", "object on a made milestone", "only an attested milestone"},
 		{"attested-no-object.yaml", "11:9", "names no object", "add object:"},
@@ -412,9 +412,9 @@ basis = "read"
 		got = append(got, e.Error())
 	}
 	want := []string{
-		`m.toml:18:1: unknown place "Europe"`,
-		`m.toml:25:1: bad date "not a date"`,
-		`m.toml:27:1: unknown basis "read"`,
+		`m.toml:18:9: unknown place "Europe"`,
+		`m.toml:25:8: bad date "not a date"`,
+		`m.toml:27:9: unknown basis "read"`,
 	}
 	if len(got) != len(want) {
 		t.Fatalf("got %d problems, want %d:\n%s", len(got), len(want), strings.Join(got, "\n"))

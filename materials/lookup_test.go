@@ -220,16 +220,6 @@ func TestHandMadeDataset(t *testing.T) {
 	}
 }
 
-func TestSchemaKeysFit(t *testing.T) {
-	k := newSchemaKeys()
-	var fs fieldSet
-	for _, keys := range [][]string{k.top, k.source, k.material, k.colourIndex, k.milestone} {
-		if len(keys) > len(fs.f) {
-			t.Errorf("%d keys %q do not fit a field set of %d", len(keys), keys, len(fs.f))
-		}
-	}
-}
-
 // nearestPlain is the suggestion rule spelt out with the exact edit
 // distance (held to the textbook table in package spell) and no
 // shortcuts: the reference for index.nearest.

@@ -1,19 +1,16 @@
 package materials
 
 import (
-	"bytes"
 	"crypto/sha256"
 	"errors"
 	"fmt"
-	"io"
 	"regexp"
 	"slices"
 	"strconv"
 	"strings"
 
-	"gopkg.in/yaml.v3"
-
 	"terminus/constraint/date"
+	"terminus/constraint/input"
 )
 
 // fileResult is what one file gave.
@@ -47,199 +44,70 @@ func newSchemaKeys() schemaKeys {
 	}
 }
 
+// parseFile reads one file strictly: the tree (through package input, with
+// its limits and its rules for every format), then the schema. An empty
+// file holds nothing.
 func parseFile(f rawFile, regions *Regions) *fileResult {
 	p := &parser{file: f.name, regions: regions, keys: newSchemaKeys()}
-	var root *node
-	if f.toml {
-		root = p.tomlTree(f.data)
-	} else {
-		root = p.yamlTree(f.data)
-	}
 	res := &fileResult{sum: sha256.Sum256(f.data)}
-	if root != nil {
+	root, err := input.Parse(f.name, f.data, f.format, input.Limits{})
+	var ie *input.Error
+	switch {
+	case err == nil:
 		res.sources, res.materials = p.top(root)
+	case errors.As(err, &ie) && ie.Msg == "the file is empty":
+	case errors.As(err, &ie):
+		p.errs = append(p.errs, ie)
+	default:
+		p.errs = append(p.errs, &Error{File: f.name, Line: 1, Msg: err.Error(), Err: err})
 	}
 	res.errs = p.errs
 	return res
 }
 
-var yamlLine = regexp.MustCompile(`line (\d+)`)
-
-// yamlTree reads the one document of a YAML file.
-func (p *parser) yamlTree(data []byte) *node {
-	if root, ok := fastYAML(data); ok {
-		return root
-	}
-	dec := yaml.NewDecoder(bytes.NewReader(data))
-	var doc yaml.Node
-	if err := dec.Decode(&doc); err != nil {
-		if errors.Is(err, io.EOF) {
-			return nil // an empty file holds nothing
-		}
-		p.syntax(err)
-		return nil
-	}
-	var extra yaml.Node
-	if err := dec.Decode(&extra); err == nil {
-		p.errAt(&node{line: int32(extra.Line), col: int32(extra.Column)}, "a materials file holds one YAML document; found a second", "remove the '---' line or split the file")
-	} else if !errors.Is(err, io.EOF) {
-		p.syntax(err)
-	}
-	root := &doc
-	if doc.Kind == yaml.DocumentNode && len(doc.Content) == 1 {
-		root = doc.Content[0]
-	}
-	return fromYAML(root, map[*yaml.Node]*node{})
-}
-
-// syntax reports a YAML syntax error at the line the decoder names.
-func (p *parser) syntax(err error) {
-	line := 1
-	if m := yamlLine.FindStringSubmatch(err.Error()); m != nil {
-		line, _ = strconv.Atoi(m[1])
-	}
-	msg := strings.TrimPrefix(err.Error(), "yaml: ")
-	if m := yamlLine.FindStringIndex(msg); m != nil && m[0] == 0 {
-		msg = strings.TrimLeft(msg[m[1]:], ": ")
-	}
-	p.errs = append(p.errs, &Error{File: p.file, Line: line, Msg: "YAML syntax: " + msg, Err: err,
-		Suggestion: "check the indentation and quoting on this line and the one before; quote dates and places"})
-}
-
-func (p *parser) errAt(n *node, msg, hint string) {
+func (p *parser) errAt(n *input.Node, msg, hint string) {
 	line, col := 1, 0
-	if n != nil && n.line > 0 {
-		line, col = int(n.line), int(n.col)
+	if n != nil && n.Line > 0 {
+		line, col = int(n.Line), int(n.Column)
 	}
 	p.errs = append(p.errs, &Error{File: p.file, Line: line, Column: col, Msg: msg, Suggestion: hint})
 }
 
-// field is one key of a mapping.
-type field struct {
-	key, val *node
-	// typo marks an unknown key that stands in for this one (already
-	// reported with a "did you mean"), so that its absence is not reported
-	// a second time.
-	typo bool
-}
-
-// fieldSet is the keys of one mapping, by their place in the list of keys
-// allowed there.
-type fieldSet struct {
-	keys []string
-	f    [12]field
-	set  [12]bool
-}
-
-// lookup returns the field key; a nil set (not a mapping) has none.
-func (fs *fieldSet) lookup(key string) (field, bool) {
-	if fs == nil {
-		return field{}, false
-	}
-	if i := slices.Index(fs.keys, key); i >= 0 && fs.set[i] {
-		return fs.f[i], true
-	}
-	return field{}, false
-}
-
-// at returns the field key, or the zero field when it is not there.
-func (fs *fieldSet) at(key string) field {
-	f, _ := fs.lookup(key)
-	return f
-}
-
-// given returns the field key when it was written (not a typo of it).
-func (fs *fieldSet) given(key string) (field, bool) {
-	f, ok := fs.lookup(key)
-	return f, ok && !f.typo
-}
-
-// fields returns the keys of mapping n, reporting keys not in allowed
-// (with the nearest allowed key) and keys given twice. what names n in
-// messages ("material", "milestone"). It returns nil when n is not a
-// mapping.
-func (p *parser) fields(n *node, what string, allowed []string) *fieldSet {
-	n = deref(n)
-	if n.kind != mapNode {
-		p.errAt(n, fmt.Sprintf("expected a %s as a mapping of %s; found %s", what, strings.Join(allowed, ", "), describe(n)), "")
-		return nil
-	}
-	out := &fieldSet{keys: allowed}
-	for i := 0; i+1 < len(n.content); i += 2 {
-		k, v := deref(n.content[i]), deref(n.content[i+1])
-		if k.kind != scalarNode {
-			p.errAt(k, fmt.Sprintf("expected a key of the %s; found %s", what, describe(k)), "")
-			continue
-		}
-		j := slices.Index(allowed, k.value)
-		if j < 0 {
-			hint := "the keys of a " + what + " are " + strings.Join(allowed, ", ")
-			if s := nearestWords(k.value, allowed, 1); len(s) == 1 {
-				hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
-				if t := slices.Index(allowed, s[0]); !out.set[t] {
-					out.f[t], out.set[t] = field{key: k, typo: true}, true
-				}
-			}
-			p.errAt(k, fmt.Sprintf("unknown key %q in a %s", k.value, what), hint)
-			continue
-		}
-		if prev := out.f[j]; out.set[j] && !prev.typo {
-			p.errAt(k, fmt.Sprintf("key %q is given twice in this %s (first on line %d)", k.value, what, int(prev.key.line)), "keep one of them")
-			continue
-		}
-		out.f[j], out.set[j] = field{key: k, val: v}, true
-	}
-	return out
-}
-
-func deref(n *node) *node {
-	if n == nil {
-		return &node{}
-	}
-	return n
-}
-
-func describe(n *node) string {
-	switch n.kind {
-	case mapNode:
-		return "a mapping"
-	case seqNode:
-		return "a list"
-	case scalarNode:
-		if n.null {
-			return "nothing"
-		}
-		return fmt.Sprintf("%q", n.value)
-	}
-	return "something else"
+// fields reads the keys of mapping n, reporting every problem (see
+// [input.ReadFields]); nil when n is not a mapping.
+func (p *parser) fields(n *input.Node, what string, allowed []string) *input.Fields {
+	return input.ReadFields(p.file, n, what, allowed, func(e *input.Error) bool {
+		p.errs = append(p.errs, e)
+		return true
+	})
 }
 
 // str reads a scalar as text; a null is "".
-func (p *parser) str(f field, what string) string {
-	if f.val == nil || f.typo {
+func (p *parser) str(f input.Field, what string) string {
+	if f.Value == nil || f.Typo {
 		return ""
 	}
-	if f.val.kind != scalarNode {
-		p.errAt(f.val, fmt.Sprintf("expected %s as text; found %s", what, describe(f.val)), "")
+	if f.Value.Kind != input.Scalar {
+		p.errAt(f.Value, fmt.Sprintf("expected %s as text; found %s", what, f.Value.Describe()), "")
 		return ""
 	}
-	if f.val.null {
+	if f.Value.IsNull() {
 		return ""
 	}
-	return f.val.value
+	return f.Value.Value
 }
 
 // required reads a key that must be there and not empty; what names the
 // mapping in messages, made only when one is needed.
-func (p *parser) required(fs *fieldSet, key string, what func() string, at *node) string {
-	f, ok := fs.lookup(key)
+func (p *parser) required(fs *input.Fields, key string, what func() string, at *input.Node) string {
+	f, ok := fs.Lookup(key)
 	if !ok {
 		p.errAt(at, fmt.Sprintf("%s has no %q", what(), key), "")
 		return ""
 	}
 	s := strings.TrimSpace(p.str(f, key))
-	if s == "" && !f.typo {
-		p.errAt(f.val, fmt.Sprintf("%q of %s is empty", key, what()), "")
+	if s == "" && !f.Typo {
+		p.errAt(f.Value, fmt.Sprintf("%q of %s is empty", key, what()), "")
 	}
 	return s
 }
@@ -247,23 +115,23 @@ func (p *parser) required(fs *fieldSet, key string, what func() string, at *node
 // words is a fixed name for a mapping in messages.
 func words(s string) func() string { return func() string { return s } }
 
-func (p *parser) top(root *node) ([]Source, []*Material) {
+func (p *parser) top(root *input.Node) ([]Source, []*Material) {
 	root = deref(root)
-	if root.kind == scalarNode && root.null {
+	if root.Kind == input.Scalar && root.IsNull() {
 		return nil, nil
 	}
 	fs := p.fields(root, "materials file", p.keys.top)
 	var sources []Source
 	var mats []*Material
-	if f, ok := fs.given("sources"); ok {
-		for _, n := range p.list(f.val, "sources") {
+	if f, ok := fs.Given("sources"); ok {
+		for _, n := range p.list(f.Value, "sources") {
 			if s, ok := p.source(n); ok {
 				sources = append(sources, s)
 			}
 		}
 	}
-	if f, ok := fs.given("materials"); ok {
-		for _, n := range p.list(f.val, "materials") {
+	if f, ok := fs.Given("materials"); ok {
+		for _, n := range p.list(f.Value, "materials") {
 			if m := p.material(n); m != nil {
 				mats = append(mats, m)
 			}
@@ -272,71 +140,71 @@ func (p *parser) top(root *node) ([]Source, []*Material) {
 	return sources, mats
 }
 
-func (p *parser) list(n *node, what string) []*node {
+func (p *parser) list(n *input.Node, what string) []*input.Node {
 	n = deref(n)
-	if n.kind == scalarNode && n.null {
+	if n.Kind == input.Scalar && n.IsNull() {
 		return nil
 	}
-	if n.kind != seqNode {
-		p.errAt(n, fmt.Sprintf("expected %s as a list; found %s", what, describe(n)), "start each entry with '- '")
+	if n.Kind != input.Sequence {
+		p.errAt(n, fmt.Sprintf("expected %s as a list; found %s", what, n.Describe()), "start each entry with '- '")
 		return nil
 	}
-	return n.content
+	return n.Content
 }
 
-func (p *parser) source(n *node) (Source, bool) {
+func (p *parser) source(n *input.Node) (Source, bool) {
 	n = deref(n)
 	fs := p.fields(n, "source", p.keys.source)
 	if fs == nil {
 		return Source{}, false
 	}
-	s := Source{File: p.file, Line: int(n.line), col: int(n.col)}
+	s := Source{File: p.file, Line: int(n.Line), col: int(n.Column)}
 	s.Key = p.required(fs, "key", words("a source"), n)
 	s.Cite = p.required(fs, "cite", func() string { return fmt.Sprintf("source %q", s.Key) }, n)
-	if f, ok := fs.given("url"); ok {
+	if f, ok := fs.Given("url"); ok {
 		s.URL = strings.TrimSpace(p.str(f, "url"))
 		if s.URL != "" && !strings.HasPrefix(s.URL, "https://") && !strings.HasPrefix(s.URL, "http://") {
-			p.errAt(f.val, fmt.Sprintf("url %q of source %q is not a web address", s.URL, s.Key), "write it in full, starting with https://")
+			p.errAt(f.Value, fmt.Sprintf("url %q of source %q is not a web address", s.URL, s.Key), "write it in full, starting with https://")
 		}
 	}
-	if f, ok := fs.given("type"); ok {
+	if f, ok := fs.Given("type"); ok {
 		s.Type = strings.TrimSpace(p.str(f, "a source type"))
 		if s.Type != "" && !slices.Contains(SourceTypes(), s.Type) {
 			hint := "type is one of " + strings.Join(SourceTypes(), ", ")
 			if n := nearestWords(strings.ToLower(s.Type), SourceTypes(), 1); len(n) == 1 {
 				hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
 			}
-			p.errAt(f.val, fmt.Sprintf("unknown type %q of source %q", s.Type, s.Key), hint)
+			p.errAt(f.Value, fmt.Sprintf("unknown type %q of source %q", s.Type, s.Key), hint)
 		}
 	}
 	if s.Key != "" && !validID(s.Key) {
-		p.errAt(fs.at("key").val, fmt.Sprintf("source key %q is not lower case letters, digits and hyphens", s.Key),
+		p.errAt(fs.At("key").Value, fmt.Sprintf("source key %q is not lower case letters, digits and hyphens", s.Key),
 			"write it like 'artists-pigments-1'")
 	}
 	return s, s.Key != ""
 }
 
-func (p *parser) material(n *node) *Material {
+func (p *parser) material(n *input.Node) *Material {
 	n = deref(n)
 	fs := p.fields(n, "material", p.keys.material)
 	if fs == nil {
 		return nil
 	}
-	m := &Material{File: p.file, Line: int(n.line), col: int(n.col)}
+	m := &Material{File: p.file, Line: int(n.Line), col: int(n.Column)}
 	m.ID = p.required(fs, "id", words("a material"), n)
 	if m.ID != "" && !validID(m.ID) {
-		p.errAt(fs.at("id").val, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
+		p.errAt(fs.At("id").Value, fmt.Sprintf("id %q is not lower case letters, digits and hyphens", m.ID),
 			"write it like "+quote(suggestID(m.ID)))
 	}
 	what := "material " + strconv.Quote(m.ID)
-	if f, ok := fs.given("names"); ok {
-		list := p.list(f.val, "names")
+	if f, ok := fs.Given("names"); ok {
+		list := p.list(f.Value, "names")
 		m.Names = make([]string, 0, len(list))
 		m.keys = make([]string, 1, len(list)+1)
 		m.keys[0] = fold(m.ID)
 		for _, nn := range list {
 			nn = deref(nn)
-			s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
+			s := strings.TrimSpace(p.str(input.Field{Value: nn}, "a name"))
 			k := fold(s)
 			switch {
 			case s == "":
@@ -351,34 +219,34 @@ func (p *parser) material(n *node) *Material {
 	}
 	m.Class = p.oneOf(fs, "class", what, n, Classes())
 	m.Origin = p.oneOf(fs, "origin", what, n, Origins())
-	if f, ok := fs.given("colour_index"); ok {
+	if f, ok := fs.Given("colour_index"); ok {
 		m.ColourIndex = p.colourIndex(f, what)
 	}
-	if f, ok := fs.given("cas"); ok {
+	if f, ok := fs.Given("cas"); ok {
 		m.CAS = strings.TrimSpace(p.str(f, "cas"))
 		if m.CAS != "" {
 			if msg, hint := checkCAS(m.CAS); msg != "" {
-				p.errAt(f.val, fmt.Sprintf("cas %q of %s: %s", m.CAS, what, msg), hint)
+				p.errAt(f.Value, fmt.Sprintf("cas %q of %s: %s", m.CAS, what, msg), hint)
 			}
 		}
 	}
-	if f, ok := fs.given("formula"); ok {
+	if f, ok := fs.Given("formula"); ok {
 		m.Formula = strings.TrimSpace(p.str(f, "formula"))
 	}
-	if f, ok := fs.given("note"); ok {
+	if f, ok := fs.Given("note"); ok {
 		m.Note = strings.TrimSpace(p.str(f, "note"))
 	}
-	if f, ok := fs.given("markers"); ok {
+	if f, ok := fs.Given("markers"); ok {
 		m.Markers = p.groupNames(f, "markers", what)
 	}
-	if f, ok := fs.given("families"); ok {
+	if f, ok := fs.Given("families"); ok {
 		m.Families = p.groupNames(f, "families", what)
 	}
 	if len(m.keys) == 0 {
 		m.keys = []string{fold(m.ID)}
 	}
-	if f, ok := fs.given("milestones"); ok {
-		list := p.list(f.val, "milestones")
+	if f, ok := fs.Given("milestones"); ok {
+		list := p.list(f.Value, "milestones")
 		m.Milestones = make([]Milestone, 0, len(list))
 		for _, mn := range list {
 			if ms, ok := p.milestone(mn, what); ok {
@@ -390,12 +258,12 @@ func (p *parser) material(n *node) *Material {
 }
 
 // groupNames reads a list of marker or family names.
-func (p *parser) groupNames(f field, key, what string) []string {
-	list := p.list(f.val, key)
+func (p *parser) groupNames(f input.Field, key, what string) []string {
+	list := p.list(f.Value, key)
 	out := make([]string, 0, len(list))
 	for _, nn := range list {
 		nn = deref(nn)
-		s := strings.TrimSpace(p.str(field{val: nn}, "a name"))
+		s := strings.TrimSpace(p.str(input.Field{Value: nn}, "a name"))
 		switch {
 		case s == "":
 			p.errAt(nn, "empty name in the "+key+" of "+what, "")
@@ -408,7 +276,7 @@ func (p *parser) groupNames(f field, key, what string) []string {
 	return out
 }
 
-func (p *parser) oneOf(fs *fieldSet, key, what string, at *node, allowed []string) string {
+func (p *parser) oneOf(fs *input.Fields, key, what string, at *input.Node, allowed []string) string {
 	s := p.required(fs, key, words(what), at)
 	if s == "" || slices.Contains(allowed, s) {
 		return s
@@ -417,42 +285,42 @@ func (p *parser) oneOf(fs *fieldSet, key, what string, at *node, allowed []strin
 	if n := nearestWords(strings.ToLower(s), allowed, 1); len(n) == 1 {
 		hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
 	}
-	p.errAt(fs.at(key).val, fmt.Sprintf("unknown %s %q for %s", key, s, what), hint)
+	p.errAt(fs.At(key).Value, fmt.Sprintf("unknown %s %q for %s", key, s, what), hint)
 	return s
 }
 
 var ciNumber = regexp.MustCompile(`^[0-9]{5}(:[0-9]{1,2})?$`)
 
-func (p *parser) colourIndex(f field, what string) *ColourIndex {
-	fs := p.fields(f.val, "colour_index", p.keys.colourIndex)
+func (p *parser) colourIndex(f input.Field, what string) *ColourIndex {
+	fs := p.fields(f.Value, "colour_index", p.keys.colourIndex)
 	if fs == nil {
 		return nil
 	}
 	ci := &ColourIndex{}
-	if g, ok := fs.given("name"); ok {
+	if g, ok := fs.Given("name"); ok {
 		ci.Name = strings.TrimSpace(p.str(g, "the Colour Index name"))
 	}
-	if g, ok := fs.given("number"); ok {
+	if g, ok := fs.Given("number"); ok {
 		ci.Number = strings.TrimSpace(p.str(g, "the Colour Index number"))
 		if ci.Number != "" && !ciNumber.MatchString(ci.Number) {
-			p.errAt(g.val, fmt.Sprintf("Colour Index number %q of %s is not five digits with an optional ':n' suffix", ci.Number, what),
+			p.errAt(g.Value, fmt.Sprintf("Colour Index number %q of %s is not five digits with an optional ':n' suffix", ci.Number, what),
 				`write it like "77510" or "58000:1", quoted`)
 		}
 	}
 	if ci.Name == "" && ci.Number == "" {
-		p.errAt(f.val, "colour_index of "+what+" has neither name nor number", "give {name: Pigment Blue 27, number: \"77510\"} or leave colour_index out")
+		p.errAt(f.Value, "colour_index of "+what+" has neither name nor number", "give {name: Pigment Blue 27, number: \"77510\"} or leave colour_index out")
 		return nil
 	}
 	return ci
 }
 
-func (p *parser) milestone(n *node, what string) (Milestone, bool) {
+func (p *parser) milestone(n *input.Node, what string) (Milestone, bool) {
 	n = deref(n)
 	fs := p.fields(n, "milestone", p.keys.milestone)
 	if fs == nil {
 		return Milestone{}, false
 	}
-	ms := Milestone{File: p.file, Line: int(n.line), Column: int(n.col)}
+	ms := Milestone{File: p.file, Line: int(n.Line), Column: int(n.Column)}
 	where := func() string { return "a milestone of " + what }
 	ok := true
 	kind := p.required(fs, "kind", where, n)
@@ -466,30 +334,30 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 		if s := nearestWords(strings.ToLower(kind), []string{"made", "sold", "arrived", "withdrawn", "attested"}, 1); len(s) == 1 {
 			hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
 		}
-		p.errAt(fs.at("kind").val, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
+		p.errAt(fs.At("kind").Value, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
 		ok = false
 	}
-	if f, has := fs.lookup("date"); has && f.typo {
+	if f, has := fs.Lookup("date"); has && f.Typo {
 		ok = false
 	} else if has {
 		text := strings.TrimSpace(p.str(f, "a date"))
 		if text == "" {
-			p.errAt(f.val, "empty date in "+where(), `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
+			p.errAt(f.Value, "empty date in "+where(), `write an EDTF date such as "1856", "1830~" or "1704/1706"`)
 			ok = false
 		} else if d, err := date.Parse(text); err != nil {
-			col := int(f.val.col)
+			col := int(f.Value.Column)
 			msg := err.Error()
 			var pe *date.ParseError
 			if errors.As(err, &pe) {
 				msg = pe.Msg
-				if f.val.value == text {
-					if f.val.quoted {
+				if f.Value.Value == text {
+					if f.Value.Quoted {
 						col++
 					}
 					col += pe.Pos
 				}
 			}
-			p.errs = append(p.errs, &Error{File: p.file, Line: int(f.val.line), Column: col,
+			p.errs = append(p.errs, &Error{File: p.file, Line: int(f.Value.Line), Column: col,
 				Msg: fmt.Sprintf("bad date %q in %s: %s", text, where(), msg), Err: err,
 				Suggestion: `write an EDTF date such as "1856", "1830~", "18XX" or "1704/1706", quoted`})
 			ok = false
@@ -500,7 +368,7 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 		p.errAt(n, where()+" has no \"date\"", "")
 		ok = false
 	}
-	if f, has := fs.given("place"); has {
+	if f, has := fs.Given("place"); has {
 		ms.Place = strings.TrimSpace(p.str(f, "a place"))
 		if ms.Place != "" && !p.regions.Valid(ms.Place) {
 			hint := "a place is an ISO 3166-1 alpha-2 code (\"NL\") or a UN M49 area code (\"155\", quoted)"
@@ -508,22 +376,22 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 				hint = "did you mean " + orList(s) + "? (" + hint + ")"
 			}
 			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where())
-			if f.val.integer {
+			if f.Value.Type == input.Int {
 				msg += " (an unquoted number loses its leading zeros)"
 			}
-			p.errAt(f.val, msg, hint)
+			p.errAt(f.Value, msg, hint)
 			ok = false
 		}
 	}
-	if ms.Kind == KindArrived && ms.Place == "" && !fs.at("place").typo {
+	if ms.Kind == KindArrived && ms.Place == "" && !fs.At("place").Typo {
 		p.errAt(n, "an arrived milestone of "+what+" has no place", "add place: with the country or area code where it arrived")
 		ok = false
 	}
-	if f, has := fs.given("source"); has {
+	if f, has := fs.Given("source"); has {
 		ms.Source = strings.TrimSpace(p.str(f, "a source key"))
-		ms.sourceLine, ms.sourceCol = int(f.val.line), int(f.val.col)
+		ms.sourceLine, ms.sourceCol = int(f.Value.Line), int(f.Value.Column)
 	}
-	if ms.Source == "" && !fs.at("source").typo {
+	if ms.Source == "" && !fs.At("source").Typo {
 		p.errAt(n, where()+" cites no source", "every milestone names a source key from the bibliography; write 'from-memory' as its basis if you could not check it")
 		ok = false
 	}
@@ -534,30 +402,30 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 	case "":
 		ok = false
 	default:
-		p.errAt(fs.at("basis").val, fmt.Sprintf("unknown basis %q in %s", basis, where()),
+		p.errAt(fs.At("basis").Value, fmt.Sprintf("unknown basis %q in %s", basis, where()),
 			"basis is 'documented' (you read the claim in the source) or 'from-memory'")
 		ok = false
 	}
-	if f, has := fs.given("note"); has {
+	if f, has := fs.Given("note"); has {
 		ms.Note = strings.TrimSpace(p.str(f, "a note"))
 	}
-	if f, has := fs.given("object"); has {
+	if f, has := fs.Given("object"); has {
 		ms.Object = strings.TrimSpace(p.str(f, "an object"))
 		if ms.Kind != "" && ms.Kind != KindAttested {
-			p.errAt(f.key, fmt.Sprintf("object on a %s milestone of %s", ms.Kind, what),
+			p.errAt(f.Key, fmt.Sprintf("object on a %s milestone of %s", ms.Kind, what),
 				"only an attested milestone names an object; put what you want to say in its note")
 			ok = false
 		}
 	}
-	if ms.Kind == KindAttested && ms.Object == "" && !fs.at("object").typo {
+	if ms.Kind == KindAttested && ms.Object == "" && !fs.At("object").Typo {
 		p.errAt(n, "an attested milestone of "+what+" names no object", "add object: with the dated object or context in which the material was identified")
 		ok = false
 	}
-	if f, has := fs.given("allowance"); has {
+	if f, has := fs.Given("allowance"); has {
 		text := strings.TrimSpace(p.str(f, "an allowance"))
 		switch {
 		case ms.Kind != "" && ms.Kind != KindWithdrawn:
-			p.errAt(f.key, fmt.Sprintf("allowance on a %s milestone of %s", ms.Kind, what),
+			p.errAt(f.Key, fmt.Sprintf("allowance on a %s milestone of %s", ms.Kind, what),
 				"only a withdrawn milestone has an allowance (how long stocks lingered); remove it here")
 			ok = false
 		case text == "":
@@ -569,7 +437,7 @@ func (p *parser) milestone(n *node, what string) (Milestone, bool) {
 				if errors.As(err, &pe) {
 					msg = pe.Msg
 				}
-				p.errs = append(p.errs, &Error{File: p.file, Line: int(f.val.line), Column: int(f.val.col),
+				p.errs = append(p.errs, &Error{File: p.file, Line: int(f.Value.Line), Column: int(f.Value.Column),
 					Msg: fmt.Sprintf("bad allowance %q in %s: %s", text, where(), msg), Err: err,
 					Suggestion: "write an ISO 8601 duration such as P10Y or P6M"})
 				ok = false
@@ -636,4 +504,13 @@ func checkCAS(s string) (msg, hint string) {
 			"check the number against the source; one digit is probably mistyped"
 	}
 	return "", ""
+}
+
+// deref stands in an empty node for a missing one, so that a message can
+// still be placed.
+func deref(n *input.Node) *input.Node {
+	if n == nil {
+		return &input.Node{}
+	}
+	return n
 }

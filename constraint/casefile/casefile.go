@@ -15,6 +15,7 @@ package casefile
 
 import (
 	"io"
+	"strconv"
 
 	"terminus/constraint"
 	"terminus/constraint/input"
@@ -60,8 +61,90 @@ func Parse(name string, data []byte, format input.Format, l input.Limits) (*cons
 }
 
 // decoder walks a tree and keeps the file name for errors; it stops at the
-// first problem.
-type decoder struct{ file string }
+// first problem. It notes the entries that were given no id, to name them
+// once the whole case is read.
+type decoder struct {
+	file       string
+	unnamed    []unnamed
+	eventIndex int // the event being read
+}
+
+// An unnamed entry: its kind and where it is (the event and the index of
+// an order; the index of a finding, record or claim).
+type unnamed struct {
+	kind         idKind
+	event, index int
+}
+
+type idKind uint8
+
+const (
+	orderID idKind = iota
+	findingID
+	recordID
+	claimID
+)
+
+// name gives each entry without an id its default (order:EVENT>OTHER,
+// finding-N, record-N, claim-N), numbered on when that is taken by an id
+// the case wrote or by an earlier default (order:painting>felling-2), so
+// that every id is unique and an error about a duplicate id is always
+// about ids the user wrote. Claims have ids of their own kind.
+func (d *decoder) name(c *constraint.Case) {
+	taken := map[string]bool{}
+	claims := map[string]bool{}
+	isUnnamed := func(k idKind, event, index int) bool {
+		for _, u := range d.unnamed {
+			if u.kind == k && u.event == event && u.index == index {
+				return true
+			}
+		}
+		return false
+	}
+	for ei, e := range c.Events {
+		for oi, o := range e.After {
+			if !isUnnamed(orderID, ei, oi) {
+				taken[o.ID] = true
+			}
+		}
+	}
+	for i, f := range c.Findings {
+		if !isUnnamed(findingID, 0, i) {
+			taken[f.ID] = true
+		}
+	}
+	for i, r := range c.Records {
+		if !isUnnamed(recordID, 0, i) {
+			taken[r.ID] = true
+		}
+	}
+	for i, cl := range c.Claims {
+		if !isUnnamed(claimID, 0, i) {
+			claims[cl.ID] = true
+		}
+	}
+	free := func(base string, in map[string]bool) string {
+		id := base
+		for n := 2; in[id]; n++ {
+			id = base + "-" + strconv.Itoa(n)
+		}
+		in[id] = true
+		return id
+	}
+	for _, u := range d.unnamed {
+		switch u.kind {
+		case orderID:
+			o := &c.Events[u.event].After[u.index]
+			o.ID = free(o.ID, taken)
+		case findingID:
+			c.Findings[u.index].ID = free(c.Findings[u.index].ID, taken)
+		case recordID:
+			c.Records[u.index].ID = free(c.Records[u.index].ID, taken)
+		case claimID:
+			c.Claims[u.index].ID = free(c.Claims[u.index].ID, claims)
+		}
+	}
+}
 
 func (d *decoder) errAt(n *input.Node, suggestion, format string, args ...any) *input.Error {
 	return input.At(d.file, n.Pos(), suggestion, format, args...)

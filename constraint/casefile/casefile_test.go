@@ -164,3 +164,34 @@ func FuzzCase(f *testing.F) {
 		}
 	})
 }
+
+// Entries without an id get a readable default that no other entry has;
+// two orders between the same events get two ids.
+func TestDefaultIDsAreUnique(t *testing.T) {
+	text := `events:
+  - id: felling
+  - id: painting
+    after:
+      - {event: felling}
+      - {event: felling, at_least: P2Y}
+findings:
+  - {id: finding-2, material: smalt}
+  - {material: lead white}
+records:
+  - {not_after: "1700"}
+claims:
+  - {date: "1650"}
+  - {id: claim-1, date: "1660"}
+`
+	c, err := Parse("case.yaml", []byte(text), input.YAML, input.Limits{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	got := []string{c.Events[1].After[0].ID, c.Events[1].After[1].ID, c.Findings[0].ID, c.Findings[1].ID, c.Records[0].ID, c.Claims[0].ID, c.Claims[1].ID}
+	want := []string{"order:painting>felling", "order:painting>felling-2", "finding-2", "finding-2-2", "record-1", "claim-1-2", "claim-1"}
+	// Why: two orders between the same events; a default taken by an id the
+	// case wrote gets a number; claims the same, in their own namespace.
+	if strings.Join(got, " ") != strings.Join(want, " ") {
+		t.Errorf("ids %v, want %v", got, want)
+	}
+}

@@ -62,6 +62,7 @@ func (d *decoder) caseFile(root *input.Node) (*constraint.Case, error) {
 			return nil, err
 		}
 		for _, it := range items {
+			d.eventIndex = len(c.Events)
 			e, err := d.event(it)
 			if err != nil {
 				return nil, err
@@ -108,6 +109,7 @@ func (d *decoder) caseFile(root *input.Node) (*constraint.Case, error) {
 			c.Claims = append(c.Claims, cl)
 		}
 	}
+	d.name(c)
 	return c, nil
 }
 
@@ -203,6 +205,8 @@ func (d *decoder) id(n *input.Node, what string) (string, error) {
 
 // orders reads `after: making`, `after: [a, b]` or a list of mappings with gaps.
 func (d *decoder) orders(n *input.Node, self string) ([]constraint.Order, error) {
+	// An order without an id is named after its events; a name that is
+	// taken gets a number (see named).
 	items := []*input.Node{n}
 	if n.Kind == input.Sequence {
 		items = n.Content
@@ -261,6 +265,7 @@ func (d *decoder) orders(n *input.Node, self string) ([]constraint.Order, error)
 		}
 		if o.ID == "" {
 			o.ID = fmt.Sprintf("order:%s>%s", self, o.Event)
+			d.unnamed = append(d.unnamed, unnamed{kind: orderID, event: d.eventIndex, index: len(out)})
 		}
 		out = append(out, o)
 	}
@@ -289,6 +294,8 @@ func (d *decoder) finding(n *input.Node, i int) (constraint.Finding, error) {
 		if fi.ID, err = d.id(v.Value, "finding id"); err != nil {
 			return constraint.Finding{}, err
 		}
+	} else {
+		d.unnamed = append(d.unnamed, unnamed{kind: findingID, index: i})
 	}
 	v, ok := f.Given("material")
 	if !ok {
@@ -402,6 +409,8 @@ func (d *decoder) record(n *input.Node, i int) (constraint.Record, error) {
 		if r.ID, err = d.id(v.Value, "record id"); err != nil {
 			return constraint.Record{}, err
 		}
+	} else {
+		d.unnamed = append(d.unnamed, unnamed{kind: recordID, index: i})
 	}
 	julian, err := d.julian(f)
 	if err != nil {
@@ -467,6 +476,8 @@ func (d *decoder) claim(n *input.Node, i int) (constraint.Claim, error) {
 		if c.ID, err = d.id(v.Value, "claim id"); err != nil {
 			return constraint.Claim{}, err
 		}
+	} else {
+		d.unnamed = append(d.unnamed, unnamed{kind: claimID, index: i})
 	}
 	julian, err := d.julian(f)
 	if err != nil {

@@ -112,6 +112,11 @@ func Check(name string, data []byte, format Format, l Limits) ([]byte, error) {
 			i += size
 		}
 	}
+	if at, r, ok := controlChar(data); ok {
+		return nil, &Error{File: name, Line: at.Line, Column: at.Column,
+			Msg:        fmt.Sprintf("a control character (%U) is not allowed in the text", r),
+			Suggestion: "remove it; only tabs and line breaks may stand between the characters of a file"}
+	}
 	max := l.maxDepth()
 	var at Pos
 	var deep bool
@@ -129,6 +134,28 @@ func Check(name string, data []byte, format Format, l Limits) ([]byte, error) {
 			Suggestion: "a case or materials file needs only a few levels; check the brackets and indentation here"}
 	}
 	return data, nil
+}
+
+// controlChar finds the first control character other than a tab or a
+// line break (C0 controls and DEL; YAML, TOML and JSON refuse them all
+// outside strings, YAML and JSON inside too).
+func controlChar(data []byte) (Pos, rune, bool) {
+	line, col := 1, 0
+	for i := 0; i < len(data); i++ {
+		c := data[i]
+		if c >= 0x80 && !utf8.RuneStart(c) {
+			continue
+		}
+		col++
+		switch {
+		case c == '\n':
+			line, col = line+1, 0
+		case c == '\t' || c == '\r':
+		case c < 0x20 || c == 0x7f:
+			return Pos{line, col}, rune(c), true
+		}
+	}
+	return Pos{}, 0, false
 }
 
 // bracketsTooDeep finds where [ and { outside quoted strings first nest

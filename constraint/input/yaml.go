@@ -41,10 +41,11 @@ func parseYAML(name string, data []byte) (*Node, error) {
 
 var yamlLine = regexp.MustCompile(`^yaml: line (\d+): (.*)$`)
 
-// yamlError turns a decoder's message into an error at its line.
+// yamlError turns a decoder's message into an error at its line. The
+// decoder leaves the line out when the problem is on the first line.
 func yamlError(name string, err error) *Error {
 	msg := err.Error()
-	e := &Error{File: name, Msg: "not valid YAML: " + strings.TrimPrefix(msg, "yaml: "), Err: err,
+	e := &Error{File: name, Line: 1, Msg: "not valid YAML: " + strings.TrimPrefix(msg, "yaml: "), Err: err,
 		Suggestion: "check the indentation and quoting on this line and the one before; quote text with ':' or '#', dates and places"}
 	if m := yamlLine.FindStringSubmatch(msg); m != nil {
 		e.Line, _ = strconv.Atoi(m[1])

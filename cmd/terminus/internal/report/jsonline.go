@@ -9,7 +9,7 @@ import (
 	"terminus/constraint/network"
 )
 
-// This file writes the JSON document of json.go on one line by hand, for
+// This file writes the JSON document on one line by hand, for
 // surveys that write a million of them: the same fields in the same order
 // with the same escaping as encoding/json (SetEscapeHTML(false)), which a
 // test checks byte for byte, at a fraction of the cost of reflection.

@@ -7,6 +7,7 @@ import (
 
 	"terminus/constraint"
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 )
 
 // Markdown writes r as a section to paste into an examination or condition
@@ -48,20 +49,20 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 	for _, e := range r.Events {
 		for t, win := range e.Windows {
 			if win == nil {
-				fmt.Fprintf(ew, "| %s | %s | — | — | conflict | conflict |\n", mdEscape(e.ID), tierNames[t])
+				fmt.Fprintf(ew, "| %s | %s | — | — | conflict | conflict |\n", mdEscape(e.ID), wording.Tier(t))
 				continue
 			}
 			lo, hi := "open", "open"
 			if win.Earliest.Bounded {
-				lo = constraint.FormatBound(win.Earliest.Day, false)
+				lo = wording.Bound(win.Earliest.Day, false)
 			}
 			if win.Latest.Bounded {
-				hi = constraint.FormatBound(win.Latest.Day, true)
+				hi = wording.Bound(win.Latest.Day, true)
 			}
 			if len(win.Intervals) > 1 {
 				hi += " (gaps: " + spansText(win.Intervals) + ")"
 			}
-			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), tierNames[t], lo, mdEscape(hi),
+			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), wording.Tier(t), lo, mdEscape(hi),
 				mdEscape(strings.Join(win.Earliest.Because, " → ")), mdEscape(strings.Join(win.Latest.Because, " → ")))
 		}
 	}
@@ -107,18 +108,18 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		}
 		for _, b := range e.Bounds {
 			what := e.What
-			bnd := b.Side + " " + constraint.FormatBound(b.Day, b.Side == "not after")
+			bnd := b.Side + " " + wording.Bound(b.Day, b.Side == "not after")
 			src := e.Source
 			if b.Milestone != "" {
 				what = b.MaterialName
-				bnd = fmt.Sprintf("%s %s (%s)", b.Side, constraint.FormatBound(b.Day, b.Side == "not after"), b.Milestone)
+				bnd = fmt.Sprintf("%s %s (%s)", b.Side, wording.Bound(b.Day, b.Side == "not after"), b.Milestone)
 				src = b.Source
 			}
 			if e.Kind == "order" {
 				bnd = "after " + b.Date
 			}
 			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(what),
-				mdEscape(method), e.Confidence, mdEscape(bnd), tierNames[b.Tier], mdEscape(src))
+				mdEscape(method), e.Confidence, mdEscape(bnd), wording.Tier(b.Tier), mdEscape(src))
 		}
 	}
 	fmt.Fprintln(ew)
@@ -127,7 +128,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		fmt.Fprintln(ew, "### Conflicts")
 		fmt.Fprintln(ew)
 		for i, c := range r.Conflicts {
-			fmt.Fprintf(ew, "%d. At the %s tier, these cannot all hold: %s.\n", i+1, tierNames[c.Tier], mdEscape(strings.Join(c.Evidence, ", ")))
+			fmt.Fprintf(ew, "%d. At the %s tier, these cannot all hold: %s.\n", i+1, wording.Tier(c.Tier), mdEscape(strings.Join(c.Evidence, ", ")))
 			for _, s := range c.Steps {
 				fmt.Fprintf(ew, "   - %s\n", mdEscape(s.Text))
 			}
@@ -135,11 +136,11 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		fmt.Fprintln(ew)
 		for t, complete := range r.ConflictsComplete {
 			if !complete {
-				fmt.Fprintf(ew, "More conflicts exist at the %s tier than are listed.\n\n", tierNames[t])
+				fmt.Fprintf(ew, "More conflicts exist at the %s tier than are listed.\n\n", wording.Tier(t))
 			}
 		}
 		for _, c := range r.Corrections {
-			fmt.Fprintf(ew, "- The smallest, weakest change that restores agreement at the %s tier is to set aside %s.\n", tierNames[c.Tier], mdEscape(strings.Join(c.Evidence, ", ")))
+			fmt.Fprintf(ew, "- The smallest, weakest change that restores agreement at the %s tier is to set aside %s.\n", wording.Tier(c.Tier), mdEscape(strings.Join(c.Evidence, ", ")))
 		}
 		fmt.Fprintln(ew)
 	}
@@ -197,17 +198,15 @@ func eventParagraph(e constraint.EventResult) string {
 	}
 	var lows, highs []string
 	var prevLo, prevHi *constraint.Bound
-	lowWords := [3]string{"cannot be earlier than", "is unlikely to be earlier than", "would be unusual before"}
-	highWords := [3]string{"cannot be later than", "is unlikely to be later than", "would be unusual after"}
 	for t, w := range e.Windows {
 		if w == nil {
 			continue
 		}
 		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
-			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", lowWords[t], constraint.FormatBound(w.Earliest.Day, false), tierNames[t], strings.Join(w.Earliest.Because, " → ")))
+			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.Bound(w.Earliest.Day, false), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
 		}
 		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
-			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", highWords[t], constraint.FormatBound(w.Latest.Day, true), tierNames[t], strings.Join(w.Latest.Because, " → ")))
+			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.Bound(w.Latest.Day, true), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
 		}
 		if w.Earliest.Bounded {
 			b := w.Earliest

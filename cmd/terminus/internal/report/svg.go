@@ -9,6 +9,7 @@ import (
 
 	"terminus/constraint"
 	"terminus/constraint/date"
+	"terminus/constraint/wording"
 )
 
 // The timeline: one row per event, a bar per tier (hard palest and widest,
@@ -152,7 +153,7 @@ func writeSVG(w io.Writer, r *constraint.Result) {
 			barY := top + 4 + t*10
 			barH := 30 - t*10
 			if win == nil {
-				fmt.Fprintf(w, `<text x="%d" y="%d" fill="#b22222" font-size="10">%s: conflict</text>`+"\n", svgLeft+4, top+12+t*12, tierNames[t])
+				fmt.Fprintf(w, `<text x="%d" y="%d" fill="#b22222" font-size="10">%s: conflict</text>`+"\n", svgLeft+4, top+12+t*12, wording.Tier(t))
 				continue
 			}
 			for _, s := range win.Intervals {
@@ -167,7 +168,7 @@ func writeSVG(w io.Writer, r *constraint.Result) {
 					x2 = x1 + 1.5
 				}
 				fmt.Fprintf(w, `<rect x="%.1f" y="%d" width="%.1f" height="%d" fill="%s"><title>%s %s: %s</title></rect>`+"\n",
-					x1, barY, x2-x1, barH, tierFill[t], html.EscapeString(e.ID), tierNames[t], html.EscapeString(spanText(s)))
+					x1, barY, x2-x1, barH, tierFill[t], html.EscapeString(e.ID), wording.Tier(t), html.EscapeString(spanText(s)))
 				if s.OpenEnd {
 					fmt.Fprintf(w, `<path d="M%.1f %d l8 %d l-8 %d z" fill="%s"/>`+"\n", x2-8, barY, barH/2, barH/2, tierFill[t])
 				}
@@ -204,8 +205,8 @@ func writeSVG(w io.Writer, r *constraint.Result) {
 	// Legend.
 	ly := axisY + 30
 	lx := svgLeft
-	for t := range tierNames {
-		fmt.Fprintf(w, `<rect x="%d" y="%d" width="14" height="10" fill="%s"/><text x="%d" y="%d">%s</text>`+"\n", lx, ly-9, tierFill[t], lx+18, ly, tierNames[t])
+	for t := range 3 {
+		fmt.Fprintf(w, `<rect x="%d" y="%d" width="14" height="10" fill="%s"/><text x="%d" y="%d">%s</text>`+"\n", lx, ly-9, tierFill[t], lx+18, ly, wording.Tier(t))
 		lx += 70
 	}
 	fmt.Fprintf(w, `<text x="%d" y="%d" fill="#555">bars: where the event can fall; brackets: claims</text>`+"\n", lx+10, ly)

@@ -7,12 +7,11 @@ import (
 
 	"terminus/constraint"
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 )
 
 // Width is the column the text report wraps at.
 const Width = 80
-
-var tierNames = [3]string{"hard", "firm", "soft"}
 
 // windowText shows a window as "1816 – 1912-06" with open ends as "open".
 func windowText(w *constraint.Window) string {
@@ -21,10 +20,10 @@ func windowText(w *constraint.Window) string {
 	}
 	lo, hi := "open", "open"
 	if w.Earliest.Bounded {
-		lo = constraint.FormatBound(w.Earliest.Day, false)
+		lo = wording.Bound(w.Earliest.Day, false)
 	}
 	if w.Latest.Bounded {
-		hi = constraint.FormatBound(w.Latest.Day, true)
+		hi = wording.Bound(w.Latest.Day, true)
 	}
 	s := lo + " – " + hi
 	if len(w.Intervals) > 1 {
@@ -36,10 +35,10 @@ func windowText(w *constraint.Window) string {
 func spanText(s constraint.Span) string {
 	lo, hi := "open", "open"
 	if !s.OpenStart {
-		lo = constraint.FormatBound(s.First, false)
+		lo = wording.Bound(s.First, false)
 	}
 	if !s.OpenEnd {
-		hi = constraint.FormatBound(s.Last, true)
+		hi = wording.Bound(s.Last, true)
 	}
 	if lo == hi {
 		return lo
@@ -84,7 +83,7 @@ func consistencyLine(r *constraint.Result) string {
 	var bad []string
 	for t, ok := range r.Consistent {
 		if !ok {
-			bad = append(bad, tierNames[t])
+			bad = append(bad, wording.Tier(t))
 		}
 	}
 	if len(bad) == 0 {
@@ -137,12 +136,12 @@ func Text(w io.Writer, r *constraint.Result) error {
 		}
 		wrap(ew, "", head)
 		for t, win := range e.Windows {
-			wrap(ew, fmt.Sprintf("  %-5s ", tierNames[t]), windowText(win))
+			wrap(ew, fmt.Sprintf("  %-5s ", wording.Tier(t)), windowText(win))
 			if win == nil {
 				continue
 			}
 			if t > 0 && sameWindow(e.Windows[t-1], win) {
-				wrap(ew, "        ", "(as "+tierNames[t-1]+")")
+				wrap(ew, "        ", "(as "+wording.Tier(t-1)+")")
 				continue
 			}
 			var prev *constraint.Window
@@ -150,12 +149,12 @@ func Text(w io.Writer, r *constraint.Result) error {
 				prev = e.Windows[t-1]
 			}
 			if prev != nil && sameBound(prev.Earliest, win.Earliest) {
-				wrap(ew, "        ", fmt.Sprintf("earliest %s: as %s", constraint.FormatBound(win.Earliest.Day, false), tierNames[t-1]))
+				wrap(ew, "        ", fmt.Sprintf("earliest %s: as %s", wording.Bound(win.Earliest.Day, false), wording.Tier(t-1)))
 			} else {
 				writeChain(ew, "earliest", win.Earliest)
 			}
 			if prev != nil && sameBound(prev.Latest, win.Latest) {
-				wrap(ew, "        ", fmt.Sprintf("latest %s: as %s", constraint.FormatBound(win.Latest.Day, true), tierNames[t-1]))
+				wrap(ew, "        ", fmt.Sprintf("latest %s: as %s", wording.Bound(win.Latest.Day, true), wording.Tier(t-1)))
 			} else {
 				writeChain(ew, "latest", win.Latest)
 			}
@@ -175,7 +174,7 @@ func Text(w io.Writer, r *constraint.Result) error {
 			if c.Verdict != constraint.Undetermined {
 				var parts []string
 				for t := network.Hard; t <= c.JudgedAt; t++ {
-					parts = append(parts, tierNames[t]+" "+spansText(c.Surviving[t]))
+					parts = append(parts, wording.Tier(t)+" "+spansText(c.Surviving[t]))
 				}
 				wrap(ew, "      ", "surviving: "+strings.Join(parts, "; "))
 			}
@@ -189,18 +188,18 @@ func Text(w io.Writer, r *constraint.Result) error {
 		fmt.Fprintln(ew)
 		fmt.Fprintln(ew, "CONFLICTS")
 		for i, c := range r.Conflicts {
-			wrap(ew, fmt.Sprintf("  %d. ", i+1), fmt.Sprintf("%s tier: %s cannot all hold", tierNames[c.Tier], strings.Join(c.Evidence, ", ")))
+			wrap(ew, fmt.Sprintf("  %d. ", i+1), fmt.Sprintf("%s tier: %s cannot all hold", wording.Tier(c.Tier), strings.Join(c.Evidence, ", ")))
 			for _, s := range c.Steps {
 				wrap(ew, "       - ", s.Text)
 			}
 		}
 		for t, complete := range r.ConflictsComplete {
 			if !complete {
-				wrap(ew, "  ", fmt.Sprintf("More conflicts exist at the %s tier than are listed.", tierNames[t]))
+				wrap(ew, "  ", fmt.Sprintf("More conflicts exist at the %s tier than are listed.", wording.Tier(t)))
 			}
 		}
 		for _, c := range r.Corrections {
-			wrap(ew, "  ", fmt.Sprintf("Cheapest correction at the %s tier: set aside %s.", tierNames[c.Tier], strings.Join(c.Evidence, ", ")))
+			wrap(ew, "  ", fmt.Sprintf("Cheapest correction at the %s tier: set aside %s.", wording.Tier(c.Tier), strings.Join(c.Evidence, ", ")))
 		}
 	}
 
@@ -246,7 +245,7 @@ func writeChain(w io.Writer, which string, b constraint.Bound) {
 	if !b.Bounded {
 		return
 	}
-	prefix := fmt.Sprintf("        %s %s: ", which, constraint.FormatBound(b.Day, which == "latest"))
+	prefix := fmt.Sprintf("        %s %s: ", which, wording.Bound(b.Day, which == "latest"))
 	if len(b.Chain) == 0 {
 		wrap(w, prefix, "(no evidence recorded)")
 		return
