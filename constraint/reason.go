@@ -319,6 +319,9 @@ type link struct {
 	lower    *lazyText // what it says as a lower bound
 	upper    *lazyText // what it says as an upper bound
 	general  *lazyText // what it says in a conflict
+	// precision is how finely the evidence states its date (or its gap):
+	// a bound is shown no finer than the coarsest step behind it.
+	precision wording.Precision
 }
 
 // lazyText is a text made on first use; the windows of three tiers often
@@ -337,9 +340,9 @@ func (t *lazyText) String() string {
 }
 
 // same makes a link whose three texts are one.
-func same(evidence string, text func() string) link {
+func same(evidence string, p wording.Precision, text func() string) link {
 	t := &lazyText{make: text}
-	return link{evidence: evidence, lower: t, upper: t, general: t}
+	return link{evidence: evidence, lower: t, upper: t, general: t, precision: p}
 }
 
 // built is one network built from the case, and how to read it back.
@@ -684,6 +687,21 @@ func openEndNote(name string, kind materials.Kind, area string, ms *materials.Mi
 	return "No " + side + " bound from " + what + ": " + ms.Source + " gives " + ms.Date.String() + ", which leaves its " + end + " open."
 }
 
+// itemPrecision is how finely a material's bound is stated: the precision
+// of the milestone's date as widened, coarsened by the stock allowance of
+// an upper bound.
+func (a *analysis) itemPrecision(it *boundItem) wording.Precision {
+	d := it.ms.Date
+	if d.Approximate {
+		d = d.Widen(a.circa)
+	}
+	p := wording.PrecisionOf(d)
+	if it.upper {
+		p = wording.Coarser(p, wording.PrecisionOfDuration(&it.allow))
+	}
+	return p
+}
+
 // stockAllowance is how long stocks may have lingered after the withdrawal
 // ms: the dataset's figure, else the case's.
 func (a *analysis) stockAllowance(ms *materials.Milestone) date.Duration {
@@ -792,7 +810,8 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 				text += " (" + o.Note + ")"
 			}
 			c := network.Constraint{ID: o.ID, Tier: o.Strength, Alts: []network.Alt{{From: b.vars[a.eventIdx[o.Event]], To: b.vars[i], Lo: lo, Hi: hi}}}
-			if err := add(c, same(o.ID, func() string { return text })); err != nil {
+			p := wording.Coarser(wording.PrecisionOfDuration(o.AtLeast), wording.PrecisionOfDuration(o.AtMost))
+			if err := add(c, same(o.ID, p, func() string { return text })); err != nil {
 				return nil, err
 			}
 			row := Evidence{ID: o.ID, Kind: "order", Event: e.ID, What: text}
@@ -850,7 +869,8 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 					iso = it.day.ISO()
 				}
 				row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Day: it.day, Date: iso, Tier: it.tier,
-					Milestone: string(it.ms.Kind), Material: f.mats[i].ID, MaterialName: names[i], Source: it.ms.Source})
+					Milestone: string(it.ms.Kind), Material: f.mats[i].ID, MaterialName: names[i], Source: it.ms.Source,
+					Precision: a.itemPrecision(&it)})
 			}
 		}
 		b.evidence = append(b.evidence, row)
@@ -868,7 +888,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 						return fid + " found (" + string(conf) + "): not before " + dayText(lo, false) + ", from " + a.itemText(by)
 					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: int64(w.lo), Hi: network.Inf}}}
-					if err := add(c, same(f.ID, text)); err != nil {
+					if err := add(c, same(f.ID, a.itemPrecision(by), text)); err != nil {
 						return nil, err
 					}
 				}
@@ -880,7 +900,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 						return fid + " found (" + string(conf) + "): not after " + dayText(hi, true) + ", from " + a.itemText(by)
 					}
 					c := network.Constraint{ID: id, Tier: t, Alts: []network.Alt{{From: network.Zero, To: v, Lo: -network.Inf, Hi: int64(w.hi)}}}
-					if err := add(c, same(f.ID, text)); err != nil {
+					if err := add(c, same(f.ID, a.itemPrecision(by), text)); err != nil {
 						return nil, err
 					}
 				}
@@ -956,7 +976,15 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 			}
 			c := network.Constraint{ID: id, Tier: t, Alts: alts}
 			low := &lazyText{make: lowText}
-			if err := add(c, link{evidence: f.ID, lower: low, upper: &lazyText{make: upText}, general: low}); err != nil {
+			p := wording.Unstated
+			for _, w := range kept {
+				for _, by := range []*boundItem{w.loBy, w.hiBy} {
+					if by != nil {
+						p = wording.Coarser(p, a.itemPrecision(by))
+					}
+				}
+			}
+			if err := add(c, link{evidence: f.ID, lower: low, upper: &lazyText{make: upText}, general: low, precision: p}); err != nil {
 				return nil, err
 			}
 		}
@@ -1010,10 +1038,10 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		}
 		lo, hi := alts[0].Lo, alts[len(alts)-1].Hi
 		if lo > -network.Inf {
-			sides = append(sides, EvidenceBound{Side: "not before", Day: date.Day(lo), Date: date.Day(lo).ISO(), Tier: t, Source: r.Source})
+			sides = append(sides, EvidenceBound{Side: "not before", Day: date.Day(lo), Date: date.Day(lo).ISO(), Tier: t, Source: r.Source, Precision: wording.PrecisionOf(d)})
 		}
 		if hi < network.Inf {
-			sides = append(sides, EvidenceBound{Side: "not after", Day: date.Day(hi), Date: date.Day(hi).ISO(), Tier: t, Source: r.Source})
+			sides = append(sides, EvidenceBound{Side: "not after", Day: date.Day(hi), Date: date.Day(hi).ISO(), Tier: t, Source: r.Source, Precision: wording.PrecisionOf(d)})
 		}
 		what := recordText(r, alts)
 		src := ""
@@ -1024,7 +1052,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		if r.Note != "" {
 			general += " (" + r.Note + ")"
 		}
-		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, same(r.ID, func() string { return general })); err != nil {
+		if err := add(network.Constraint{ID: r.ID, Tier: t, Alts: alts}, same(r.ID, wording.PrecisionOf(d), func() string { return general })); err != nil {
 			return nil, err
 		}
 		b.evidence = append(b.evidence, Evidence{ID: r.ID, Kind: "record", Event: r.Event, What: what, Bounds: sides, Source: r.Source})
@@ -1165,6 +1193,7 @@ func (b *built) bound(nb network.Bound, upper bool) Bound {
 			text = l.upper
 		}
 		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text.String()})
+		out.Precision = wording.Coarser(out.Precision, l.precision)
 	}
 	return out
 }

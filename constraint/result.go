@@ -3,6 +3,7 @@ package constraint
 import (
 	"terminus/constraint/date"
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 )
 
 // tiers returns the three strength tiers, strongest first; windows nest:
@@ -86,6 +87,10 @@ type Bound struct {
 	// Chain says, step by step, why: each step an evidence item and what it
 	// contributes.
 	Chain []Step
+	// Precision is how finely the evidence behind the bound states its
+	// dates: the coarsest of its steps (day when none states one). Reports
+	// show the bound no finer ([wording.BoundAt]); Day stays exact.
+	Precision wording.Precision
 }
 
 // Step is one link of a chain of evidence.
@@ -158,6 +163,8 @@ type EvidenceBound struct {
 	Material     string // the material's id
 	MaterialName string // the name it is shown by
 	Source       string // a dataset source key, or the record's source
+	// Precision is how finely the milestone or record states the bound.
+	Precision wording.Precision
 }
 
 // Disagreement is a milestone on which sources disagree, and whether using

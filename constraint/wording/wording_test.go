@@ -83,3 +83,31 @@ func TestVerdictSentence(t *testing.T) {
 		}
 	}
 }
+
+func TestPrecision(t *testing.T) {
+	parse := func(s string) date.Date {
+		d, err := date.Parse(s)
+		if err != nil {
+			t.Fatal(err)
+		}
+		return d
+	}
+	for in, want := range map[string]Precision{"1870": Year, "1870s": Year, "1870~": Year, "1870-05": Month, "1651-12-31": Day, "1870/1879": Year, "../1900": Year} {
+		if got := PrecisionOf(parse(in)); got != want {
+			t.Errorf("PrecisionOf(%s) = %s, want %s", in, got, want)
+		}
+	}
+	// The oak-panel rule of thumb (Kuniholm 2000; Klein 1998): last
+	// heartwood ring 1651, at least 7 sapwood rings, at least 2 years of
+	// seasoning: earliest use 1660. A day-level record plus year-level gaps
+	// gives a year; rounded outward, the bound only widens.
+	if got := BoundAt(date.Gregorian(1660, 12, 28), false, Year); got != "1660" {
+		t.Errorf("BoundAt year = %q, want 1660", got)
+	}
+	if got := BoundAt(date.Gregorian(1900, 3, 5), true, Year); got != "1900" {
+		t.Errorf("upper BoundAt year = %q, want 1900", got)
+	}
+	if got := BoundAt(date.Gregorian(1900, 3, 5), false, Month); got != "1900-03" {
+		t.Errorf("BoundAt month = %q, want 1900-03", got)
+	}
+}

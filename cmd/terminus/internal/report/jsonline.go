@@ -176,6 +176,10 @@ func AppendJSONLine(b []byte, r *constraint.Result) []byte {
 			b = appendOmitEmpty(b, `,"milestone":`, eb.Milestone)
 			b = appendOmitEmpty(b, `,"material":`, eb.Material)
 			b = appendOmitEmpty(b, `,"source":`, eb.Source)
+			if eb.Side != "after" {
+				b = append(b, `,"precision":`...)
+				b = AppendJSONString(b, eb.Precision.String())
+			}
 			b = append(b, '}')
 		}
 		b = append(b, ']')
@@ -244,8 +248,10 @@ func appendBound(b []byte, bd *constraint.Bound) []byte {
 		b = appendDay(b, bd.Day, true)
 		b = append(b, `,"year":`...)
 		b = strconv.AppendInt(b, bd.Day.Year(), 10)
+		b = append(b, `,"precision":`...)
+		b = AppendJSONString(b, bd.Precision.String())
 	} else {
-		b = append(b, `null,"year":null`...)
+		b = append(b, `null,"year":null,"precision":null`...)
 	}
 	b = append(b, `,"because":`...)
 	b = appendStrings(b, bd.Because)

@@ -66,10 +66,11 @@ type jsonWindow struct {
 }
 
 type jsonBound struct {
-	Date    *string    `json:"date"`
-	Year    *int64     `json:"year"`
-	Because []string   `json:"because"`
-	Chain   []jsonStep `json:"chain"`
+	Date      *string    `json:"date"`
+	Year      *int64     `json:"year"`
+	Precision *string    `json:"precision"`
+	Because   []string   `json:"because"`
+	Chain     []jsonStep `json:"chain"`
 }
 
 type jsonStep struct {
@@ -123,6 +124,7 @@ type jsonEvidenceBound struct {
 	Milestone string `json:"milestone,omitempty"`
 	Material  string `json:"material,omitempty"`
 	Source    string `json:"source,omitempty"`
+	Precision string `json:"precision,omitempty"`
 }
 
 type jsonDisagreement struct {
@@ -170,6 +172,7 @@ func bound(b constraint.Bound) jsonBound {
 		out.Date = dayPtr(b.Day, true)
 		y := b.Day.Year()
 		out.Year = &y
+		out.Precision = strPtr(b.Precision.String())
 	}
 	for _, s := range b.Chain {
 		out.Chain = append(out.Chain, jsonStep{Evidence: s.Evidence, Text: s.Text})
@@ -244,6 +247,9 @@ func toJSON(r *constraint.Result) jsonResult {
 		for _, b := range e.Bounds {
 			je.Bounds = append(je.Bounds, jsonEvidenceBound{Side: b.Side, Date: b.Date, Tier: b.Tier.String(),
 				Milestone: b.Milestone, Material: b.Material, Source: b.Source})
+			if b.Side != "after" {
+				je.Bounds[len(je.Bounds)-1].Precision = b.Precision.String()
+			}
 		}
 		out.Evidence = append(out.Evidence, je)
 	}

@@ -54,10 +54,10 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 			}
 			lo, hi := "open", "open"
 			if win.Earliest.Bounded {
-				lo = wording.Bound(win.Earliest.Day, false)
+				lo = wording.BoundAt(win.Earliest.Day, false, win.Earliest.Precision)
 			}
 			if win.Latest.Bounded {
-				hi = wording.Bound(win.Latest.Day, true)
+				hi = wording.BoundAt(win.Latest.Day, true, win.Latest.Precision)
 			}
 			if len(win.Intervals) > 1 {
 				hi += " (only within " + spansText(win.Intervals) + ")"
@@ -108,11 +108,11 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		}
 		for _, b := range e.Bounds {
 			what := e.What
-			bnd := b.Side + " " + wording.Bound(b.Day, b.Side == "not after")
+			bnd := b.Side + " " + wording.BoundAt(b.Day, b.Side == "not after", b.Precision)
 			src := e.Source
 			if b.Milestone != "" {
 				what = b.MaterialName
-				bnd = fmt.Sprintf("%s %s (%s)", b.Side, wording.Bound(b.Day, b.Side == "not after"), b.Milestone)
+				bnd = fmt.Sprintf("%s %s (%s)", b.Side, wording.BoundAt(b.Day, b.Side == "not after", b.Precision), b.Milestone)
 				src = b.Source
 			}
 			if e.Kind == "order" {
@@ -203,10 +203,10 @@ func eventParagraph(e constraint.EventResult) string {
 			continue
 		}
 		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
-			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.Bound(w.Earliest.Day, false), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
+			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.BoundAt(w.Earliest.Day, false, w.Earliest.Precision), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
 		}
 		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
-			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.Bound(w.Latest.Day, true), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
+			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.BoundAt(w.Latest.Day, true, w.Latest.Precision), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
 		}
 		if w.Earliest.Bounded {
 			b := w.Earliest

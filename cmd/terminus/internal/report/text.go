@@ -20,10 +20,10 @@ func windowText(w *constraint.Window) string {
 	}
 	lo, hi := "open", "open"
 	if w.Earliest.Bounded {
-		lo = wording.Bound(w.Earliest.Day, false)
+		lo = wording.BoundAt(w.Earliest.Day, false, w.Earliest.Precision)
 	}
 	if w.Latest.Bounded {
-		hi = wording.Bound(w.Latest.Day, true)
+		hi = wording.BoundAt(w.Latest.Day, true, w.Latest.Precision)
 	}
 	s := lo + " – " + hi
 	if len(w.Intervals) > 1 {
@@ -149,12 +149,12 @@ func Text(w io.Writer, r *constraint.Result) error {
 				prev = e.Windows[t-1]
 			}
 			if prev != nil && sameBound(prev.Earliest, win.Earliest) {
-				wrap(ew, "        ", fmt.Sprintf("earliest %s: as %s", wording.Bound(win.Earliest.Day, false), wording.Tier(t-1)))
+				wrap(ew, "        ", fmt.Sprintf("earliest %s: as %s", wording.BoundAt(win.Earliest.Day, false, win.Earliest.Precision), wording.Tier(t-1)))
 			} else {
 				writeChain(ew, "earliest", win.Earliest)
 			}
 			if prev != nil && sameBound(prev.Latest, win.Latest) {
-				wrap(ew, "        ", fmt.Sprintf("latest %s: as %s", wording.Bound(win.Latest.Day, true), wording.Tier(t-1)))
+				wrap(ew, "        ", fmt.Sprintf("latest %s: as %s", wording.BoundAt(win.Latest.Day, true, win.Latest.Precision), wording.Tier(t-1)))
 			} else {
 				writeChain(ew, "latest", win.Latest)
 			}
@@ -245,7 +245,7 @@ func writeChain(w io.Writer, which string, b constraint.Bound) {
 	if !b.Bounded {
 		return
 	}
-	prefix := fmt.Sprintf("        %s %s: ", which, wording.Bound(b.Day, which == "latest"))
+	prefix := fmt.Sprintf("        %s %s: ", which, wording.BoundAt(b.Day, which == "latest", b.Precision))
 	if len(b.Chain) == 0 {
 		wrap(w, prefix, "(no evidence recorded)")
 		return
