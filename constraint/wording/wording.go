@@ -19,18 +19,26 @@ var monthAbbr = [...]string{"", "Jan", "Feb", "Mar", "Apr", "May", "Jun", "Jul",
 // MonthAbbr is the English abbreviation of month m (1–12): "Jan".
 func MonthAbbr(m int) string { return monthAbbr[m] }
 
+// YearText writes an astronomical year as people do: "1200 BCE" for -1199,
+// "1 CE" and "79 CE" below 1000, "1870" from 1000 on.
+func YearText(y int64) string {
+	switch {
+	case y < 1:
+		return fmt.Sprintf("%d BCE", 1-y)
+	case y < 1000:
+		return fmt.Sprintf("%d CE", y)
+	}
+	return date.FormatYear(y)
+}
+
 // Bound shows a day as people write a bound: the year alone when the bound
 // is the first (lower) or last (upper) day of a year, the month when it is
-// the first or last of a month, else the day. Years before 1 are written
-// BCE ("1200 BCE"); years below 1000 plainly ("79", "Mar 79").
+// the first or last of a month, else the day. Years before 1000 are
+// written with their era ("1200 BCE", "Mar 79 CE", "24 Aug 79 CE"); later
+// ones in ISO 8601 ("1870-05", "1868-04-12").
 func Bound(d date.Day, upper bool) string {
 	y, m, dd := d.Civil()
-	yearText := date.FormatYear(y)
-	if y < 1 {
-		yearText = fmt.Sprintf("%d BCE", 1-y)
-	} else if y < 1000 {
-		yearText = fmt.Sprintf("%d", y)
-	}
+	yearText := YearText(y)
 	if !upper && m == 1 && dd == 1 || upper && m == 12 && dd == 31 {
 		return yearText
 	}

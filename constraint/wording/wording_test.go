@@ -19,8 +19,10 @@ func TestBound(t *testing.T) {
 		{date.Gregorian(1870, 5, 1), false, "1870-05", "the first day of a month"},
 		{date.Gregorian(1870, 2, 28), true, "1870-02", "the last day of February in a common year"},
 		{date.Gregorian(-1199, 1, 1), false, "1200 BCE", "astronomical year -1199 is 1200 BCE"},
-		{date.Gregorian(79, 8, 24), false, "24 Aug 79", "a day of a year below 1000, in words"},
-		{date.Gregorian(79, 8, 1), false, "Aug 79", "a month of a year below 1000"},
+		{date.Gregorian(79, 8, 24), false, "24 Aug 79 CE", "a day of a year below 1000, in words with its era"},
+		{date.Gregorian(79, 8, 1), false, "Aug 79 CE", "a month of a year below 1000"},
+		{date.Gregorian(1, 1, 1), false, "1 CE", "year 1 is 1 CE, not '1'"},
+		{date.Gregorian(0, 12, 31), true, "1 BCE", "astronomical year 0 is 1 BCE"},
 	} {
 		if got := Bound(tc.day, tc.upper); got != tc.want {
 			t.Errorf("Bound(%s, %v) = %q, want %q (%s)", tc.day.ISO(), tc.upper, got, tc.want, tc.why)
