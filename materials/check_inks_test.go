@@ -55,8 +55,6 @@ func TestInksAgainstSources(t *testing.T) {
 		{"spirit-duplicator-copy", materials.KindMade, "", "1923", "CAMEO, Spirit duplicator"},
 		// Getty AAT 300457828: invented by Wilhelm Ritzerfeld in 1923 as an evolution of the hectograph.
 		{"spirit-duplicator-copy", materials.KindMade, "", "1923", "Getty AAT 300457828"},
-		// Dead Media Archive, Spirit Duplicator: spirit duplicators were in use by the late 1920s (quoting Rhodes).
-		{"spirit-duplicator-copy", materials.KindSold, "", "1925/1929", "Dead Media Archive, Spirit Duplicator"},
 		// Nadeau, copying chronology: carbon paper, 1806 (carbonated paper).
 		{"carbon-paper", materials.KindMade, "", "1806", "Nadeau, copying chronology"},
 		// Sunday Observer 2014: the term carbonated paper first used in Ralph Wedgwood's patent for his Stylographic Writer, 1806; Turri's typewriter needed black paper by 1808 at the latest.
@@ -75,8 +73,6 @@ func TestInksAgainstSources(t *testing.T) {
 		{"photostat-paper", materials.KindSold, "", "1906/1907", "Early Office Museum, camera copiers"},
 		// Wikipedia, Photostat machine: Photostat machines in use by 1912, one recorded at the New York Public Library (start not given).
 		{"photostat-paper", materials.KindSold, "", "../1912", "Wikipedia, Photostat machine"},
-		// Early Office Museum, camera copiers: dated white-on-black copies in company files (after Yates); process identification by the historian, not by analysis.
-		{"photostat-paper", materials.KindAttested, "US", "1909", "Early Office Museum, camera copiers"},
 		// Carvalho 1904, anilines as ink: in Carvalho's chronology of the anilines used as ink, eosine is Caro's invention of 1874.
 		{"eosin-red-ink", materials.KindMade, "", "1874", "Carvalho 1904, anilines as ink"},
 		// Carvalho 1904, anilines as ink: first import: eosine was brought to the United States the year after its invention, at 125 dollars a pound.
