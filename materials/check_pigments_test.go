@@ -63,6 +63,8 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"quinacridone-magenta-202", materials.KindSold, "", "1958/..", "Wikipedia, Quinacridone, Derivatives"},
 		{"quinacridone-burnt-orange", materials.KindSold, "", "1958/..", "Wikipedia, Quinacridone, Derivatives"},
 		{"quinacridone-gold", materials.KindSold, "", "1958/..", "Wikipedia, Quinacridone, Derivatives"},
+		// Spanish Wikipedia, Amarillo Hansa, Historia: the Hansa yellows (PY1, 3, 5, 10) appeared in Germany from 1911.
+		{"hansa-yellow-10g", materials.KindSold, "", "1911", "Spanish Wikipedia, Amarillo Hansa, Historia"},
 		// German Wikipedia, Mischphasenoxidpigment, Titanat-Pigmente: the rutile titanates, no date.
 		{"chrome-titanate-yellow", materials.KindMade, "", "19XX", "de.wikipedia, Mischphasenoxidpigment"},
 		{"nickel-titanate-yellow", materials.KindMade, "", "19XX", "de.wikipedia, Mischphasenoxidpigment"},
