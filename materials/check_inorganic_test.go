@@ -25,8 +25,10 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"prussian-blue", materials.KindMade, "", "1704", "Buxbaum et al., Industrial Inorganic Pigments, 3.6.1"},
 		// Degussa, Iron Blue Pigments: Woodward's account of its manufacture, 1726.
 		{"prussian-blue", materials.KindArrived, "GB", "1726", "Degussa, Iron Blue Pigments"},
-		// From memory, not read here: Harley, Artists' Pigments c. 1600-1835: Woodward's method published in 1724.
-		{"prussian-blue", materials.KindArrived, "GB", "1724", "Harley 1982 (from memory)"},
+		// Wikipedia, "Prussian blue", older revision (liquisearch), History: the recipe published by John Woodward in 1724.
+		{"prussian-blue", materials.KindArrived, "GB", "1724", "Wikipedia, Prussian blue, History (older revision)"},
+		// Tokyo National Research Institute for Cultural Properties, Gungyo-zu page: among the earliest uses in Japanese painting (Jakuchū, 1716-1800).
+		{"prussian-blue", materials.KindArrived, "JP", "1716/1800", "Tobunken, Dōshoku sai-e, Gungyo-zu"},
 		// AMICO catalogue record, Hokusai, The Kirifuri Waterfall: Prussian blue introduced into Japan in 1825.
 		{"prussian-blue", materials.KindArrived, "JP", "1825", "AMICO, Hokusai, Kirifuri Waterfall"},
 		// Bailey, Studies in Conservation 57 (2012), abstract: on Canton watercolours sent 1817-1830.
@@ -46,6 +48,8 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"scheeles-green", materials.KindMade, "", "1778", "Frimmel 1913, p. 239"},
 		// Winsor & Newton, "Spotlight on colour: Emerald Green" (2013): available to artists until the 1960s.
 		{"emerald-green", materials.KindWithdrawn, "", "196X", "Winsor & Newton, Emerald Green (2013)"},
+		// German Wikipedia, "Schweinfurter Grün", lead: a pesticide to around the middle of the 20th century.
+		{"emerald-green", materials.KindWithdrawn, "", "1940/1969", "Wikipedia (de), Schweinfurter Grün"},
 		// Wikipedia, "Cobalt blue", Historical uses: Thénard 1802; production in France from 1807.
 		{"cobalt-blue", materials.KindMade, "", "1802", "Wikipedia, Cobalt blue"},
 		{"cobalt-blue", materials.KindSold, "", "1807", "Wikipedia, Cobalt blue"},
@@ -79,16 +83,12 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"synthetic-ultramarine", materials.KindMade, "", "1826", "Wikipedia, Jean-Baptiste Guimet"},
 		// Collier's Encyclopedia, vol. 10, Ultramarine: Société d'Encouragement prize awarded to Guimet in 1828.
 		{"synthetic-ultramarine", materials.KindMade, "", "1828", "Collier's Encyclopedia, vol. 10, Ultramarine"},
-		// Scientific American, 24 April 1852: imported into the United States from Germany and France.
-		{"synthetic-ultramarine", materials.KindArrived, "US", "1852", "Scientific American, 24 April 1852"},
 		// Gettens and Stout, Painting Materials (1942), p. 102: cadmium yellow commercially available about 1846.
 		{"cadmium-yellow", materials.KindSold, "", "1846~", "Gettens and Stout 1942, p. 102"},
 		// Gettens and Stout, Painting Materials (1942), p. 102: first shown at the 1851 Exhibition (after Laurie).
 		{"cadmium-yellow", materials.KindArrived, "GB", "1851", "Gettens and Stout 1942, p. 102"},
 		// Gettens and Stout, Painting Materials (1942), p. 101: cadmium red commercial about 1910.
 		{"cadmium-red", materials.KindSold, "", "1910~", "Gettens and Stout 1942, p. 101"},
-		// From memory, not read here: Artists' Pigments vol. 1, cadmium chapter: cadmium red introduced 1919.
-		{"cadmium-red", materials.KindSold, "", "1919", "Artists' Pigments vol. 1 (from memory)"},
 		// Gettens and Stout, Painting Materials (1942), p. 177, Zinc white: Winsor & Newton's Chinese white, 1834.
 		{"zinc-white", materials.KindSold, "", "1834", "Gettens and Stout 1942, p. 177"},
 		// Gettens and Stout, Painting Materials (1942), p. 177: first trial orders from Hafkenscheid, Amsterdam, 1854.
@@ -102,8 +102,6 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"turners-yellow", materials.KindArrived, "US", "1784", "CAMEO, Lead oxychloride"},
 		// Wikipedia, "Paris green", Uses: used against the potato beetle in Illinois and Indiana in 1867.
 		{"emerald-green", materials.KindArrived, "US", "1867", "Wikipedia, Paris green, Uses"},
-		// Free Art Dictionary, Cadmium yellow (after Mayer): in New York by the early 1840s.
-		{"cadmium-yellow", materials.KindArrived, "US", "1840/1843", "Free Art Dictionary, Cadmium yellow"},
 		// Getty AAT, Mars black, scope note: developed in the early 20th century.
 		{"mars-black", materials.KindMade, "", "1900/1933", "Getty AAT, Mars black"},
 		// Wikipedia, "Braunschweigisches Grün" (German): made and sold by the Gravenhorst brothers from 1767.
@@ -222,16 +220,13 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"emerald-green", materials.KindAttested, "KR", "1917", "Seonwonsa Ksitigarbha study, abstract"},
 		// Cutts et al., BM Technical Research Bulletin 4 (2010), summary: synthetic ultramarine, after 1855, given 1893.
 		{"synthetic-ultramarine", materials.KindAttested, "ET", "1855/1893", "Cutts et al. 2010, summary"},
-		// Japanese prints: Heritage Science 2018 (1864) and 2016 (1864-1895); Yomiuri 2009 (Jakuchū); Kibi International University (1781-1798, 1830).
+		// Japanese prints and paintings: Heritage Science 2018 (1864) and 2016 (1864-1895); Tobunken (Jakuchū); Kibi International University (Ryukyu map, 1781-1798).
 		{"prussian-blue", materials.KindAttested, "JP", "1864", "Heritage Science 2018, nishiki-e timeline"},
 		{"prussian-blue", materials.KindAttested, "JP", "1864/1895", "Heritage Science 2016, Meiji prints"},
-		{"prussian-blue", materials.KindAttested, "JP", "1716/1800", "Yomiuri 2009, Jakuchū"},
+		{"prussian-blue", materials.KindAttested, "JP", "1716/1800", "Tobunken, Dōshoku sai-e, Gungyo-zu"},
 		{"prussian-blue", materials.KindAttested, "JP", "1781/1798", "Kibi International University, Ryukyu map"},
-		{"prussian-blue", materials.KindAttested, "JP", "1830", "Kibi International University, Kuniyoshi print"},
-		// University of Texas at Dallas: Gauguin, Under the Pandanus, Tahiti 1891.
-		{"prussian-blue", materials.KindAttested, "PF", "1891", "UT Dallas, Under the Pandanus"},
-		// From memory, not read here: Bartoll 2008, van der Werff's Entombment of 1709.
-		{"prussian-blue", materials.KindAttested, "NL", "1709", "Bartoll 2008 (from memory)"},
+		// Wikipedia, "Prussian blue", older revision (liquisearch), History: van der Werff's Entombment of 1709 the oldest known painting with it.
+		{"prussian-blue", materials.KindAttested, "NL", "1709", "Wikipedia, Prussian blue, History (older revision)"},
 		// Roy, NG Technical Bulletin 28 (2007), abstract: Monet's late palette.
 		{"cobalt-violet-arsenate", materials.KindAttested, "FR", "1900/1926", "Roy 2007, abstract"},
 		{"zinc-yellow", materials.KindAttested, "FR", "1900/1926", "Roy 2007, abstract"},
@@ -253,8 +248,17 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"lithopone", materials.KindArrived, "BE", "1869", "Merriam-Webster, lithopone"},
 		// From memory (the grant year), the patent text read: Cumberland's US patent 767 for a lead sulfate white.
 		{"lead-sulfate-white", materials.KindMade, "", "1838", "US patent 767 (year from memory)"},
-		// Jones, "Napoleon's wallpaper", Chemistry World: arsenic by XRF in the Longwood wallpaper, St Helena, 1815-1821.
-		{"scheeles-green", materials.KindAttested, "SH", "1815/1821", "Jones, Chemistry World, Napoleon's wallpaper"},
+		// Jones and Ledingham, "Arsenic in Napoleon's wallpaper", Nature, title and abstract (Semantic Scholar): the Longwood wallpaper, St Helena, 1815-1821.
+		{"scheeles-green", materials.KindAttested, "SH", "1815/1821", "Jones and Ledingham, Nature, Napoleon's wallpaper"},
+		// Otero et al., Heritage Science 5:46 (2017), abstract: 19th-century Winsor & Newton records of zinc (Citron) and barium (Lemon) chromates.
+		{"zinc-yellow", materials.KindMade, "", "18XX", "Otero et al. 2017, abstract"},
+		{"barium-yellow", materials.KindMade, "", "18XX", "Otero et al. 2017, abstract"},
+		// Field, Chromatography (an edition by Field, before Salter's 1869 revision), III Chrome greens: chromate of lead with Prussian blue.
+		{"chrome-green", materials.KindMade, "", "1809/1854", "Field, Chromatography, Chrome greens"},
+		// Knight's Cyclopaedia of the Industry of All Nations (1851), Bronzing; bronze powder: beaten copper-alloy leaves ground to powder.
+		{"bronze-powder", materials.KindMade, "", "../1851", "Knight's Cyclopaedia 1851, Bronzing"},
+		// Edwards, Aluminum Paint and Powder (2nd ed., 1936), Preface: commercially available for most of the fifty years since 1886.
+		{"aluminium-powder", materials.KindSold, "", "1886/1911", "Edwards 1936, Preface"},
 		// Journal of Raman Spectroscopy 1999, abstract: chrome orange and baryte on Javanese and Thai manuscripts.
 		{"chrome-orange", materials.KindArrived, "035", "1809/1999", "J. Raman Spectrosc. 1999, Asian manuscripts"},
 		{"barytes", materials.KindArrived, "035", "1782/1999", "J. Raman Spectrosc. 1999, Asian manuscripts"},
@@ -296,7 +300,6 @@ func TestInorganicTradeFacts(t *testing.T) {
 		{"cerulean blue", materials.KindMade, []string{"1789", "1805"}},
 		{"viridian", materials.KindMade, []string{"1835", "1838"}},
 		{"synthetic ultramarine", materials.KindMade, []string{"1826", "1828"}},
-		{"cadmium red", materials.KindSold, []string{"1910~", "1919"}},
 	}
 	for _, c := range disputes {
 		t.Run(c.name+" keeps both claims", func(t *testing.T) {
