@@ -185,6 +185,8 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"logwood", materials.KindArrived, "GB", "1500/1597", "Dyers' Company 1621"},
 		// Getty AAT, mummy (pigment): prepared in the 16th and 17th centuries.
 		{"mummy-brown", materials.KindMade, "", "15XX", "Getty AAT, mummy"},
+		// Wikipedia, "Mummy brown", History: production ended later in the 20th century, when the supply of mummies ran out.
+		{"mummy-brown", materials.KindWithdrawn, "", "19XX", "Wikipedia, Mummy brown, History"},
 		// Palazzo Spinelli ARGOMED, massicot: Pliny's account of its discovery (start open).
 		{"massicot", materials.KindMade, "", "../0079", "ARGOMED, massicot"},
 		// Domingo, García-Borja and Roldán, Archaeometry 54 (2012), abstract: cinnabar and hematite, 5300-5000 cal BC.

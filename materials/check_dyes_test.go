@@ -276,9 +276,13 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"alizarin-crimson", materials.KindMade, "", "1868", "Gettens and Stout 1942, Alizarin"},
 		// Dingler's Polytechnisches Journal 253 (1884), p. 86, Ueber das Auramin: a novelty on the market in 1884.
 		{"auramine", materials.KindSold, "", "../1884", "Dingler 253 (1884), p. 86"},
+		// Meldola 1891, oxazines: Koechlin's gallocyanin introduced in 1881 (making given as about that year).
+		{"gallocyanine", materials.KindMade, "", "1881~", "Meldola 1891, oxazines"},
+		{"gallocyanine", materials.KindSold, "", "1881", "Meldola 1891, oxazines"},
+		// Meldola 1891, salicylic acid dyes and benzidine colours: chrysamines in use by 1891; the first benzidine colours 1884.
+		{"chrysamine-g", materials.KindMade, "", "1884~/1891", "Meldola 1891, salicylic acid dyes"},
 		// From memory, not read here (Colour Index; Zollinger): approximate dates of dyes added without a source read.
 		{"benzopurpurin-4b", materials.KindMade, "", "1885~", "Colour Index (from memory)"},
-		{"chrysamine-g", materials.KindMade, "", "1884~", "Colour Index (from memory)"},
 		{"chrysophenine-g", materials.KindMade, "", "1886~", "Colour Index (from memory)"},
 		{"rhodamine-6g", materials.KindMade, "", "1892~", "Colour Index (from memory)"},
 		{"phloxine-b", materials.KindMade, "", "187X/188X", "Colour Index (from memory)"},
@@ -287,7 +291,6 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"naphthol-blue-black", materials.KindMade, "", "1891~", "Colour Index (from memory)"},
 		{"orange-g", materials.KindMade, "", "1878~", "Colour Index (from memory)"},
 		{"methyl-orange", materials.KindMade, "", "1876~", "Colour Index (from memory)"},
-		{"gallocyanine", materials.KindMade, "", "1881~", "Colour Index (from memory)"},
 		{"hydron-blue", materials.KindMade, "", "1908~", "Colour Index (from memory)"},
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},

@@ -40,6 +40,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"henna", materials.KindAttested, "EG", "-3399%", "Sienna, Henna in the ancient world (essay)"},
 		// TCF DATU, Walnut, Historical Data: Pliny (Natural History, about 77 CE) gives a recipe for dyeing grey hair brown with walnut; Greek and Roman writers knew the tree; the ...
 		{"walnut-hull-dye", materials.KindMade, "", "../0077", "TCF DATU, Walnut, Historical Data"},
+		// Pliny, Natural History 15.24 (Bostock and Riley, Perseus): walnut husk dyes wool; young nuts redden the hair.
+		{"walnut-hull-dye", materials.KindMade, "", "../0077", "Pliny, Natural History 15.24"},
 		// CAMEO, Relbun roots: used by the Paracas culture of Peru for dyeing textiles in about 700 BCE.
 		{"relbunium", materials.KindMade, "", "-0699~", "CAMEO, Relbun roots"},
 		// Wouters and Rosario-Chirinos, JAIC 31 (1992), section 5: South Peruvian textiles of 100-200 CE (analysed by Schweppe, 1986).
@@ -52,6 +54,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"dyers-broom", materials.KindAttested, "GR", "1500/1930", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Dean 2012, Sawwort (after Cardon 2007): used in Europe since the Middle Ages and prized in Tuscany in the 14th and 15th centuries (after Cardon 2007); the start is left open.
 		{"sawwort", materials.KindMade, "", "../13XX", "Dean 2012, Sawwort (after Cardon 2007)"},
+		// Cardon and Houssaye Michienzi, DHA 34 (2015), abstract: sawwort and weld in the Salviati dye company of Florence, 1483-1498.
+		{"sawwort", materials.KindMade, "", "../1498", "Cardon and Houssaye Michienzi 2015, abstract"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: buckthorn berries found in Ottoman textiles of the 16th to 18th century; the start is left open.
 		{"rhamnus-berry-dye", materials.KindMade, "", "../1799", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: Ottoman textiles of the 16th to 18th century in the Topkapı Palace Museum, Istanbul.
@@ -196,8 +200,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"huntite", materials.KindMade, "", "-1478/-1424", "Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey)"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: the white powder in a Pompeian pigment bowl is mainly huntite; the start is left open.
 		{"huntite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
-		// Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey): Royal tomb painting of the reign of Ramesses VI (1143-1136 BCE), Thebes, in El Goresy's survey.
-		{"huntite", materials.KindAttested, "EG", "-1142/-1135", "Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey)"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: White powder in a pigment bowl from Pompeii, buried in 79 CE (National Archaeological Museum of Naples).
 		{"huntite", materials.KindAttested, "IT", "0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
 		// Eremin et al., J. Raman Spectrosc. 39 (2008), abstract: Thai manuscripts of the 18th to 20th century.
@@ -243,8 +245,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"kaolin", materials.KindMade, "", "../1368", "Mogao pigments page (dhdzgy.com)"},
 		// Mogao pigments page (dhdzgy.com): talc among the whites of the Mogao murals; the start is left open.
 		{"talc", materials.KindMade, "", "../1368", "Mogao pigments page (dhdzgy.com)"},
-		// From memory, not read here: Pigment Compendium (2004): white minerals of this kind were used in prehistory; the start is left open.
-		{"talc", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
+		// Atanassova et al., Minerals 14 (2024), 152, abstract: talc in the white paint of Early Neolithic sherds, Thracian valley (period end from memory).
+		{"talc", materials.KindMade, "", "../-5499", "Atanassova et al., Minerals 14 (2024), abstract"},
 	}
 	checkSourceRows(t, d, naturalFile, rows)
 }
