@@ -24,6 +24,8 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"cochineal-carmine", materials.KindArrived, "JP", "1869", "Cesaratto et al. 2018, abstract"},
 		// Wikipedia, "Lead-tin yellow", section History: no paintings with it after 1750.
 		{"lead-tin-yellow-i", materials.KindWithdrawn, "", "1750", "Wikipedia, Lead-tin yellow, History"},
+		// Same article, History: type I the standard oil-painting yellow until the 18th century, replaced early in it by Naples yellow.
+		{"lead-tin-yellow-i", materials.KindWithdrawn, "", "17XX", "Wikipedia, Lead-tin yellow, History"},
 		// Gettens and Stout, Painting Materials (1942), entry Smalt, p. 158: invention about 1540-1560.
 		{"smalt", materials.KindMade, "", "1540/1560", "Gettens and Stout 1942, p. 158"},
 		// Getty 1995 preprints, pp. 74-76: smalt on a South German painting of about 1400-1500.
@@ -41,8 +43,8 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"tyrian-purple", materials.KindWithdrawn, "145", "1453", "Wikipedia, Tyrian purple, Background"},
 		// Stieglitz, The Biblical Archaeologist 57 (1994), abstract: Minoan sea purple before 1750 BCE.
 		{"tyrian-purple", materials.KindMade, "", "-1749~", "Stieglitz 1994, abstract"},
-		// Report on the Cave of Skulls textile: radiocarbon 1954-1767 BCE, dyed with Kermes vermilio.
-		{"kermes", materials.KindMade, "", "-1953/-1766", "Cave of Skulls report"},
+		// Sukenik et al., J. Archaeol. Sci. Reports 57 (2024), abstract: Cave of Skulls textile, radiocarbon 1954-1767 BCE, Kermes vermilio by HPLC.
+		{"kermes", materials.KindMade, "", "-1953/-1766", "Sukenik et al. 2024, abstract"},
 		// MFA Boston, CAMEO, entry Sepia: watercolour introduced by Seydelmann about 1780.
 		{"sepia", materials.KindSold, "", "1780~", "CAMEO, Sepia"},
 		// Gettens and Stout, Painting Materials (1942), entry Ultramarine, p. 165: Marco Polo at the mines, 1271.
@@ -85,8 +87,6 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"natural-ultramarine", materials.KindArrived, "DE", "0997/1162", "Radini et al. 2019, abstract"},
 		// Wikipedia, "Mosaic gold", lead section: recipe in Ge Hong's 3rd-century Baopuzi.
 		{"mosaic-gold", materials.KindMade, "", "02XX", "Wikipedia, Mosaic gold"},
-		// From memory, not read here: Naples yellow as a painter's pigment in Europe from the 17th century (Artists' Pigments vol. 1).
-		{"naples-yellow", materials.KindArrived, "150", "16XX", "Artists' Pigments vol. 1 (from memory)"},
 		// Phipps, Cochineal Red, Met Bulletin 67 (3), 2010, p. 40: the Manila galleons carried cochineal by the 1580s.
 		{"american-cochineal", materials.KindArrived, "PH", "158X", "Phipps 2010, p. 40"},
 		// Phipps 2010, p. 40: known to the Kangxi emperor by about 1700; shipped to China before the 1700s.
@@ -173,15 +173,33 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"turmeric", materials.KindArrived, "IQ", "-0699/-0600", "Wikipedia, Turmeric"},
 		// Kelsey Museum, Ancient Color: realgar ingots in a 1st-century BCE wreck off Marseille.
 		{"realgar", materials.KindArrived, "150", "-0099/0000", "Kelsey Museum, Ancient Color"},
+		// Raman spectroscopic analysis of ancient Egyptian pigments, abstract: realgar with pararealgar in a Tell el-Amarna specimen, about 1340 BCE.
+		{"realgar", materials.KindMade, "", "-1339~", "Raman analysis of Amarna pigments, abstract"},
+		{"realgar", materials.KindAttested, "EG", "-1339~", "Raman analysis of Amarna pigments, abstract"},
+		// Iconofile (supplier), Realgar, History of Use (weak source): raw lumps in a 14th-century BCE Egyptian tomb.
+		{"realgar", materials.KindMade, "", "-13XX", "Iconofile, Realgar"},
+		// Pliny, Natural History, book 35, on atramentum (Bostock and Riley): soot black from resin, and Apelles' burnt-ivory black.
+		{"lamp-black", materials.KindMade, "", "../0077", "Pliny, Natural History 35, atramentum"},
+		{"bone-black", materials.KindMade, "", "../0077", "Pliny, Natural History 35, atramentum"},
 		// Dyers' Company, bill against logwood (1621): statute of 39 Elizabeth (1597); start at the made date.
 		{"logwood", materials.KindArrived, "GB", "1500/1597", "Dyers' Company 1621"},
 		// Getty AAT, mummy (pigment): prepared in the 16th and 17th centuries.
 		{"mummy-brown", materials.KindMade, "", "15XX", "Getty AAT, mummy"},
+		// Wikipedia, "Mummy brown", History: production ended later in the 20th century, when the supply of mummies ran out.
+		{"mummy-brown", materials.KindWithdrawn, "", "19XX", "Wikipedia, Mummy brown, History"},
 		// Palazzo Spinelli ARGOMED, massicot: Pliny's account of its discovery (start open).
 		{"massicot", materials.KindMade, "", "../0079", "ARGOMED, massicot"},
 		// Domingo, García-Borja and Roldán, Archaeometry 54 (2012), abstract: cinnabar and hematite, 5300-5000 cal BC.
 		{"cinnabar", materials.KindMade, "", "-5299/-4999", "Domingo et al. 2012, abstract"},
 		{"hematite-pigment", materials.KindMade, "", "-5299/-4999", "Domingo et al. 2012, abstract"},
+		// Siddall, Minerals 8 (2018), 201, section 1: red ochre extraction 300-200 thousand years ago in Africa.
+		{"hematite-pigment", materials.KindMade, "", "Y-300000/Y-200000", "Siddall 2018, section 1"},
+		// Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract (read in the first round): haematite in the dark red paint.
+		{"hematite-pigment", materials.KindMade, "", "../-9999", "Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract"},
+		// J. Raman Spectrosc. abstract on Pompeii pigments (read in the first round): hematite among the pigments.
+		{"hematite-pigment", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
+		// Uda et al., NIM B (2000), abstract and text: hematite by XRD in the red parts of the Malqata palace walls.
+		{"hematite-pigment", materials.KindAttested, "EG", "-1389/-1351", "Uda et al., NIM B (2000), Malqata palace"},
 		// Wikipedia, "Han purple and Han blue": used until the end of the Han dynasty (placed in China).
 		{"han-blue", materials.KindWithdrawn, "CN", "0220~", "Wikipedia, Han purple and Han blue"},
 		{"han-purple", materials.KindWithdrawn, "CN", "0220~", "Wikipedia, Han purple and Han blue"},
@@ -207,8 +225,6 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"manganese-black", materials.KindMade, "", "../-9999", "Lascaux website, raw material"},
 		// Heyes et al., Scientific Reports 6 (2016): manganese oxide blocks of 60,000-40,000 years ago (use debated).
 		{"manganese-black", materials.KindMade, "", "Y-58050/Y-38050?", "Heyes et al. 2016, abstract"},
-		// The Eclectic Light Company (blog, 2018): lead-tin yellow in glass of about 400 CE (weak source).
-		{"lead-tin-yellow-ii", materials.KindMade, "", "0400%", "Eclectic Light Company 2018"},
 		// Attestations: dated objects with the analytical identification, one row each.
 		// Han et al. 2022, abstract: Liangdaicun lead white, 8th century BCE.
 		{"lead-white", materials.KindAttested, "CN", "-0799/-0700", "Han et al. 2022, abstract"},
@@ -272,8 +288,8 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		// Burgio et al. 2007 and Seldes et al. 2002: copper resinate in China and at Yavi.
 		{"copper-resinate", materials.KindAttested, "CN", "16XX", "Burgio et al. 2007, abstract"},
 		{"copper-resinate", materials.KindAttested, "AR", "1667/1720", "Seldes et al. 2002, 3.1.1"},
-		// News report of the Cave of Skulls study (weak source): kermes, 1954-1767 BCE.
-		{"kermes", materials.KindAttested, "IL", "-1953/-1766", "Cave of Skulls report"},
+		// Sukenik et al., J. Archaeol. Sci. Reports 57 (2024), abstract: the Cave of Skulls textile.
+		{"kermes", materials.KindAttested, "IL", "-1953/-1766", "Sukenik et al. 2024, abstract"},
 		// Berger et al. 2024, Sukenik et al. 2021, Karapanagiotis 2019: shellfish purple.
 		{"tyrian-purple", materials.KindAttested, "GR", "-1599/-1500", "Berger et al. 2024, abstract"},
 		{"tyrian-purple", materials.KindAttested, "IL", "-1049/-0950", "Sukenik et al. 2021, abstract"},
@@ -307,8 +323,6 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"egyptian-blue", materials.KindAttested, "EG", "-0588/-0569", "Palace of Apries 2019, abstract"},
 		// Vázquez de Ágredos-Pascual et al., Microchemical Journal 150 (2019): oldest Maya blue, Chupícuaro culture.
 		{"maya-blue", materials.KindMade, "", "../0250", "Vázquez de Ágredos-Pascual et al. 2019"},
-		// From memory, not read here: realgar on works by Tintoretto (Artists' Pigments vol. 3).
-		{"realgar", materials.KindArrived, "150", "15XX", "Artists' Pigments vol. 3 (from memory)"},
 	}
 	checkSourceRows(t, d, antiquityFile, rows)
 }

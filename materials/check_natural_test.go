@@ -20,10 +20,8 @@ const naturalFile = "natural-colorants-minerals.yaml"
 func TestNaturalAgainstSources(t *testing.T) {
 	d := checkBuiltin(t)
 	rows := []sourceRow{
-		// From memory, not read here: Cardon, Natural Dyes (2007): used by dyers of tropical America before the Spanish conquest and shipped to Europe from the 16th century; no dated ...
-		{"old-fustic", materials.KindMade, "", "../15XX", "Cardon, Natural Dyes (2007) (from memory)"},
-		// From memory, not read here: Cardon, Natural Dyes (2007): first import: brought to European dyers from the Caribbean and Central America in the 16th century.
-		{"old-fustic", materials.KindArrived, "150", "15XX?", "Cardon, Natural Dyes (2007) (from memory)"},
+		// CAMEO, Fustic, description: imported into Europe in 1510 from the West Indies and Central and South America; the start is left open.
+		{"old-fustic", materials.KindMade, "", "../1510", "CAMEO, Fustic"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: Post-Byzantine ecclesiastical textiles of Mount Athos, 16th to early 20th century.
 		{"old-fustic", materials.KindAttested, "GR", "1500/1930", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Getty AAT, cutch (pigment): used in India since ancient times; no date is given, so the start is left open.
@@ -42,6 +40,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"henna", materials.KindAttested, "EG", "-3399%", "Sienna, Henna in the ancient world (essay)"},
 		// TCF DATU, Walnut, Historical Data: Pliny (Natural History, about 77 CE) gives a recipe for dyeing grey hair brown with walnut; Greek and Roman writers knew the tree; the ...
 		{"walnut-hull-dye", materials.KindMade, "", "../0077", "TCF DATU, Walnut, Historical Data"},
+		// Pliny, Natural History 15.24 (Bostock and Riley, Perseus): walnut husk dyes wool; young nuts redden the hair.
+		{"walnut-hull-dye", materials.KindMade, "", "../0077", "Pliny, Natural History 15.24"},
 		// CAMEO, Relbun roots: used by the Paracas culture of Peru for dyeing textiles in about 700 BCE.
 		{"relbunium", materials.KindMade, "", "-0699~", "CAMEO, Relbun roots"},
 		// Wouters and Rosario-Chirinos, JAIC 31 (1992), section 5: South Peruvian textiles of 100-200 CE (analysed by Schweppe, 1986).
@@ -54,6 +54,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"dyers-broom", materials.KindAttested, "GR", "1500/1930", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Dean 2012, Sawwort (after Cardon 2007): used in Europe since the Middle Ages and prized in Tuscany in the 14th and 15th centuries (after Cardon 2007); the start is left open.
 		{"sawwort", materials.KindMade, "", "../13XX", "Dean 2012, Sawwort (after Cardon 2007)"},
+		// Cardon and Houssaye Michienzi, DHA 34 (2015), abstract: sawwort and weld in the Salviati dye company of Florence, 1483-1498.
+		{"sawwort", materials.KindMade, "", "../1498", "Cardon and Houssaye Michienzi 2015, abstract"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: buckthorn berries found in Ottoman textiles of the 16th to 18th century; the start is left open.
 		{"rhamnus-berry-dye", materials.KindMade, "", "../1799", "Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract"},
 		// Dyes in post-Byzantine and Ottoman textiles (HPLC study), abstract: Ottoman textiles of the 16th to 18th century in the Topkapı Palace Museum, Istanbul.
@@ -66,14 +68,10 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"barberry", materials.KindAttested, "CN", "0220/0420", "Gao et al., J. Archaeol. Sci. (2024), abstract"},
 		// Four Tang silks of the China National Silk Museum (2024), abstract: Four Tang dynasty silk fabrics in the China National Silk Museum.
 		{"barberry", materials.KindAttested, "CN", "0618/0907", "Four Tang silks of the China National Silk Museum (2024), abstract"},
-		// TCF DATU, Berberis, Historical Data: first documented use: European sources of the 14th century.
-		{"barberry", materials.KindArrived, "150", "13XX", "TCF DATU, Berberis, Historical Data"},
 		// Nuruosmaniye colour database, Sumac: used since antiquity, more for tanning than for dyeing; the start is left open.
 		{"sumac", materials.KindMade, "", "../0499", "Nuruosmaniye colour database, Sumac"},
 		// CAMEO, Sicilian sumac: an important tanning agent in the Middle Ages; the start is left open.
 		{"sumac", materials.KindMade, "", "../14XX", "CAMEO, Sicilian sumac"},
-		// From memory, not read here: Cardon, Natural Dyes (2007): galls for black dyeing and tanning are described by Pliny (about 77 CE); the start is left open.
-		{"oak-galls", materials.KindMade, "", "../0077", "Cardon, Natural Dyes (2007) (from memory)"},
 		// Getty AAT, gall (plant material): galls with ferrous sulfate give a black dye and galls have been used for centuries in tanning; no date is given, so the start is left open.
 		{"oak-galls", materials.KindMade, "", "../17XX", "Getty AAT, gall (plant material)"},
 		// Wikipedia, Alkanna tinctoria, lead: used as a dye in the Mediterranean since antiquity; no date is given, so the start is left open.
@@ -86,8 +84,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"dyers-chamomile", materials.KindMade, "", "../17XX", "Cardon, Natural Dyes (2007) (from memory)"},
 		// Wikipedia, Turkey red, lead and History: the process came from the Levant, developed in India and China, and was brought to Europe in the 1740s; the start is left open.
 		{"turkey-red-madder", materials.KindMade, "", "../174X", "Wikipedia, Turkey red, lead and History"},
-		// From memory, not read here: Cardon, Natural Dyes (2007): oil-mordant madder reds on cotton were made in India and the Ottoman lands before Europe learned the process; the ...
-		{"turkey-red-madder", materials.KindMade, "", "../16XX", "Cardon, Natural Dyes (2007) (from memory)"},
 		// Wikipedia, Turkey red, lead and History: first import: Turkey red was brought to Europe in the 1740s, known in France as rouge d'Andrinople.
 		{"turkey-red-madder", materials.KindArrived, "150", "174X", "Wikipedia, Turkey red, lead and History"},
 		// Cooper Hewitt, Object of the Day, Turkey red sample book: first documented use: practised throughout the eastern Mediterranean and unknown in Europe before the 18th century, ...
@@ -96,8 +92,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"turkey-red-madder", materials.KindArrived, "GR", "../17XX", "Cooper Hewitt, Object of the Day, Turkey red sample book"},
 		// Lowengard 2006, chapter Turkey Red (quoting Brown, History of Glasgow): first documented use: Papillon, who took the process to Glasgow in 1785, was an eminent Turkey-red ...
 		{"turkey-red-madder", materials.KindArrived, "FR", "../1785", "Lowengard 2006, chapter Turkey Red (quoting Brown, History of Glasgow)"},
-		// From memory, not read here: Cardon, Natural Dyes (2007): local manufacture: dye works with Levantine dyers in Normandy and Languedoc from about 1747.
-		{"turkey-red-madder", materials.KindArrived, "FR", "1747?", "Cardon, Natural Dyes (2007) (from memory)"},
 		// Wertz et al., ICOM-CC 2017, abstract and introduction: local manufacture: Turkey red was produced in Western Europe from the mid-18th to the early 20th century; dyers began ...
 		{"turkey-red-madder", materials.KindArrived, "155", "1750~", "Wertz et al., ICOM-CC 2017, abstract and introduction"},
 		// Lowengard 2006, chapter Turkey Red (quoting Brown, History of Glasgow): local manufacture: George Mackintosh brought Papillon from Rouen and built a Turkey red dye-house at ...
@@ -152,8 +146,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"chinese-gallnut", materials.KindMade, "", "../1644", "Han, Economic Botany 69 (2015), abstract"},
 		// Getty AAT, gall (plant material): galls of Rhus semialata in China and Japan give black with iron sulfate and have long been used; no date is given, so the start is left open.
 		{"chinese-gallnut", materials.KindMade, "", "../17XX", "Getty AAT, gall (plant material)"},
-		// From memory, not read here: Pigment Compendium (2004): in Egyptian painting by the New Kingdom and probably earlier; the start is left open.
-		{"egyptian-green", materials.KindMade, "", "../-1069", "Pigment Compendium (2004) (from memory)"},
 		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: the green of the wall paintings of the tomb of Nakht-Djehuty (TT189), of the time of Ramesses II; the ...
 		{"egyptian-green", materials.KindMade, "", "../-1211", "Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract"},
 		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: Wall paintings of the tomb of Nakht-Djehuty (TT189), El-Qurna necropolis, Thebes, time of Ramesses II ...
@@ -164,8 +156,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"atacamite", materials.KindMade, "", "0200/0799", "Shen et al., Heritage Science (2024), abstract"},
 		// Lei, Studies in Conservation 57 (2012), abstract: proposed as the most popular green of Chinese wall and architectural painting from the Northern Dynasties to the late Qing; ...
 		{"atacamite", materials.KindMade, "", "0386/0581?", "Lei, Studies in Conservation 57 (2012), abstract"},
-		// From memory, not read here: Pigment Compendium (2004): copper chlorides also occur on ancient Mediterranean and Egyptian painted objects, as pigment or alteration; the start ...
-		{"atacamite", materials.KindMade, "", "../-0029", "Pigment Compendium (2004) (from memory)"},
 		// Painting the Palace of Apries II, Heritage Science (2019), abstract: among the pigments of the painted reliefs of the Palace of Apries (Apries reigned 589-570 BCE, from ...
 		{"atacamite", materials.KindMade, "", "../-0569", "Painting the Palace of Apries II, Heritage Science (2019), abstract"},
 		// Painting the Palace of Apries II, Heritage Science (2019), abstract: Painted limestone reliefs of the Palace of Apries, Memphis, excavated by Petrie in 1908-1910 (Ny ...
@@ -176,8 +166,8 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"atacamite", materials.KindAttested, "005", "1500/1799", "De Haro et al., Heritage 6 (2023), abstract"},
 		// Lei, Studies in Conservation 57 (2012), abstract: copper trihydroxychlorides proposed as the most popular green of Chinese wall painting from the Northern Dynasties on; a ...
 		{"paratacamite", materials.KindMade, "", "0386/0581?", "Lei, Studies in Conservation 57 (2012), abstract"},
-		// From memory, not read here: Pigment Compendium (2004): as an alteration product it can be as old as any copper pigment or bronze; the start is left open.
-		{"paratacamite", materials.KindMade, "", "../-0029", "Pigment Compendium (2004) (from memory)"},
+		// Frost et al., J. Raman Spectrosc. 33 (2002), abstract: atacamite and paratacamite as corrosion of archaeological copper, brass and bronze; no dates, start left open.
+		{"paratacamite", materials.KindMade, "", "../-0029", "Frost et al., J. Raman Spectrosc. 33 (2002), abstract"},
 		// Lei, Studies in Conservation 57 (2012), abstract: copper trihydroxychlorides (the group of botallackite, atacamite, paratacamite and clinoatacamite) proposed as the common ...
 		{"clinoatacamite", materials.KindMade, "", "0386/0581?", "Lei, Studies in Conservation 57 (2012), abstract"},
 		// Frost et al., J. Raman Spectrosc. 33 (2002), introduction: one of the four basic copper chloride minerals found in the corrosion of copper, brass and bronze objects of ...
@@ -210,14 +200,16 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"huntite", materials.KindMade, "", "-1478/-1424", "Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey)"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: the white powder in a Pompeian pigment bowl is mainly huntite; the start is left open.
 		{"huntite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
-		// Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey): Royal tomb painting of the reign of Ramesses VI (1143-1136 BCE), Thebes, in El Goresy's survey.
-		{"huntite", materials.KindAttested, "EG", "-1142/-1135", "Armenian Egyptology Centre Newsletter 9 (El Goresy 1997 survey)"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: White powder in a pigment bowl from Pompeii, buried in 79 CE (National Archaeological Museum of Naples).
 		{"huntite", materials.KindAttested, "IT", "0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
 		// Eremin et al., J. Raman Spectrosc. 39 (2008), abstract: Thai manuscripts of the 18th to 20th century.
 		{"huntite", materials.KindAttested, "TH", "1700/1999", "Eremin et al., J. Raman Spectrosc. 39 (2008), abstract"},
-		// From memory, not read here: Pigment Compendium (2004): white calcium carbonates are prehistoric pigments; the start is left open.
-		{"calcite", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
+		// Raman analysis of pigments from the Egyptian Old Kingdom, J. Raman Spectrosc. 35 (2004), abstract: huntite on Old Kingdom objects in the British Museum.
+		{"huntite", materials.KindAttested, "EG", "-2685/-2180", "J. Raman Spectrosc. 35 (2004), Old Kingdom pigments, abstract"},
+		// Fulcher and Budka, J. Archaeol. Sci. Reports 33 (2020), abstract: huntite in 18th Dynasty paint palettes from Sai Island, 1548-1302 BCE.
+		{"huntite", materials.KindAttested, "SD", "-1547/-1301", "Fulcher and Budka 2020, Sai Island, abstract"},
+		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: calcite with gypsum the white of the tomb of Nakht-Djehuty; the start is left open.
+		{"calcite", materials.KindMade, "", "../-1211", "Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract"},
 		// Mogao pigments page (dhdzgy.com): gypsum, talc, kaolin and calcite are the whites of the Mogao murals; the start is left open.
 		{"calcite", materials.KindMade, "", "../1368", "Mogao pigments page (dhdzgy.com)"},
 		// Marey Mahmoud and Papadopoulou, ArcheoSciences 37, TT189, abstract: Wall paintings of the tomb of Nakht-Djehuty (TT189), El-Qurna necropolis, Thebes, time of Ramesses II ...
@@ -232,32 +224,29 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"pararealgar", materials.KindAttested, "145", "1200/1239", "Lead(II) sulfide and pararealgar on a 13th-century manuscript, abstract"},
 		// Pararealgar by Raman microspectroscopy (Tintoretto), abstract: A major work by Jacopo Tintoretto (active about 1540-1594).
 		{"pararealgar", materials.KindAttested, "IT", "1540/1594", "Pararealgar by Raman microspectroscopy (Tintoretto), abstract"},
-		// From memory, not read here: Pigment Compendium (2004): identified in Egyptian painting by the New Kingdom; the start is left open.
-		{"jarosite", materials.KindMade, "", "../-1069", "Pigment Compendium (2004) (from memory)"},
+		// Raman spectroscopic analysis of ancient Egyptian pigments, abstract: realgar with pararealgar in a Tell el-Amarna specimen, about 1340 BCE.
+		{"pararealgar", materials.KindAttested, "EG", "-1339~", "Raman analysis of Amarna pigments, abstract"},
+		// Raman analysis of pigments from the Egyptian Old Kingdom, J. Raman Spectrosc. 35 (2004), abstract: jarosite on Old Kingdom objects, not an alteration product; the start is left open.
+		{"jarosite", materials.KindMade, "", "../-2180", "J. Raman Spectrosc. 35 (2004), Old Kingdom pigments, abstract"},
+		{"jarosite", materials.KindAttested, "EG", "-2685/-2180", "J. Raman Spectrosc. 35 (2004), Old Kingdom pigments, abstract"},
 		// Uda et al., NIM B (2000), Malqata palace, abstract: goethite the yellow of the painted walls of Amenhotep III's Malqata palace; the start is left open.
 		{"mineral-goethite", materials.KindMade, "", "../-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
 		// Uda et al., NIM B (2000), Malqata palace, abstract: Painted walls of the Malqata palace, Thebes, founded by Amenhotep III (18th Dynasty; reign dates conventional, from memory).
 		{"mineral-goethite", materials.KindAttested, "EG", "-1389/-1351", "Uda et al., NIM B (2000), Malqata palace, abstract"},
 		// J. Raman Spectrosc. abstract on Pompeii pigments: goethite among the ochres in bowls and wall paintings of Pompeii and the Vesuvian area; the start is left open.
 		{"mineral-goethite", materials.KindMade, "", "../0079", "J. Raman Spectrosc. abstract on Pompeii pigments"},
-		// From memory, not read here: Pigment Compendium (2004): goethite earths are prehistoric pigments; the start is left open.
-		{"mineral-goethite", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
 		// Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract: magnetite grains with haematite, manganese oxide and carbon in dark red paint of the Palaeolithic Roucadour ...
 		{"magnetite", materials.KindMade, "", "../-9999", "Roucadour cave pigments, J. Raman Spectrosc. (2006), abstract"},
-		// From memory, not read here: Pigment Compendium (2004): a black of prehistoric painting; the start is left open.
-		{"magnetite", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
 		// Tübingen, GRAPHTEC project page: graphite decoration of pottery spread over most of the Balkans during the 5th millennium BCE.
 		{"graphite", materials.KindMade, "", "-4999/-4000", "Tübingen, GRAPHTEC project page"},
-		// From memory, not read here: Pigment Compendium (2004): white clays are prehistoric pigments; the start is left open.
-		{"kaolin", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
 		// Kelsey Museum, Ancient Color, White pigments: kaolinite among the white pigments of Mediterranean antiquity, from clay deposits found throughout the Mediterranean; the start ...
 		{"kaolin", materials.KindMade, "", "../0399", "Kelsey Museum, Ancient Color, White pigments"},
 		// Mogao pigments page (dhdzgy.com): kaolin among the whites of the Mogao murals; the start is left open.
 		{"kaolin", materials.KindMade, "", "../1368", "Mogao pigments page (dhdzgy.com)"},
 		// Mogao pigments page (dhdzgy.com): talc among the whites of the Mogao murals; the start is left open.
 		{"talc", materials.KindMade, "", "../1368", "Mogao pigments page (dhdzgy.com)"},
-		// From memory, not read here: Pigment Compendium (2004): white minerals of this kind were used in prehistory; the start is left open.
-		{"talc", materials.KindMade, "", "../-9999", "Pigment Compendium (2004) (from memory)"},
+		// Atanassova et al., Minerals 14 (2024), 152, abstract: talc in the white paint of Early Neolithic sherds, Thracian valley (period end from memory).
+		{"talc", materials.KindMade, "", "../-5499", "Atanassova et al., Minerals 14 (2024), abstract"},
 	}
 	checkSourceRows(t, d, naturalFile, rows)
 }
