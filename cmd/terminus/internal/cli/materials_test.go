@@ -329,7 +329,7 @@ func TestMaterialsOverlay(t *testing.T) {
     class: pigment
     origin: synthetic
     milestones:
-      - {kind: made, date: "1706", source: artists-pigments-3, basis: from-memory}
+      - {kind: made, date: "1706", source: artists-pigments-1, basis: from-memory}
 `)
 	code, out, errw := runTerminus(t, "materials", "show", "--materials", user, "my own prussian blue")
 	if code != 0 {
