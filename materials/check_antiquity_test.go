@@ -323,6 +323,13 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"egyptian-blue", materials.KindAttested, "EG", "-0588/-0569", "Palace of Apries 2019, abstract"},
 		// Vázquez de Ágredos-Pascual et al., Microchemical Journal 150 (2019): oldest Maya blue, Chupícuaro culture.
 		{"maya-blue", materials.KindMade, "", "../0250", "Vázquez de Ágredos-Pascual et al. 2019"},
+		// Second round, arrivals:
+		// Sepulveda et al., Heritage Science 2021, abstract: indigo in Tarapaca-40 and Pica-8 textiles, northern Chile.
+		{"natural-indigo", materials.KindArrived, "CL", "-1099/1450", "Sepulveda et al. 2021, abstract"},
+		// Erquicia Cruz 2013 (XXVI Simposio, Guatemala), abstract: indigo the chief export of San Salvador from the 17th century.
+		{"natural-indigo", materials.KindArrived, "SV", "../1699", "Erquicia Cruz 2013, abstract"},
+		// Norgeshistorie.no, Fargeeksplosjonen pa 1700-tallet: Mexican cochineal through the Christiania customs in 1794.
+		{"american-cochineal", materials.KindArrived, "NO", "1530/1794", "Norgeshistorie.no, Fargeeksplosjonen"},
 	}
 	checkSourceRows(t, d, antiquityFile, rows)
 }

@@ -304,6 +304,35 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"fuchsine", materials.KindArrived, "KR", "1870/1899", "Tamburini et al. 2023, abstract"},
 		// MAAS Sydney, record 85/1765, after Fletcher, Costume in Australia: aniline purples and fuchsias the rage in the 1860s.
 		{"fuchsine", materials.KindArrived, "AU", "186X", "MAAS 85/1765, statement of significance"},
+		// Second round, arrivals:
+		// Tamburini, Klink-Hoppe and McCarthy, J. Cult. Herit. 66 (2024), abstract: dyes of 19th-century Central Asian ikats.
+		{"ponceau-2r", materials.KindArrived, "143", "../1900", "Tamburini et al. 2024, JCH ikats, abstract"},
+		{"rose-bengal", materials.KindArrived, "143", "../1900", "Tamburini et al. 2024, JCH ikats, abstract"},
+		{"eosin-y", materials.KindArrived, "143", "../1900", "Tamburini et al. 2024, JCH ikats, abstract"},
+		{"erythrosine", materials.KindArrived, "143", "../1900", "Tamburini et al. 2024, JCH ikats, abstract"},
+		{"brilliant-green", materials.KindArrived, "143", "../1900", "Tamburini et al. 2024, JCH ikats, abstract"},
+		// Do et al., Fibers and Polymers 2024, abstract: synthetic dyes in Indonesian silks of the 19th-20th centuries.
+		{"congo-red", materials.KindArrived, "ID", "../1999", "Do et al. 2024, Indonesian silks, abstract"},
+		{"orange-i", materials.KindArrived, "ID", "../1999", "Do et al. 2024, Indonesian silks, abstract"},
+		{"malachite-green", materials.KindArrived, "ID", "../1999", "Do et al. 2024, Indonesian silks, abstract"},
+		// Handbook of coal-tar colours (sachsen.digital 420735), p. 264: eosin in trade from 1874, found by Caro of BASF.
+		{"eosin-y", materials.KindArrived, "DE", "1874", "sachsen.digital 420735, p. 264"},
+		// "Congo Red: Out of Africa?", APLM 125 (2001), abstract: introduced in Berlin by AGFA in 1885.
+		{"congo-red", materials.KindArrived, "DE", "1885", "APLM 2001, Congo red, abstract"},
+		// Societe chimique de France, "La decouverte de la fuchsine", summary: the Renard brothers' patent of 1859.
+		{"fuchsine", materials.KindArrived, "FR", "1859", "SCF, La decouverte de la fuchsine"},
+		// KIK-IRPA glossary, bleu d'aniline: Renard brothers bought the rights soon after the 1861 patent.
+		{"aniline-blue", materials.KindArrived, "FR", "1861~", "KIK-IRPA glossary, bleu d'aniline"},
+		// Garfield, Mauve, sale of the Greenford works: alizarin output for 1874 already contracted in 1873.
+		{"synthetic-alizarin", materials.KindArrived, "GB", "../1873", "Garfield, Mauve, sale of the works"},
+		// Schmidt 1997, abstract: first Indigo Pure BASF made and marketed in July 1897.
+		{"synthetic-indigo", materials.KindArrived, "DE", "1897-07", "Schmidt 1997, abstract"},
+		// KIK-IRPA glossary, violet d'aniline: Perkin's Greenford Green works opened in 1857.
+		{"mauveine", materials.KindArrived, "GB", "1857", "KIK-IRPA glossary, violet d'aniline"},
+		// Revue des Deux Mondes 1874, t. 4, p. 910: Poirrier's violet de Paris has displaced Hofmann's violet.
+		{"methyl-violet", materials.KindArrived, "FR", "../1874", "Revue des Deux Mondes 1874, t. 4, p. 910"},
+		// Meldola 1891, passage on the phthaleins: rhodamines introduced by the Baden Aniline Company.
+		{"rhodamine-b", materials.KindArrived, "DE", "../1891", "Meldola 1891, phthaleins"},
 	}
 	checkSourceRows(t, d, dyesFile, rows)
 }

@@ -262,6 +262,14 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Journal of Raman Spectroscopy 1999, abstract: chrome orange and baryte on Javanese and Thai manuscripts.
 		{"chrome-orange", materials.KindArrived, "035", "1809/1999", "J. Raman Spectrosc. 1999, Asian manuscripts"},
 		{"barytes", materials.KindArrived, "035", "1782/1999", "J. Raman Spectrosc. 1999, Asian manuscripts"},
+		// Second round, arrivals:
+		// Nandadeva 1998 (PhD thesis, Delaware), abstract: Sri Lankan temple murals, mid-18th to late 19th century.
+		{"prussian-blue", materials.KindArrived, "LK", "../1899", "Nandadeva 1998, abstract"},
+		{"lithopone", materials.KindArrived, "LK", "../1899", "Nandadeva 1998, abstract"},
+		// Gajic-Kvascev et al., Coatings 13 (2023) 1200, abstract and section 1: Serbian icons of 1700-1750.
+		{"prussian-blue", materials.KindArrived, "RS", "../1750", "Gajic-Kvascev et al. 2023, abstract"},
+		// Petroviciu et al., Heritage Science 2019, abstract: Transylvanian textiles acquired about 1905.
+		{"prussian-blue", materials.KindArrived, "RO", "../1905", "Petroviciu et al. 2019, abstract"},
 	}
 	checkSourceRows(t, d, inorganicFile, rows)
 }

@@ -246,6 +246,29 @@ func TestModernAgainstSources(t *testing.T) {
 		{"pcb-carbonless-copy-paper", materials.KindWithdrawn, "US", "1971~", "Reference chapter, PCBs and associated aromatics"},
 		// Wikipedia, "Film stock": the industry on safety film internationally by 1955.
 		{"cellulose-nitrate-film-base", materials.KindWithdrawn, "", "1955", "Wikipedia, Film stock"},
+		// Second round, arrivals:
+		// Verla Mill Museum, groundwood industry in Finland (timeline): first groundwood mills.
+		{"groundwood-paper", materials.KindArrived, "FI", "1859", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "SE", "1857", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "DK", "1857", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "RU", "1858", "Verla Mill Museum, timeline"},
+		// Finnish Heritage Agency wiki, Paperitehdas: first paper machine in Finland, Frenckell's mill, 1842.
+		{"fourdrinier-machine-paper", materials.KindArrived, "FI", "../1842", "Finnish Heritage Agency, Paperitehdas"},
+		// Te Ara, Pulp and paper, page 1: first commercial paper mills, Dunedin and Mataura, 1876.
+		{"fourdrinier-machine-paper", materials.KindArrived, "NZ", "../1876", "Te Ara, Pulp and paper, page 1"},
+		// Greening 1952, Paper Makers in Canada: the Fourdrinier machine came to Canada in the 1830s.
+		{"fourdrinier-machine-paper", materials.KindArrived, "CA", "../1839", "Greening 1952, origin of the union"},
+		// Wikipedia, British Titan Products, lead: titanium dioxide imported from Germany until 1934.
+		{"titanium-white-anatase", materials.KindArrived, "DE", "../1934", "Wikipedia, British Titan Products"},
+		// Morris and Travis 1992, American Dyestuff Reporter: IG Farben introduced Heliogen Blue B in 1934.
+		{"phthalocyanine-blue", materials.KindArrived, "DE", "1934", "Morris and Travis 1992"},
+		// Tamburini et al., Heritage Science 2023, abstract: Pigment Red 53:1 in the later Karen garments.
+		{"red-lake-c", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments, abstract"},
+		// Science Museum Group, object 1977-296/1: Sign Pen made in Japan 1962; in Britain from 1967.
+		{"fibre-tip-pen-ink", materials.KindArrived, "JP", "1962", "Science Museum Group 1977-296/1"},
+		{"fibre-tip-pen-ink", materials.KindArrived, "GB", "1967", "Science Museum Group 1977-296/1"},
+		// Museum of Writing, item 8997: the Miles Martin Biro of 1945.
+		{"ballpoint-paste-ink", materials.KindArrived, "GB", "1945", "Museum of Writing, item 8997"},
 	}
 	checkSourceRows(t, d, modernFile, rows)
 }
