@@ -30,6 +30,10 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		if n == 0 {
 			return i, p.failHint(j, "expected a year of four digits", "write 1874, 0079, -1199 (1200 BCE), 187X or c. 1870")
 		}
+		if j >= 5 && s[j-1] == '/' && allDigits(s[j-5:j-1]) {
+			return i, p.failHint(j, "expected a year of four digits after the \"/\"",
+				"write the second year in full: "+s[j-5:j]+s[j-5:j-1-n]+s[j:i])
+		}
 		return i, p.failHint(j, "expected a year of four digits",
 			"EDTF years have four digits: write "+strings.Repeat("0", 4-n)+s[j:i]+" or AD "+s[j:i]+" (and 1200 BCE for years before the era)")
 	}

@@ -45,10 +45,47 @@ func (m member) interval() Interval {
 }
 
 type parser struct {
-	in   string
-	cal  Calendar
-	era2 int        // an era that a bare year takes from the other end of a range
-	ivs  []Interval // room for the alternatives of a single member
+	in     string
+	cal    Calendar
+	marked bool      // the text ends with a calendar marker
+	ys     YearStart // the year start of documentary dates, when known
+	within []Interval
+	era2   int        // an era that a bare year takes from the other end of a range
+	unit2  int64      // a unit (100 or 1000 years) a bare ordinal takes from the other end of a range
+	ivs    []Interval // room for the alternatives of a single member
+	notes  []string
+
+	// Ambiguous texts are read once for each combination of the readings
+	// of their ambiguous parts (see choose).
+	nsite int
+	sites [maxSites]uint8 // how many readings each ambiguous part has
+	pick  [maxSites]uint8 // the reading taken of each in this pass
+}
+
+// maxSites bounds the ambiguous parts of one text, and maxPasses the
+// combinations of their readings.
+const (
+	maxSites  = 6
+	maxPasses = 32
+)
+
+// choose registers an ambiguous part with n readings and returns the one
+// to take in this pass.
+func (p *parser) choose(n int) int {
+	k := p.nsite
+	if k >= maxSites {
+		return 0
+	}
+	p.nsite++
+	p.sites[k] = uint8(n)
+	return int(p.pick[k])
+}
+
+// note adds a sentence to the date's notes, once.
+func (p *parser) note(s string) {
+	if !slices.Contains(p.notes, s) {
+		p.notes = append(p.notes, s)
+	}
 }
 
 // one returns a single member in one allocation that also holds room for
@@ -73,13 +110,17 @@ func (p *parser) failHint(pos int, msg, hint string) *ParseError {
 // Parse reads a date written in EDTF or in one of the friendly forms (see
 // the package documentation) on the proleptic Gregorian calendar, unless the
 // text ends with a Julian marker. Every error is a *[ParseError].
-func Parse(s string) (Date, error) { return ParseIn(s, CalendarGregorian) }
+func Parse(s string) (Date, error) { return ParseWith(s, Options{}) }
 
 // ParseIn is [Parse] with the calendar that unmarked dates are read in. A
 // marker at the end of the text ("(Julian)", "O.S.", "(Gregorian)", "N.S.")
 // overrides cal.
-func ParseIn(s string, cal Calendar) (Date, error) {
-	p := parser{in: s, cal: cal}
+func ParseIn(s string, cal Calendar) (Date, error) { return ParseWith(s, Options{Calendar: cal}) }
+
+// parse reads p.in in one pass, with the readings p.pick of its ambiguous
+// parts.
+func (p *parser) parse() (Date, error) {
+	s := p.in
 	if len(s) > maxInput {
 		return Date{}, p.fail(maxInput, "text too long for a date (more than 1024 bytes)")
 	}
@@ -134,7 +175,7 @@ func (p *parser) calendarMarker(lo, hi int) int {
 	}{{CalendarJulian, julianMarkers}, {CalendarGregorian, gregorianMarkers}} {
 		for _, w := range set.words {
 			if endsFold(p.in, lo, hi, w) && hi-len(w) > lo && isSpace(p.in[hi-len(w)-1]) {
-				p.cal = set.cal
+				p.cal, p.marked = set.cal, true
 				_, h := p.trim(lo, hi-len(w))
 				return h
 			}
@@ -160,7 +201,7 @@ func (p *parser) top(lo, hi int) ([]member, bool, error) {
 			return ms, false, err
 		}
 	}
-	if k := strings.IndexByte(s[lo:hi], '/'); k >= 0 {
+	if k := strings.IndexByte(s[lo:hi], '/'); k >= 0 && !p.dualAt(lo, hi, lo+k) {
 		m, err := p.interval(lo, lo+k, hi)
 		return p.one(m), false, err
 	}
@@ -308,6 +349,7 @@ func (p *parser) finish(ms []member, oneOf bool) Date {
 	}
 	d.Alternatives = alternatives(ms, nil, p.ivs)
 	d.edtf = p.canonical(ms, oneOf)
+	d.notes = p.notes
 	return d
 }
 

@@ -34,7 +34,27 @@ type point struct {
 	approx, uncert bool
 
 	first, last Day
+
+	x *pointExtra // nil for a plain EDTF or friendly Western date
 }
+
+// pointExtra is what the dates of other calendars and the documentary
+// forms add to a point.
+type pointExtra struct {
+	cal   Calendar // the calendar the text was read in
+	label string   // the date for people, as read ("Meiji 14, 5th month")
+	fixed bool     // first and last were set by the calendar, not by span
+	whole string   // for the start of a friendly range: the range for people ("18th century")
+}
+
+// fixedPoint is a point whose days a calendar has set: it is written in
+// EDTF as its Gregorian days.
+func fixedPoint(cal Calendar, label string, first, last Day, prec Precision) point {
+	return point{first: first, last: last, prec: prec, x: &pointExtra{cal: cal, label: label, fixed: true}}
+}
+
+// isFixed reports whether pt's days were set by a calendar.
+func (pt *point) isFixed() bool { return pt.x != nil && pt.x.fixed }
 
 // pointish reads one date with the friendly forms: a circa word, "early",
 // "mid", "late", "1870s", era names (BCE, AD), and the EDTF date itself.
@@ -103,6 +123,11 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 	if lo == hi {
 		return member{}, p.fail(lo, "expected a date before the qualifier")
 	}
+	if p.unit2 != 0 || p.hasLetter(lo, hi) {
+		if m, ok, err := p.century(lo, hi, frac, approx, uncert); ok {
+			return m, err
+		}
+	}
 	var pt point
 	pt.cal = p.cal
 	era, eraLo, eraHi := 0, 0, 0
@@ -113,6 +138,10 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		era, eraLo, eraHi = p.era2, hi, hi
 	}
 	switch {
+	case isDualYear(s, lo, hi) && p.dualAt(lo, hi, lo+4):
+		if err := p.bareDualYear(lo, hi, &pt); err != nil {
+			return member{}, err
+		}
 	case era != 0:
 		if era == eraAD && eraLo == lo {
 			lo = eraHi
@@ -162,7 +191,7 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		// part came to the same as a whole-date qualifier.
 		pt.approx, pt.uncert = pt.approx || approx, pt.uncert || uncert
 	}
-	if pt.cal == CalendarJulian {
+	if pt.cal == CalendarJulian && !pt.isFixed() {
 		if pt.scattered {
 			return member{}, p.fail(lo, "scattered unspecified digits are read on the Gregorian calendar only")
 		}
