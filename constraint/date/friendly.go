@@ -482,3 +482,22 @@ func (p *parser) rangeUnit(lo, hi int) int64 {
 	}
 	return 0
 }
+
+// hasMonthName reports whether a word of s[lo:hi] is an English month name.
+func (p *parser) hasMonthName(lo, hi int) bool {
+	s := p.in
+	for i := lo; i < hi; {
+		for i < hi && (isSpace(s[i]) || s[i] == ',') {
+			i++
+		}
+		j := i
+		for j < hi && !isSpace(s[j]) && s[j] != ',' {
+			j++
+		}
+		if j > i && monthByName(s[i:j]) > 0 {
+			return true
+		}
+		i = j
+	}
+	return false
+}

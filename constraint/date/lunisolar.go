@@ -202,7 +202,7 @@ func (c *lsCalc) year(y int64, sh lsShift) []lsMonth {
 	pa := lsProfileOf(c.cal, y)
 	ma, _ := c.sui(y).months(pa.hours, sh)
 	pb := lsProfileOf(c.cal, y+1)
-	mb, _ := c.sui(y + 1).months(pb.hours, sh)
+	mb, _ := c.sui(y+1).months(pb.hours, sh)
 	var out []lsMonth
 	started := false
 	for _, m := range ma {
@@ -245,6 +245,8 @@ func (c *lsCalc) shifts(y int64) []lsShift {
 // uncertainty.
 type lsSpan struct {
 	first, last   Day  // the union
+	lateFirst     Day  // the latest first day of any reading
+	earlyLast     Day  // the earliest last day of any reading
 	nFirst, nLast Day  // the nominal days, when nominal
 	nominal       bool // it exists in the nominal computation
 	found         bool // it exists in some reading
@@ -266,6 +268,12 @@ func (c *lsCalc) month(y int64, num int, leap bool) lsSpan {
 			}
 			if !sp.found || m.last > sp.last {
 				sp.last = m.last
+			}
+			if !sp.found || m.first > sp.lateFirst {
+				sp.lateFirst = m.first
+			}
+			if !sp.found || m.last < sp.earlyLast {
+				sp.earlyLast = m.last
 			}
 			sp.found = true
 		}

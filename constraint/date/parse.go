@@ -134,6 +134,16 @@ func (p *parser) parse() (Date, error) {
 		return Date{}, p.fail(lo, "expected a date before the calendar marker")
 	}
 	ms, oneOf, err := p.top(lo, hi)
+	if err != nil && (p.hasLetter(lo, hi) || hasNonASCII(s, lo, hi)) {
+		// a cyclical year with its range reads as a whole text
+		notes, nsite := p.notes, p.nsite
+		p.notes, p.nsite = nil, 0
+		if cms, ok, cerr := p.cyclical(lo, hi); ok {
+			ms, oneOf, err = cms, true, cerr
+		} else {
+			p.notes, p.nsite = notes, nsite
+		}
+	}
 	if err != nil {
 		return Date{}, err
 	}

@@ -156,6 +156,26 @@ func (p *parser) pointish(lo, hi int) (member, error) {
 		if err := p.plural(lo, hi, &pt); err != nil {
 			return member{}, err
 		}
+	case (p.hasLetter(lo, hi) || hasNonASCII(s, lo, hi)) && !p.hasMonthName(lo, hi):
+		m, ok, err := p.otherCalendar(lo, hi)
+		if err != nil {
+			return member{}, err
+		}
+		if ok {
+			if a, b := m.start.first.Year(), m.end.last.Year(); a < -9999 || b > 9999 || m.kind&openEnd == 0 && m.end.first > m.end.last {
+				return member{}, p.fail(lo, "dates of other calendars are read for the Gregorian years -9999 to 9999")
+			}
+			if frac != 0 {
+				return member{}, p.failHint(lo, "early, mid and late apply to a decade or a century", "write early 1870s or late 18th century")
+			}
+			for _, e := range []*point{&m.start, &m.end} {
+				e.approx, e.uncert = e.approx || approx, e.uncert || uncert
+			}
+			return m, nil
+		}
+		if err := p.named(lo, hi, &pt); err != nil {
+			return member{}, err
+		}
 	case p.hasLetter(lo, hi):
 		if err := p.named(lo, hi, &pt); err != nil {
 			return member{}, err
