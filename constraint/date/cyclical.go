@@ -41,7 +41,7 @@ var elementNames = [5]string{"wood", "fire", "earth", "metal", "water"}
 func branchOf(w string) int {
 	for i, names := range branchNames {
 		for _, n := range names {
-			if w == n && len(n) > 2 && !isPinyinBranch(n) {
+			if w == foldLatin(n) && len(n) > 2 && !isPinyinBranch(n) {
 				return i
 			}
 		}
@@ -66,13 +66,13 @@ func isPinyinBranch(n string) bool {
 func pairOf(w string) int {
 	for si, stems := range [2][10]string{stemPinyin, stemJapanese} {
 		for s, st := range stems {
-			rest, ok := strings.CutPrefix(w, st)
+			rest, ok := strings.CutPrefix(w, foldLatin(st))
 			if !ok || rest == "" {
 				continue
 			}
 			for b, names := range branchNames {
 				for _, n := range names {
-					if rest != n || si == 0 && !isPinyinBranch(n) || si == 1 && len(n) > 2 && n != "ushi" && n != "tora" && n != "tatsu" && n != "uma" && n != "hitsuji" && n != "saru" && n != "tori" && n != "inu" && n != "ne" {
+					if rest != foldLatin(n) || si == 0 && !isPinyinBranch(n) || si == 1 && len(n) > 2 && n != "ushi" && n != "tora" && n != "tatsu" && n != "uma" && n != "hitsuji" && n != "saru" && n != "tori" && n != "inu" && n != "ne" {
 						continue
 					}
 					if s%2 != b%2 {

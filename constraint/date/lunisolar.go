@@ -75,7 +75,9 @@ func lsProfileOf(cal Calendar, y int64) lsProfile {
 			return lsProfile{seoul, true, 6 * hour, []float64{-1, 0, 1}, "Korea used mean solar terms until the Shixian calendar of 1653"}
 		case y < 1908:
 			return lsProfile{seoul, false, hour, []float64{-hour, 0, hour}, "Korea computed the calendar for Seoul with the Shixian methods"}
-		case y < 1912, y >= 1954 && y < 1961:
+		case y < 1912:
+			return lsProfile{8.5, false, hour, []float64{-hour, 0, hour}, "Korean standard time was UTC+8:30 (1908–1911; other reckonings of these years used UTC+8 or UTC+9)"}
+		case y >= 1954 && y < 1961:
 			return lsProfile{8.5, false, 15.0 / 1440, []float64{-15.0 / 1440, 0, 15.0 / 1440}, "Korean standard time was UTC+8:30"}
 		}
 		return lsProfile{9, false, 15.0 / 1440, []float64{-15.0 / 1440, 0, 15.0 / 1440}, "Korean standard time is UTC+9"}
@@ -84,7 +86,8 @@ func lsProfileOf(cal Calendar, y int64) lsProfile {
 	case y < 1645:
 		return lsProfile{116.4074 / 15, true, 6 * hour, []float64{-1, 0, 1}, "the Ming Datong calendar (to 1644) used mean solar terms and drifted from the sky"}
 	case y < 1929:
-		return lsProfile{116.4074 / 15, false, hour, []float64{-hour, 0, hour}, "the Qing calendar (1645–1928) used true solar terms at Beijing with its own solar and lunar theory"}
+		return lsProfile{116.4074 / 15, false, hour, []float64{-2 * hour, 0, 2 * hour},
+			"the Qing calendar (1645–1928) used true solar terms at Beijing with its own solar and lunar theory, whose solar terms may differ by an hour or two from the sky"}
 	}
 	return lsProfile{8, false, 10.0 / 1440, []float64{-10.0 / 1440, 0, 10.0 / 1440}, "the calendar since 1929 uses UTC+8"}
 }

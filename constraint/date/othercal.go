@@ -1,6 +1,10 @@
 package date
 
-import "strings"
+import (
+	"strings"
+
+	"terminus/materials/spell"
+)
 
 // The dates of the other calendars, as records write them: Hijri ("1300
 // AH", "AH 1300", "Muharram 1300", "15 Ramadan 1300 AH"), solar Hijri
@@ -20,6 +24,9 @@ func (p *parser) otherCalendar(lo, hi int) (member, bool, error) {
 	}
 	if pt, ok, err := p.calendarWords(lo, hi); ok {
 		return member{start: pt, end: pt}, true, err
+	}
+	if hint := p.nearestEra(lo, hi); hint != "" {
+		return member{}, true, p.failHint(lo, "unknown era "+p.wordAt(lo, hi), hint)
 	}
 	if p.isCyclical(lo, hi) {
 		return member{}, true, p.failHint(lo, "a zodiac or sexagenary year repeats every 12 or 60 years: it is read alone, with a range",
@@ -557,4 +564,30 @@ func (p *parser) cjkYear(lo, hi int) (point, bool, error) {
 	}
 	pt, err := p.rocPoint(y, m, d, before, lo)
 	return pt, true, err
+}
+
+// nearestEra suggests the era a misspelt "Name 14" may mean, or "".
+func (p *parser) nearestEra(lo, hi int) string {
+	w := p.wordAt(lo, hi)
+	if len(w) < 3 || !isLetter(w[0]) || lo+len(w) >= hi {
+		return ""
+	}
+	rest := strings.TrimSpace(p.in[lo+len(w) : hi])
+	if rest == "" || !isDigit(rest[0]) {
+		return ""
+	}
+	key := foldLatin(w)
+	best, bestD := "", 3
+	for k, refs := range eraIndex {
+		if hasNonASCII(k, 0, len(k)) {
+			continue
+		}
+		if d := spell.Distance(key, k); d < bestD || d == bestD && best != "" && refs[0].e.name < best {
+			best, bestD = refs[0].e.name, d
+		}
+	}
+	if best == "" || bestD > len(key)/3+1 {
+		return ""
+	}
+	return "did you mean " + best + "? (" + best + " " + rest + ")"
 }
