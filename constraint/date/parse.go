@@ -139,7 +139,7 @@ func (p *parser) parse() (Date, error) {
 		notes, nsite := p.notes, p.nsite
 		p.notes, p.nsite = nil, 0
 		if cms, ok, cerr := p.cyclical(lo, hi); ok {
-			ms, oneOf, err = cms, true, cerr
+			ms, oneOf, err = cms, len(cms) > 1, cerr
 		} else {
 			p.notes, p.nsite = notes, nsite
 		}
