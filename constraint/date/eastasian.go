@@ -9,8 +9,8 @@ import (
 // "安政四年閏五月", "元年" for the first year, "Qianlong 12", "乾隆十二年",
 // a reign alone ("Qianlong", "Qianlong period", "大清乾隆年製").
 
-// eraRef is an era of one of the tables, with the index of the next era of
-// its table (-1 for the last).
+// eraRef is an era of one of the tables, with the next era of its table
+// (nil for the last) and the table's calendar.
 type eraRef struct {
 	e    *era
 	next *era
@@ -71,11 +71,10 @@ func (r eraRef) span() string {
 	return itoa(int(r.e.start)) + " on"
 }
 
-// eraDate is an era date as read: the era, the year (0 for the era alone),
-// the month (0 for none), intercalary, the day (0 for none, -1 for the last
-// day of the month).
+// eraDate is an era date as read (its era beside it): the year (0 for the
+// era alone), the month (0 for none), intercalary, the day (0 for none, -1
+// for the last day of the month).
 type eraDate struct {
-	ref        eraRef
 	year       int
 	month, day int
 	leap       bool

@@ -2,7 +2,6 @@ package date
 
 import (
 	"bufio"
-	"fmt"
 	"math/rand/v2"
 	"os"
 	"os/exec"
@@ -65,6 +64,9 @@ type icuRow struct {
 
 func runICU(t *testing.T, queries []string) []icuRow {
 	t.Helper()
+	if testing.Short() {
+		t.Skip("-short: the ICU calendar oracle runs in the full test pass")
+	}
 	node, err := exec.LookPath("node")
 	if err != nil {
 		t.Skip("node is not on the PATH: the ICU calendar oracle was not run (install nodejs to run it)")
@@ -284,5 +286,3 @@ func TestJapaneseAgainstICU(t *testing.T) {
 	}
 	t.Logf("compared %d Japanese era dates with ICU", compared)
 }
-
-var _ = fmt.Sprint
