@@ -168,20 +168,21 @@ func solarLongitude(jd float64) float64 {
 }
 
 // solarLongitudeAfter returns the first moment (UT) at or after jd when the
-// sun's longitude is lam degrees.
+// sun's longitude is lam degrees: a first guess at the mean rate, then
+// Newton's steps at that rate (the true rate differs from it by 3.4 % at
+// most, so that each step gains a factor of about 30), to a millionth of
+// a degree (a tenth of a second).
 func solarLongitudeAfter(lam, jd float64) float64 {
 	rate := meanTropicalYear / 360
 	tau := jd + rate*math.Mod(math.Mod(lam-solarLongitude(jd), 360)+360, 360)
-	a, b := math.Max(jd, tau-5), tau+5
-	for b-a > 1e-6 {
-		mid := (a + b) / 2
-		if math.Mod(solarLongitude(mid)-lam+360, 360) < 180 {
-			b = mid
-		} else {
-			a = mid
+	for range 12 {
+		d := math.Mod(math.Mod(lam-solarLongitude(tau)+180, 360)+360, 360) - 180
+		tau += d * rate
+		if math.Abs(d) < 1e-6 {
+			break
 		}
 	}
-	return (a + b) / 2
+	return tau
 }
 
 // localDay is the calendar day holding the moment jd (UT) at a place or
