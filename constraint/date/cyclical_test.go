@@ -61,3 +61,24 @@ func TestAmbiguousEra(t *testing.T) {
 		t.Errorf("正德三年 in a Japanese case = %v, %v", daysOf(jp), err)
 	}
 }
+
+// A Joseon reign year is one of two lunisolar years (the annals count from
+// the year after the accession; Yeongjo acceded in 1724, as the list of
+// Joseon monarchs gives).
+func TestKoreanReignYears(t *testing.T) {
+	d, err := Parse("Yeongjo 12")
+	if err != nil {
+		t.Fatal(err)
+	}
+	if len(d.members) != 2 || !strings.Contains(d.String(), "the lunisolar year 1735") || !strings.Contains(d.String(), "the lunisolar year 1736") {
+		t.Errorf("Yeongjo 12 = %s, want one of the lunisolar years 1735 and 1736", d)
+	}
+	for _, s := range []string{"英祖十二年", "영조 12년", "King Yeongjo 12"} {
+		if o, err := Parse(s); err != nil || o.EDTF() != d.EDTF() {
+			t.Errorf("%s = %v, %v; want the same days as Yeongjo 12 (%s)", s, o.EDTF(), err, d.EDTF())
+		}
+	}
+	if _, err := Parse("Sejong 40"); err == nil || !strings.Contains(err.Error(), "Sejong has years 1 to 33 (1418–1450)") {
+		t.Errorf("Sejong 40: %v, want the reign's span", err)
+	}
+}

@@ -34,7 +34,7 @@ func buildEraIndex() map[string][]eraRef {
 	for _, t := range []struct {
 		eras []era
 		cal  Calendar
-	}{{japaneseEras, CalendarJapanese}, {chineseEras, CalendarChinese}, {koreanEras, CalendarKorean}} {
+	}{{japaneseEras, CalendarJapanese}, {chineseEras, CalendarChinese}, {koreanEras, CalendarKorean}, {koreanKings, CalendarKorean}} {
 		for i := range t.eras {
 			e := &t.eras[i]
 			r := eraRef{e: e, cal: t.cal}
@@ -126,6 +126,9 @@ func (p *parser) eraRoman(lo, hi int) (eraDate, []eraRef, bool, error) {
 	if refs == nil {
 		refs, n = eraIndex[foldLatin(w(0))], 1
 	}
+	if refs == nil && len(ws) >= 2 && (strings.EqualFold(w(0), "king") || strings.EqualFold(w(0), "emperor")) {
+		refs, n = eraIndex[foldLatin(w(1))], 2
+	}
 	if refs == nil {
 		return eraDate{}, nil, false, nil
 	}
@@ -152,7 +155,8 @@ func (p *parser) eraRoman(lo, hi int) (eraDate, []eraRef, bool, error) {
 			k++
 		}
 	default:
-		// "14" or "14.5.3"
+		// "14" or "14.5.3" (a Korean "12년" too)
+		y = strings.TrimSuffix(strings.TrimSuffix(y, "년"), "年")
 		parts := strings.Split(y, ".")
 		if len(parts) > 3 {
 			return d, refs, true, p.failHint(rest[0][0], "expected the year, month and day of the era as 14.5.3", "write Meiji 14.5.3")

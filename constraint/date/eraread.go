@@ -116,6 +116,14 @@ func (p *parser) readEra(d eraDate, refs []eraRef, lo int) (member, error) {
 	}
 	y := e.start + int64(d.year) - 1
 	what := e.name + " " + itoa(d.year)
+	if e.reign {
+		// the year of accession as the first year, or the next
+		if p.choose(2) == 1 {
+			y++
+		}
+		p.note(what + ": a Joseon reign year is counted from the year after the accession in the annals and from the accession year in other records; read as one of the two years (" +
+			itoa(int(e.start)+d.year-1) + " or " + itoa(int(e.start)+d.year) + "), on the Korean lunisolar calendar")
+	}
 	label := what
 	if d.month != 0 {
 		label += ", " + lunarMonthText(d.month, d.leap)
@@ -126,6 +134,9 @@ func (p *parser) readEra(d eraDate, refs []eraRef, lo int) (member, error) {
 		label += ", " + ordinalText(d.day) + " day"
 	}
 	label += " (" + e.kanji + ")"
+	if e.reign {
+		label += ", the lunisolar year " + itoa(int(y))
+	}
 	if e.note != "" {
 		p.note(e.name + ": " + e.note)
 	}
@@ -138,7 +149,7 @@ func (p *parser) readEra(d eraDate, refs []eraRef, lo int) (member, error) {
 	}
 	var first, last Day
 	switch {
-	case cal == CalendarKorean || cal == CalendarJapanese && (y > 1873 || y == 1873):
+	case cal == CalendarKorean && (!e.reign || y >= 1896) || cal == CalendarJapanese && y >= 1873:
 		if d.leap {
 			return member{}, p.fail(d.pos, what+" is on the Gregorian calendar: it has no intercalary month")
 		}
@@ -168,9 +179,12 @@ func (p *parser) readEra(d eraDate, refs []eraRef, lo int) (member, error) {
 		return member{start: pt, end: pt}, nil
 	}
 	c := newLSCalc(cal)
-	if cal == CalendarJapanese {
+	switch cal {
+	case CalendarJapanese:
 		p.note("Japanese months before 1873 are lunisolar: computed here for the meridian of Kyoto; " + lsProfileOf(cal, y).why)
-	} else {
+	case CalendarKorean:
+		p.note("Korean months before 1896 are lunisolar: computed here for the meridian of Seoul; " + lsProfileOf(cal, y).why)
+	default:
 		p.note("Chinese months are lunisolar: computed here for the meridian of Beijing; " + lsProfileOf(cal, y).why)
 	}
 	f, l, widened, err := p.lsRead(c, y, d.month, d.leap, d.day, what, d.pos)

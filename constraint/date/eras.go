@@ -23,11 +23,12 @@ package date
 type era struct {
 	name    string   // romanised, with macrons
 	kanji   string   // as written (Japanese shinjitai, Chinese traditional)
-	aliases []string // other spellings, normalised by eraKey
+	aliases []string // other spellings, folded by foldLatin or kanjiFold
 	start   int64    // the Gregorian year of the lunisolar year 1
 	last    int      // the last year number; 0 for the current era
 	from    [3]int   // from Meiji on: the first day of the era (Gregorian year, month, day)
 	note    string
+	reign   bool // a Joseon king's reign, counted in two ways: see koreanKings
 }
 
 var japaneseEras = []era{
@@ -115,4 +116,41 @@ var koreanEras = []era{
 	{name: "Geonyang", kanji: "建陽", aliases: []string{"konyang"}, start: 1896, last: 2},
 	{name: "Gwangmu", kanji: "光武", aliases: []string{"kwangmu"}, start: 1897, last: 11},
 	{name: "Yunghui", kanji: "隆熙", aliases: []string{"yunghui", "yungheui"}, start: 1907, last: 4},
+}
+
+// koreanKings are the kings of Joseon, by temple name, with the Gregorian
+// year of their accession and of the end of their reign (the list of
+// Joseon monarchs, as in Wikipedia's "List of Joseon monarchs"). The
+// annals count a reign from the year after the accession (the accession
+// year is "the year of accession", 即位年), but other records count the
+// accession year as the first; "Yeongjo 12" is read as one of the two
+// lunisolar years, on the Korean calendar, and the notes say so.
+var koreanKings = []era{
+	{name: "Taejo", kanji: "太祖", aliases: []string{"태조", "t'aejo"}, start: 1392, last: 7, reign: true},
+	{name: "Jeongjong", kanji: "定宗", aliases: []string{"정종", "chongjong"}, start: 1398, last: 3, reign: true},
+	{name: "Taejong", kanji: "太宗", aliases: []string{"태종", "t'aejong"}, start: 1400, last: 19, reign: true},
+	{name: "Sejong", kanji: "世宗", aliases: []string{"세종"}, start: 1418, last: 33, reign: true},
+	{name: "Munjong", kanji: "文宗", aliases: []string{"문종"}, start: 1450, last: 3, reign: true},
+	{name: "Danjong", kanji: "端宗", aliases: []string{"단종", "tanjong"}, start: 1452, last: 4, reign: true},
+	{name: "Sejo", kanji: "世祖", aliases: []string{"세조"}, start: 1455, last: 14, reign: true},
+	{name: "Yejong", kanji: "睿宗", aliases: []string{"예종"}, start: 1468, last: 2, reign: true},
+	{name: "Seongjong", kanji: "成宗", aliases: []string{"성종", "songjong"}, start: 1469, last: 26, reign: true},
+	{name: "Yeonsangun", kanji: "燕山君", aliases: []string{"연산군", "yonsangun"}, start: 1494, last: 13, reign: true},
+	{name: "Jungjong", kanji: "中宗", aliases: []string{"중종", "chungjong"}, start: 1506, last: 39, reign: true},
+	{name: "Injong", kanji: "仁宗", aliases: []string{"인종"}, start: 1544, last: 2, reign: true},
+	{name: "Myeongjong", kanji: "明宗", aliases: []string{"명종", "myongjong"}, start: 1545, last: 23, reign: true},
+	{name: "Seonjo", kanji: "宣祖", aliases: []string{"선조", "sonjo"}, start: 1567, last: 42, reign: true},
+	{name: "Gwanghaegun", kanji: "光海君", aliases: []string{"광해군", "kwanghaegun"}, start: 1608, last: 16, reign: true},
+	{name: "Injo", kanji: "仁祖", aliases: []string{"인조"}, start: 1623, last: 27, reign: true},
+	{name: "Hyojong", kanji: "孝宗", aliases: []string{"효종"}, start: 1649, last: 11, reign: true},
+	{name: "Hyeonjong", kanji: "顯宗", aliases: []string{"현종", "hyonjong", "顕宗"}, start: 1659, last: 16, reign: true},
+	{name: "Sukjong", kanji: "肅宗", aliases: []string{"숙종", "粛宗"}, start: 1674, last: 47, reign: true},
+	{name: "Gyeongjong", kanji: "景宗", aliases: []string{"경종", "kyongjong"}, start: 1720, last: 5, reign: true},
+	{name: "Yeongjo", kanji: "英祖", aliases: []string{"영조", "yongjo"}, start: 1724, last: 53, reign: true},
+	{name: "Jeongjo", kanji: "正祖", aliases: []string{"정조", "chongjo"}, start: 1776, last: 25, reign: true},
+	{name: "Sunjo", kanji: "純祖", aliases: []string{"순조"}, start: 1800, last: 35, reign: true},
+	{name: "Heonjong", kanji: "憲宗", aliases: []string{"헌종", "honjong"}, start: 1834, last: 16, reign: true},
+	{name: "Cheoljong", kanji: "哲宗", aliases: []string{"철종", "ch'oljong"}, start: 1849, last: 15, reign: true},
+	{name: "Gojong", kanji: "高宗", aliases: []string{"고종", "kojong"}, start: 1863, last: 45, reign: true},
+	{name: "Sunjong", kanji: "純宗", aliases: []string{"순종"}, start: 1907, last: 4, reign: true},
 }
