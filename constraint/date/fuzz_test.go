@@ -60,7 +60,8 @@ func FuzzParse(f *testing.F) {
 		"year of the horse in 1840/1880", "Horse 7 in 1840/1880", "gengzi in 1800/1999", "庚子 in 1800/1999",
 		"1300 AH", "AH 1300", "Muharram 1300", "15 Ramadan 1300 AH", "1300 SH", "1 Farvardin 1300 SH",
 		"5600 AM", "1 Tishri 5600", "Adar II 5783", "18 Brumaire an VIII", "an XX", "BE 2475", "民國20年",
-		"ROC 20", "c. Meiji 14", "before Meiji 14", "Kansei 3, 13th month", "Reiwa",
+		"ROC 20", "c. Meiji 14", "before Meiji 14", "Kansei 3, 13th month", "Reiwa", "Yeongjo 12", "영조 12년",
+		"英祖十二年", "Meji 14", "fire horse in 1900/2000", "巳七月 in 1850/1860 (Japanese)",
 	} {
 		f.Add(s)
 	}
