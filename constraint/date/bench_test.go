@@ -48,3 +48,20 @@ func BenchmarkMaxDays(b *testing.B) {
 		_ = u.MaxDays()
 	}
 }
+
+// BenchmarkParseCalendars reads the dates of other calendars: an arithmetic
+// calendar, a Gregorian-era date, a lunisolar month (two solstice years of
+// astronomy and the union over the period's margins), and a cyclical year
+// over forty years.
+func BenchmarkParseCalendars(b *testing.B) {
+	for _, s := range []string{"15 Ramadan 1300 AH", "Meiji 14.5.3", "Ansei 4, 7th month", "Horse 7 in 1840/1880"} {
+		b.Run(s, func(b *testing.B) {
+			b.ReportAllocs()
+			for b.Loop() {
+				if _, err := Parse(s); err != nil {
+					b.Fatal(err)
+				}
+			}
+		})
+	}
+}

@@ -34,16 +34,29 @@ type Calendar uint8
 
 // The calendars. Every result is a [Day], whatever the input calendar.
 const (
-	CalendarGregorian Calendar = iota // proleptic Gregorian, the default
-	CalendarJulian                    // the Julian calendar, for documents dated before the reform
+	CalendarGregorian        Calendar = iota // proleptic Gregorian, the default
+	CalendarJulian                           // the Julian calendar, for documents dated before the reform
+	CalendarJapanese                         // Japanese era years; lunisolar months before 1873
+	CalendarChinese                          // Chinese reign years, sexagenary years, lunisolar months
+	CalendarKorean                           // the Korean lunisolar calendar (sexagenary years, months)
+	CalendarIslamic                          // Hijri years and months (the arithmetic calendar, widened)
+	CalendarPersian                          // solar Hijri years and months
+	CalendarHebrew                           // Hebrew years (Anno Mundi) and months
+	CalendarFrenchRepublican                 // the French Republican calendar (years I to XIV and later)
+	CalendarBuddhist                         // Buddhist Era years (Thai reckoning)
+	CalendarROC                              // Republic of China (Minguo) years
+	CalendarEastAsian                        // a cyclical date whose calendar (Chinese or Japanese) is not said
 )
 
-// String returns "Gregorian" or "Julian".
+var calendarNames = [...]string{"Gregorian", "Julian", "Japanese", "Chinese", "Korean", "Islamic", "Persian",
+	"Hebrew", "French Republican", "Buddhist", "Republic of China", "Chinese or Japanese"}
+
+// String returns the name of c: "Gregorian", "Julian", "Japanese"…
 func (c Calendar) String() string {
-	if c == CalendarJulian {
-		return "Julian"
+	if int(c) < len(calendarNames) {
+		return calendarNames[c]
 	}
-	return "Gregorian"
+	return fmt.Sprintf("Calendar(%d)", uint8(c))
 }
 
 // Interval is a closed run of days. An open side (OpenStart, OpenEnd) is
@@ -74,6 +87,7 @@ type Date struct {
 
 	edtf    string
 	members []member
+	notes   []string
 	widened bool
 }
 
@@ -119,12 +133,20 @@ func (d Date) Calendar() Calendar {
 	if len(d.members) == 0 {
 		return CalendarGregorian
 	}
-	if m := d.members[0]; m.kind&(openStart|unknownStart) == 0 {
-		return m.start.cal
-	} else {
-		return m.end.cal
+	pt := d.members[0].start
+	if d.members[0].kind&(openStart|unknownStart) != 0 {
+		pt = d.members[0].end
 	}
+	if pt.x != nil {
+		return pt.x.cal
+	}
+	return pt.cal
 }
+
+// Notes says how d was read where the reading is not plain: the calendar
+// and its conventions, the alternatives of an ambiguous text, and every
+// widening with its reason. It is nil for plain EDTF.
+func (d Date) Notes() []string { return d.notes }
 
 // Widened reports whether d is the result of [Date.Widen].
 func (d Date) Widened() bool { return d.widened }

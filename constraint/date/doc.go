@@ -108,8 +108,13 @@
 // EDTF interval with "/" keeps its qualifiers per end ("c. 1870/1879" is
 // 1870~/1879).
 //
-// Centuries by name ("19th century") are not read: the words are used
-// for 1801–1900 and for 1800–1899 alike; write 1800s, 18XX or 1801/1900.
+// Centuries and millennia by name ("18th century", "18th c.", "3rd
+// century BCE", "5th millennium BCE") are read as the union of the strict
+// and the common count: the 18th century is 1700 to 1800, so that neither
+// 1701–1800 nor 1700–1799 is excluded. Their parts ("early", "mid",
+// "late", "first half of the", "second quarter of the") divide the hundred
+// years from the round year (early 18th century 1700–1733, late
+// 1766–1800). See century.go.
 //
 // "Early", "mid" and "late" are thirds of the decade or century that
 // overlap by one year at the seams, so a year at a seam belongs to both.
@@ -127,8 +132,21 @@
 // so, and "(Gregorian)" or "N.S." at the end then overrides it. A Julian
 // date becomes the Gregorian days it names, and its canonical EDTF writes
 // those days: "1582-10-04 (Julian)" is 1582-10-14, "1582 (Julian)" is
-// 1582-01-11/1583-01-10. The Julian year is taken to begin on 1 January
-// (documents that began the year on 25 March must be converted first).
+// 1582-01-11/1583-01-10. EDTF numbers years from 1 January; a date
+// written with a month name follows the year start of its documents
+// ([Options].YearStart): "10 Feb 1712/13" (a dual year) is 10 February 1713
+// Julian, and a Julian 1 January–24 March date without a dual year or a
+// year start is the one-of set of its two possible years.
+//
+// Other calendars are read as the records write them and converted to
+// Gregorian days: Japanese eras (with lunisolar months before 1873),
+// Chinese reigns of the Ming and Qing, zodiac and stem-branch years inside
+// a range, Hijri (widened by two days at each side), solar Hijri, Hebrew,
+// French Republican, Buddhist Era and Republic of China years.
+// [Date.Calendar] names the calendar read and [Date.Notes] says how the
+// text was read: its conventions, alternatives and widenings. The East
+// Asian months are computed from the astronomy of astro.go; see
+// lunisolar.go for the margins that widen them.
 // [Julian] and [Day.JulianCivil] convert single days; [JDFromGregorian],
 // [JDFromJulian] and [FromJD] work with fractional Julian Dates.
 //

@@ -51,7 +51,7 @@ func TestParseErrors(t *testing.T) {
 		{"1950S5", 5, "significant digits: 5 is not between 1 and the 4 digits", ""},
 		{"Smarch 1874", 0, "expected a month name or an EDTF date", ""},
 		{"187x", 0, "expected a month name or an EDTF date", "upper-case X: 187X"},
-		{"19th century", 0, "expected a month name or an EDTF date", "1800s"},
+		{"19th centry", 0, "expected a month name or an EDTF date", "19th century (read as 1800 to 1900"},
 		{"30 February 1874", 0, "day 30: February 1874 has 28 days", ""},
 		{"1874-05-21 (Julian", 11, "unexpected word", ""},
 		{"1234567890123 BCE", 0, "year out of range", ""},

@@ -107,7 +107,7 @@ const (
 // appendPoint writes pt in EDTF. A Julian date is written as the Gregorian
 // day or days it names: one day, or first and last joined by sep.
 func appendPoint(b []byte, pt point, role int, sep string) []byte {
-	if pt.cal == CalendarJulian {
+	if pt.cal == CalendarJulian || pt.isFixed() {
 		switch {
 		case role == roleStart || (role == roleSingle && pt.first == pt.last):
 			b = appendDay(b, pt.first)
@@ -248,6 +248,13 @@ func (pt point) people(b *strings.Builder) {
 	if pt.approx && !pt.partial {
 		b.WriteString("c. ")
 	}
+	if pt.x != nil && pt.x.label != "" {
+		b.WriteString(pt.x.label)
+		if pt.uncert {
+			b.WriteByte('?')
+		}
+		return
+	}
 	if pt.partial {
 		plain := pt
 		plain.partial, plain.approx, plain.uncert = false, false, false
@@ -346,6 +353,16 @@ func (pt point) people(b *strings.Builder) {
 func (m member) people(b *strings.Builder, inSet bool) {
 	if m.kind&ranged == 0 {
 		m.start.people(b)
+		return
+	}
+	if m.kind&friendly != 0 && m.start.x != nil && m.start.x.whole != "" {
+		if m.start.approx {
+			b.WriteString("c. ")
+		}
+		b.WriteString(m.start.x.whole)
+		if m.start.uncert {
+			b.WriteByte('?')
+		}
 		return
 	}
 	switch {

@@ -85,6 +85,13 @@ func indexFold(s, sub string) int {
 // in the calendar of like, keeping like's qualifiers: the year, month or
 // day just before or after a date.
 func (p *parser) pointAt(d Day, like point) point {
+	if like.isFixed() {
+		// a date of another calendar: the Gregorian day
+		y, m, dd := d.Civil()
+		pt := point{year: y, month: uint8(m), day: uint8(dd), approx: like.approx, uncert: like.uncert}
+		pt.span()
+		return pt
+	}
 	y, m, dd := civilIn(d, like.cal)
 	pt := point{year: y, cal: like.cal, approx: like.approx, uncert: like.uncert}
 	switch {
@@ -117,6 +124,14 @@ func (p *parser) rangeSplit(lo, hi int) (int, int, bool) {
 		}
 		if k := indexFold(s, " to "); k > 0 {
 			return lo + k, lo + k + len(" to "), true
+		}
+		// 18th-19th century: a hyphen after an ordinal, before a digit
+		for k := 3; k+1 < len(s); k++ {
+			if s[k] == '-' && isDigit(s[k+1]) && isLetter(s[k-1]) && isDigit(s[k-3]) {
+				if _, ok := ordinal(s[:k]); ok {
+					return lo + k, lo + k + 1, true
+				}
+			}
 		}
 	}
 	// 1870-1875 and 1870s-1880s: a year (or decade), a hyphen, four digits
@@ -166,8 +181,13 @@ func (p *parser) span(lo, a, b, hi int) (member, error) {
 			p.era2 = eraBCE
 		}
 	}
+	if u := p.rangeUnit(x, y); u != 0 {
+		if _, ok := ordinal(strings.TrimSpace(p.in[lo:a])); ok {
+			p.unit2 = u // "18th" in "18th–19th century"
+		}
+	}
 	m1, err := p.pointish(lo, a)
-	p.era2 = 0
+	p.era2, p.unit2 = 0, 0
 	if err != nil {
 		return member{}, err
 	}
@@ -359,8 +379,13 @@ func (p *parser) named(lo, hi int, pt *point) error {
 		switch {
 		case strings.ContainsAny(w, "0123456789") && strings.ContainsAny(w, "xu"):
 			hint = "unspecified digits are an upper-case X: " + strings.NewReplacer("x", "X", "u", "X").Replace(w)
-		case strings.EqualFold(w, "century") || strings.HasSuffix(strings.ToLower(w), "th") || strings.HasSuffix(strings.ToLower(w), "st") || strings.HasSuffix(strings.ToLower(w), "nd") || strings.HasSuffix(strings.ToLower(w), "rd"):
-			hint = "centuries are not read by name: write 18XX or 1800s (the years 1800–1899), or 1801/1900"
+		case strings.EqualFold(w, "century") || strings.HasPrefix(strings.ToLower(w), "cent"):
+			hint = "write the century as 18th century (read as 1700 to 1800), or 1700s for 1700–1799"
+		default:
+			if n, ok := ordinal(w); ok && n < 100 {
+				c := itoa(int(n-1)) + "00"
+				hint = "write " + w + " century (read as " + c + " to " + itoa(int(n)) + "00, both ways of counting it) or " + c + "s (" + c + "–" + itoa(int(n-1)) + "99)"
+			}
 		}
 		return p.failHint(k, "unexpected word in a date: expected a month name or an EDTF date", hint)
 	}
@@ -388,6 +413,15 @@ func (p *parser) named(lo, hi int, pt *point) error {
 	default:
 		return p.failHint(toks[0].lo, "expected a date such as 21 May 1874", "write 21 May 1874, May 21, 1874 or May 1874")
 	}
+	dual := int64(-1) // the new-style year of a dual year "1712/13"
+	if k := strings.IndexByte(s[yearTok.lo:yearTok.hi], '/'); k > 0 {
+		y2, err := p.dualYear(yearTok.lo, yearTok.lo+k, yearTok.hi)
+		if err != nil {
+			return err
+		}
+		dual = y2
+		yearTok.hi = yearTok.lo + k
+	}
 	if yearTok.hi-yearTok.lo != 4 {
 		return p.failHint(yearTok.lo, "expected a year of four digits after the month", "write May 1874; for other years use EDTF: 0079-05")
 	}
@@ -402,6 +436,14 @@ func (p *parser) named(lo, hi int, pt *point) error {
 			return err
 		}
 		pt.day = uint8(d)
+	}
+	if dual >= 0 {
+		return p.dualDate(lo, hi, dayTok.lo, dual, pt)
+	}
+	if pt.cal == CalendarJulian || p.ys != YearStartUnknown {
+		return p.documentary(lo, hi, dayTok.lo, pt)
+	}
+	if pt.day != 0 {
 		if err := p.checkDay(dayTok.lo, pt); err != nil {
 			return err
 		}
@@ -423,4 +465,39 @@ func monthByName(w string) int {
 		}
 	}
 	return 0
+}
+
+// rangeUnit returns the unit (100 or 1000 years) of a century or
+// millennium form in s[lo:hi], or 0.
+func (p *parser) rangeUnit(lo, hi int) int64 {
+	var buf [10][2]int
+	ws, ok := p.words(lo, hi, buf[:0])
+	if !ok || len(ws) < 2 {
+		return 0
+	}
+	for _, w := range ws[len(ws)-2:] {
+		if u := centuryUnit(p.in[w[0]:w[1]]); u != 0 {
+			return u
+		}
+	}
+	return 0
+}
+
+// hasMonthName reports whether a word of s[lo:hi] is an English month name.
+func (p *parser) hasMonthName(lo, hi int) bool {
+	s := p.in
+	for i := lo; i < hi; {
+		for i < hi && (isSpace(s[i]) || s[i] == ',') {
+			i++
+		}
+		j := i
+		for j < hi && !isSpace(s[j]) && s[j] != ',' {
+			j++
+		}
+		if j > i && monthByName(s[i:j]) > 0 {
+			return true
+		}
+		i = j
+	}
+	return false
 }

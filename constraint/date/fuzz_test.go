@@ -51,6 +51,17 @@ func FuzzParse(f *testing.F) {
 		"before 1900", "after 1850", "1870-1875", "between 1870 and 1875", "21 May 1874",
 		"1582-10-04 (Julian)", "1582~ O.S.", "1985-XX-XX", "1985-04-1X", "1984-1X", "{1667}", "",
 		"1985-13", "1985-02-30", "156X-12-25", "2004-06~-11", "[", "/", "../..", "c.", "Y", "-", "X",
+		// Old Style, centuries, other calendars
+		"10 Feb 1712/13", "1712/3", "10 February 1712 O.S.", "March 1712 (Julian)", "before 11 Feb 1731 O.S.",
+		"18th century", "18th c.", "early 18th century", "second quarter of the 19th century",
+		"3rd century BCE", "5th millennium BCE", "18th-19th century", "first half of the 18th century",
+		"Meiji 14", "Meiji 14.5.3", "Ansei 4, 7th month", "Ansei 4, intercalary 5th month", "明治十四年五月",
+		"安政四年七月", "明治元年", "Qianlong 12", "乾隆十二年", "大清乾隆年製", "正德三年", "Ansei 8",
+		"year of the horse in 1840/1880", "Horse 7 in 1840/1880", "gengzi in 1800/1999", "庚子 in 1800/1999",
+		"1300 AH", "AH 1300", "Muharram 1300", "15 Ramadan 1300 AH", "1300 SH", "1 Farvardin 1300 SH",
+		"5600 AM", "1 Tishri 5600", "Adar II 5783", "18 Brumaire an VIII", "an XX", "BE 2475", "民國20年",
+		"ROC 20", "c. Meiji 14", "before Meiji 14", "Kansei 3, 13th month", "Reiwa", "Yeongjo 12", "영조 12년",
+		"英祖十二年", "Meji 14", "fire horse in 1900/2000", "巳七月 in 1850/1860 (Japanese)",
 	} {
 		f.Add(s)
 	}

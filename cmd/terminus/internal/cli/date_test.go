@@ -160,3 +160,75 @@ func TestDateScattered(t *testing.T) {
 		t.Errorf("%d alternatives, last %v; want 100, the last 1599-12-25", len(alts), alts[len(alts)-1])
 	}
 }
+
+func TestDateNegativeYear(t *testing.T) {
+	// "-1199" is 1200 BCE, not a flag; flags after it still work
+	out, errs, code := execute(t, "date", "-1199", "--format", "json", "-0044-03-15")
+	if code != 0 || errs != "" {
+		t.Fatalf("exit %d, stderr %q", code, errs)
+	}
+	for _, want := range []string{`"input": "-1199"`, `"first": "-1199-01-01"`, `"input": "-0044-03-15"`} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q:\n%s", want, out)
+		}
+	}
+	if _, errs, code := execute(t, "date", "--bogus", "1874"); code != 2 || !strings.Contains(errs, "unknown flag: --bogus") {
+		t.Errorf("an unknown flag: exit %d, stderr %q", code, errs)
+	}
+	if out, _, code := execute(t, "date", "--help"); code != 0 || !strings.Contains(out, "negative year") {
+		t.Errorf("--help: exit %d, output %q", code, out)
+	}
+}
+
+func TestDateCalendarsShown(t *testing.T) {
+	out, errs, code := execute(t, "date", "Ansei 4, 7th month", "10 Feb 1712 O.S.", "18th century", "15 Ramadan 1300 AH")
+	if code != 0 || errs != "" {
+		t.Fatalf("exit %d, stderr %q", code, errs)
+	}
+	for _, want := range []string{
+		// the calendar read and the Gregorian interval
+		"  calendar     Japanese, converted to Gregorian days\n  first day    1857-08-20\n  last day     1857-09-17\n",
+		// the Old Style ambiguity: the alternatives and why
+		"  one of       1712-02-21 to 1712-02-21\n               1713-02-21 to 1713-02-21\n",
+		"(Old Style) is ambiguous",
+		// the century convention
+		"both ways of counting it",
+		// the widening of a Hijri date, with its reason
+		"widened by 2 days at each side",
+	} {
+		if !strings.Contains(out, want) {
+			t.Errorf("output lacks %q\ngot:\n%s", want, out)
+		}
+	}
+}
+
+func TestDateSettings(t *testing.T) {
+	out, errs, code := execute(t, "date", "--within", "1840/1880", "--calendar", "japanese", "Snake 7")
+	if code != 0 || errs != "" {
+		t.Fatalf("exit %d, stderr %q", code, errs)
+	}
+	// Ansei 4 (1857) was a snake year; its 7th month is 1857-08-20 to 09-17
+	if !strings.Contains(out, "1857-08-20 to 1857-09-17") || !strings.Contains(out, "Japanese") {
+		t.Errorf("Snake 7 within 1840/1880 (Japanese):\n%s", out)
+	}
+	out, errs, code = execute(t, "date", "--julian", "--year-start", "25 March", "10 February 1712")
+	if code != 0 || errs != "" || !strings.Contains(out, "first day    1713-02-21") {
+		t.Errorf("--year-start 25 March: exit %d, stderr %q\n%s", code, errs, out)
+	}
+	if _, errs, code := execute(t, "date", "--year-start", "easter", "1874"); code != 2 || !strings.Contains(errs, "--year-start") {
+		t.Errorf("a bad --year-start: exit %d, stderr %q", code, errs)
+	}
+}
+
+func TestDateErrorsNameTheProblem(t *testing.T) {
+	for _, tc := range []struct{ in, want, reason string }{
+		{"Meji 14", "did you mean Meiji?", "an unknown era gets a suggestion"},
+		{"Ansei 8", "Ansei has years 1 to 7 (1854–1860)", "a year past an era's end names its span"},
+		{"Kansei 3, 13th month", "has no intercalary month", "a 13th month in a year without one is refused"},
+	} {
+		_, errs, code := execute(t, "date", tc.in)
+		if code != 2 || !strings.Contains(errs, tc.want) {
+			t.Errorf("%s: exit %d, stderr %q, want %q", tc.reason, code, errs, tc.want)
+		}
+	}
+}
