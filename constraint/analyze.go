@@ -229,6 +229,18 @@ func prepare(c *Case, ds *materials.Dataset) (*analysis, error) {
 			return nil, a.errAt(cl.EventPos, input.DidYouMean(cl.Event, ids), "claim %s: unknown event %q (events: %s)", cl.ID, cl.Event, strings.Join(ids, ", "))
 		}
 	}
+	// How records and claims were read, where the date says it (an Old
+	// Style year, a cyclical year, a widened month).
+	for _, r := range c.Records {
+		for _, n := range r.Date.Notes() {
+			a.notes = append(a.notes, "Record "+r.ID+": "+n+".")
+		}
+	}
+	for _, cl := range c.Claims {
+		for _, n := range cl.Date.Notes() {
+			a.notes = append(a.notes, "Claim "+cl.ID+": "+n+".")
+		}
+	}
 	if err := a.checkCycles(); err != nil {
 		return nil, err
 	}

@@ -18,6 +18,7 @@ import (
 	"strconv"
 
 	"terminus/constraint"
+	"terminus/constraint/date"
 	"terminus/constraint/input"
 )
 
@@ -65,6 +66,7 @@ func Parse(name string, data []byte, format input.Format, l input.Limits) (*cons
 // once the whole case is read.
 type decoder struct {
 	file       string
+	yearStart  date.YearStart // the case's, for dates that give none
 	unnamed    []unnamed
 	eventIndex int // the event being read
 }

@@ -12,12 +12,12 @@ import (
 
 // The keys each part of a case file may have.
 var (
-	caseKeys    = []string{"id", "title", "place", "circa", "stock_allowance", "events", "findings", "records", "claims"}
+	caseKeys    = []string{"id", "title", "place", "circa", "stock_allowance", "year_start", "events", "findings", "records", "claims"}
 	eventKeys   = []string{"id", "label", "place", "after"}
 	orderKeys   = []string{"event", "at_least", "at_most", "id", "strength", "note"}
 	findingKeys = []string{"id", "material", "event", "confidence", "method", "sample", "note", "unlisted"}
-	recordKeys  = []string{"id", "event", "on", "not_before", "not_after", "between", "strength", "source", "note", "calendar"}
-	claimKeys   = []string{"id", "event", "date", "by", "calendar"}
+	recordKeys  = []string{"id", "event", "on", "not_before", "not_after", "between", "strength", "source", "note", "calendar", "year_start"}
+	claimKeys   = []string{"id", "event", "date", "by", "calendar", "year_start"}
 	circaKeys   = []string{"day", "month", "season", "year", "decade", "century"}
 )
 
@@ -46,6 +46,11 @@ func (d *decoder) caseFile(root *input.Node) (*constraint.Case, error) {
 	}
 	if v, ok := f.Given("circa"); ok {
 		if c.Circa, err = d.circa(v.Value); err != nil {
+			return nil, err
+		}
+	}
+	if v, ok := f.Given("year_start"); ok {
+		if d.yearStart, err = d.yearStartOf(v.Value); err != nil {
 			return nil, err
 		}
 	}
@@ -343,8 +348,9 @@ func (d *decoder) finding(n *input.Node, i int) (constraint.Finding, error) {
 	return fi, nil
 }
 
-// dateField parses a date at node n, in the calendar given.
-func (d *decoder) dateField(n *input.Node, what string, julian bool) (date.Date, string, error) {
+// dateField parses a date at node n with the reading options given (the
+// calendar and year start of its entry or of the case).
+func (d *decoder) dateField(n *input.Node, what string, opt date.Options) (date.Date, string, error) {
 	var s string
 	if n.Kind == input.Sequence && len(n.Content) == 2 {
 		a, err := d.str(n.Content[0], what)
@@ -362,41 +368,65 @@ func (d *decoder) dateField(n *input.Node, what string, julian bool) (date.Date,
 			return date.Date{}, "", err
 		}
 	}
-	var dt date.Date
-	var err error
-	if julian {
-		dt, err = date.ParseIn(s, date.CalendarJulian)
-	} else {
-		dt, err = date.Parse(s)
-	}
+	dt, err := date.ParseWith(s, opt)
 	if err != nil {
 		col := int(n.Column)
 		if pe, ok := err.(*date.ParseError); ok && !n.Quoted {
 			col += pe.Pos
 		}
 		e := &input.Error{File: d.file, Line: int(n.Line), Column: col, Msg: fmt.Sprintf("%s: %s is not a date: %s", what, input.Quote(s), parseMsg(err)),
-			Suggestion: "write EDTF (1874, 1874-05, 1874-05-21, 1870/1879, 1870~) or e.g. 'c. 1870'; 'terminus date EXPR' shows how a date is read"}
+			Suggestion: "write EDTF (1874, 1874-05, 1874-05-21, 1870/1879, 1870~) or e.g. 'c. 1870', '18th century', 'Meiji 14'; 'terminus date EXPR' shows how a date is read"}
+		if h := hintOf(err); h != "" {
+			e.Suggestion = h
+		}
 		return date.Date{}, "", e
 	}
 	return dt, s, nil
 }
 
-func (d *decoder) julian(f *input.Fields) (bool, error) {
-	v, ok := f.Given("calendar")
-	if !ok {
-		return false, nil
+// hintOf is a date error's own suggestion, if it has one.
+func hintOf(err error) string {
+	if h, ok := err.(interface{ Hint() string }); ok {
+		return h.Hint()
 	}
-	s, err := d.str(v.Value, "calendar")
+	return ""
+}
+
+// dateOptions reads an entry's calendar and year start, over the case's
+// year start.
+func (d *decoder) dateOptions(f *input.Fields) (date.Options, error) {
+	opt := date.Options{YearStart: d.yearStart}
+	if v, ok := f.Given("calendar"); ok {
+		s, err := d.str(v.Value, "calendar")
+		if err != nil {
+			return opt, err
+		}
+		if opt.Calendar, err = date.ParseCalendar(s); err != nil {
+			return opt, d.errAt(v.Value, input.DidYouMean(s, []string{"gregorian", "julian", "japanese", "chinese", "korean"}),
+				"calendar %s: expected gregorian, julian, japanese, chinese or korean", input.Quote(s))
+		}
+	}
+	if v, ok := f.Given("year_start"); ok {
+		ys, err := d.yearStartOf(v.Value)
+		if err != nil {
+			return opt, err
+		}
+		opt.YearStart = ys
+	}
+	return opt, nil
+}
+
+// yearStartOf reads a year start: "25 March", "1 January" …
+func (d *decoder) yearStartOf(n *input.Node) (date.YearStart, error) {
+	s, err := d.str(n, "year_start")
 	if err != nil {
-		return false, err
+		return 0, err
 	}
-	switch strings.ToLower(s) {
-	case "gregorian":
-		return false, nil
-	case "julian":
-		return true, nil
+	ys, err := date.ParseYearStart(s)
+	if err != nil {
+		return 0, d.errAt(n, "write the day the year began: 25 March (England before 1752), 1 January, 1 March or 25 December", "year_start %s: %s", input.Quote(s), parseMsg(err))
 	}
-	return false, d.errAt(v.Value, input.DidYouMean(s, []string{"gregorian", "julian"}), "calendar %s: expected gregorian or julian", input.Quote(s))
+	return ys, nil
 }
 
 func (d *decoder) record(n *input.Node, i int) (constraint.Record, error) {
@@ -412,7 +442,7 @@ func (d *decoder) record(n *input.Node, i int) (constraint.Record, error) {
 	} else {
 		d.unnamed = append(d.unnamed, unnamed{kind: recordID, index: i})
 	}
-	julian, err := d.julian(f)
+	opt, err := d.dateOptions(f)
 	if err != nil {
 		return constraint.Record{}, err
 	}
@@ -424,7 +454,7 @@ func (d *decoder) record(n *input.Node, i int) (constraint.Record, error) {
 		}
 		kinds = append(kinds, k)
 		r.Kind = k
-		if r.Date, r.DateText, err = d.dateField(v.Value, string(k), julian); err != nil {
+		if r.Date, r.DateText, err = d.dateField(v.Value, string(k), opt); err != nil {
 			return constraint.Record{}, err
 		}
 		r.DatePos = v.Value.Pos()
@@ -479,7 +509,7 @@ func (d *decoder) claim(n *input.Node, i int) (constraint.Claim, error) {
 	} else {
 		d.unnamed = append(d.unnamed, unnamed{kind: claimID, index: i})
 	}
-	julian, err := d.julian(f)
+	opt, err := d.dateOptions(f)
 	if err != nil {
 		return constraint.Claim{}, err
 	}
@@ -487,7 +517,7 @@ func (d *decoder) claim(n *input.Node, i int) (constraint.Claim, error) {
 	if !ok {
 		return constraint.Claim{}, d.errAt(n, "add e.g. 'date: 1870/1879'", "claim %s: every claim has a date", c.ID)
 	}
-	if c.Date, c.DateText, err = d.dateField(v.Value, "date", julian); err != nil {
+	if c.Date, c.DateText, err = d.dateField(v.Value, "date", opt); err != nil {
 		return constraint.Claim{}, err
 	}
 	if v, ok := f.Given("event"); ok {
