@@ -287,3 +287,13 @@ func claimWords(c constraint.ClaimResult, events []constraint.EventResult) strin
 	}
 	return head + ": " + c.Note + "."
 }
+
+// HTMLStyle is the report's stylesheet, for a page that shows
+// [HTMLBody] inside its own.
+func HTMLStyle() string {
+	var b strings.Builder
+	if err := reportTemplate.ExecuteTemplate(&b, "css", nil); err != nil {
+		return ""
+	}
+	return b.String()
+}
