@@ -71,11 +71,9 @@ nothing from elsewhere. Ctrl-C stops it.`,
 			}
 			addr := ln.Addr().(*net.TCPAddr)
 			loopback := addr.IP.IsLoopback()
-			if !loopback {
-				// Reached through the network, the page answers to the
-				// address it was given only.
-				opts.Hosts = []string{ln.Addr().String()}
-			}
+			// Reached through the network, the page is named by an IP
+			// address; a host name is refused all the same.
+			opts.AnyIP = !loopback
 			srv, err := serve.New(opts)
 			if err != nil {
 				ln.Close()

@@ -35,7 +35,6 @@ import (
 	"io/fs"
 	"net"
 	"net/http"
-	"slices"
 
 	"terminus/cmd/terminus/internal/report"
 	"terminus/constraint"
@@ -68,10 +67,12 @@ type Options struct {
 	Examples []Example
 	// MaxBytes limits a request's body; 0 means DefaultMaxBytes.
 	MaxBytes int64
-	// Hosts are the host:port values the Host header may take; the server
-	// refuses others. Empty: any loopback name with the port of the
-	// request's local address.
-	Hosts []string
+	// AnyIP lets the Host header name the server by any IP address, as
+	// other computers must when it listens beyond the loopback interface;
+	// otherwise only a loopback address or "localhost" will do. A name that
+	// is not an IP address (which a DNS rebinding would use) is refused
+	// either way, and so is a port that is not the server's.
+	AnyIP bool
 }
 
 // Server answers the page's requests.
@@ -153,9 +154,6 @@ func (s *Server) ServeHTTP(w http.ResponseWriter, r *http.Request) {
 
 // hostAllowed says whether the Host header names this server.
 func (s *Server) hostAllowed(r *http.Request) bool {
-	if len(s.opts.Hosts) > 0 {
-		return slices.Contains(s.opts.Hosts, r.Host)
-	}
 	host, port, err := net.SplitHostPort(r.Host)
 	if err != nil {
 		return false
@@ -169,7 +167,7 @@ func (s *Server) hostAllowed(r *http.Request) bool {
 		return true
 	}
 	ip := net.ParseIP(host)
-	return ip != nil && ip.IsLoopback()
+	return ip != nil && (ip.IsLoopback() || s.opts.AnyIP)
 }
 
 func writeJSON(w http.ResponseWriter, v any) {

@@ -91,6 +91,7 @@ func TestSafeByDefault(t *testing.T) {
 		{"other origin", "POST", "/api/check", func(r *http.Request) { r.Header.Set("Origin", "https://example.org") }, 403, "another site cannot use the server"},
 		{"rebinding", "GET", "/", func(r *http.Request) { r.Host = "attacker.example:8047" }, 421, "a DNS name pointed at the machine is refused"},
 		{"localhost", "GET", "/", func(r *http.Request) { r.Host = "localhost:8047" }, 200, "localhost is the loopback"},
+		{"another interface", "GET", "/", func(r *http.Request) { r.Host = "192.0.2.7:8047" }, 421, "an address beyond the loopback only when the server was told to listen there"},
 		{"GET computes nothing", "GET", "/api/check", nil, 405, "no state-changing or computing GET"},
 		{"too big", "POST", "/api/check", func(r *http.Request) {
 			r.Body = io.NopCloser(bytes.NewReader(append([]byte(`{"title": "`), bytes.Repeat([]byte("x"), DefaultMaxBytes+10)...)))
@@ -105,6 +106,17 @@ func TestSafeByDefault(t *testing.T) {
 				t.Errorf("no content security policy: %q", csp)
 			}
 		})
+	}
+}
+
+func TestAnyIPStillRefusesNames(t *testing.T) {
+	s, _ := newTestServer(t)
+	s.opts.AnyIP = true
+	if w := do(s, "GET", "/", nil, func(r *http.Request) { r.Host = "192.0.2.7:8047" }); w.Code != 200 {
+		t.Errorf("listening beyond the loopback, an IP address is answered: %d", w.Code)
+	}
+	if w := do(s, "GET", "/", nil, func(r *http.Request) { r.Host = "rebind.example:8047" }); w.Code != 421 {
+		t.Errorf("listening beyond the loopback, a host name is still refused: %d", w.Code)
 	}
 }
 
