@@ -377,7 +377,7 @@ func (d *decoder) dateField(n *input.Node, what string, opt date.Options) (date.
 		e := &input.Error{File: d.file, Line: int(n.Line), Column: col, Msg: fmt.Sprintf("%s: %s is not a date: %s", what, input.Quote(s), parseMsg(err)),
 			Suggestion: "write EDTF (1874, 1874-05, 1874-05-21, 1870/1879, 1870~) or e.g. 'c. 1870', '18th century', 'Meiji 14'; 'terminus date EXPR' shows how a date is read"}
 		if h := hintOf(err); h != "" {
-			e.Suggestion = h
+			e.Suggestion = h + "; 'terminus date EXPR' shows how a date is read"
 		}
 		return date.Date{}, "", e
 	}

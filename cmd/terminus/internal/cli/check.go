@@ -17,8 +17,9 @@ import (
 	"terminus/materials"
 )
 
-// writerFor returns the report writer for a --format value.
-func writerFor(format string) (func(io.Writer, *constraint.Result) error, error) {
+// writerFor returns the report writer for a --format value; ld says
+// what the linked-data export (jsonld) exports.
+func writerFor(format string, ld report.LinkedArtOptions) (func(io.Writer, *constraint.Result) error, error) {
 	switch format {
 	case "text", "":
 		return report.Text, nil
@@ -30,8 +31,10 @@ func writerFor(format string) (func(io.Writer, *constraint.Result) error, error)
 		return report.HTML, nil
 	case "svg":
 		return report.SVG, nil
+	case "jsonld":
+		return report.LinkedArt(ld), nil
 	}
-	return nil, fmt.Errorf("unknown --format %q: expected text, md, json, html or svg", format)
+	return nil, fmt.Errorf("unknown --format %q: expected text, md, json, jsonld, html or svg", format)
 }
 
 // parseTier reads a --fail-on value.
@@ -117,6 +120,8 @@ func NewCheckCmd(s IO) *cobra.Command {
 		maxConflicts int
 		maxSize      string
 		inFormat     string
+		ldTier       string
+		production   string
 	)
 	cmd := &cobra.Command{
 		Use:   "check CASE...",
@@ -145,7 +150,12 @@ stronger one; 2 for bad input.`,
 			return nil
 		},
 		RunE: func(cmd *cobra.Command, args []string) error {
-			write, err := writerFor(format)
+			ld := report.LinkedArtOptions{Production: production}
+			var err error
+			if ld.Tier, err = network.ParseTier(ldTier); err != nil {
+				return usageError(fmt.Errorf("unknown --tier %q: expected hard, firm or soft", ldTier))
+			}
+			write, err := writerFor(format, ld)
 			if err != nil {
 				return usageError(err)
 			}
@@ -183,7 +193,7 @@ stronger one; 2 for bad input.`,
 					return &ExitError{Code: 2, Err: fmt.Errorf("%s: %w", path, err)}
 				}
 				res.Notes = append(append([]string{}, dsNotes...), res.Notes...)
-				if i > 0 && format != "json" {
+				if i > 0 && format != "json" && format != "jsonld" {
 					out.WriteString("\n")
 				}
 				if err := write(&out, res); err != nil {
@@ -201,7 +211,9 @@ stronger one; 2 for bad input.`,
 		},
 	}
 	f := cmd.Flags()
-	f.StringVarP(&format, "format", "f", "text", "output format: text, md, json, html (a page with the timeline) or svg (the timeline alone)")
+	f.StringVarP(&format, "format", "f", "text", "output format: text, md, json, jsonld (Linked Art), html (a page with the timeline) or svg (the timeline alone)")
+	f.StringVar(&ldTier, "tier", "hard", "with --format jsonld: the tier whose windows become the time-spans: hard, firm or soft")
+	f.StringVar(&production, "production", "", "with --format jsonld: the event that is the object's production (default: making, else the first event)")
 	f.StringArrayVar(&matFiles, "materials", nil, "a materials file (YAML or TOML) to add over the built-in dataset; repeatable")
 	f.StringVar(&failOn, "fail-on", "soft", "exit 1 when a claim fails or the evidence conflicts at this tier or a stronger one: hard, firm or soft")
 	f.IntVar(&maxConflicts, "max-conflicts", 10, "the most minimal conflicts to list per tier")

@@ -97,6 +97,7 @@ func NewRootCmd(s IO) *cobra.Command {
 		NewDateCmd(s),
 		NewMaterialsCmd(s),
 		NewSurveyCmd(s),
+		NewServeCmd(s),
 	)
 	return root
 }

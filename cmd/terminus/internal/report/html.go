@@ -1,0 +1,299 @@
+package report
+
+import (
+	_ "embed"
+	"fmt"
+	"html/template"
+	"io"
+	"strings"
+
+	"terminus/constraint"
+	"terminus/constraint/network"
+	"terminus/constraint/wording"
+)
+
+// The HTML report: one self-contained page built from the result with
+// html/template (every value escaped by the template), holding the same
+// sections as the Markdown report, the timeline picture with its text
+// alternative, real tables with captions and column headers, and a print
+// stylesheet for A4.
+
+//go:embed report.html.tmpl
+var reportTemplateText string
+
+var reportTemplate = template.Must(template.New("report").Parse(reportTemplateText))
+
+// HTML writes r as a self-contained page.
+func HTML(w io.Writer, r *constraint.Result) error {
+	ew := &errWriter{w: w}
+	if err := reportTemplate.ExecuteTemplate(ew, "page", newHTMLView(r)); err != nil {
+		if ew.err != nil {
+			return ew.err
+		}
+		return fmt.Errorf("writing the HTML report: %w", err)
+	}
+	return ew.err
+}
+
+// HTMLBody writes the report's sections without the page around them, for
+// a page that shows the report inside its own (the local page of
+// "terminus serve").
+func HTMLBody(w io.Writer, r *constraint.Result) error {
+	ew := &errWriter{w: w}
+	if err := reportTemplate.ExecuteTemplate(ew, "body", newHTMLView(r)); err != nil {
+		if ew.err != nil {
+			return ew.err
+		}
+		return fmt.Errorf("writing the HTML report: %w", err)
+	}
+	return ew.err
+}
+
+// htmlView is what the HTML report shows, in words, ready for a template.
+type htmlView struct {
+	Title, File, ID, Place, Dataset string
+	Consistency                     string
+	Consistent                      bool
+	Events                          []eventView
+	Claims                          []claimView
+	Picture                         template.HTML
+	PictureText                     string
+	Windows                         []windowRow
+	Evidence                        []evidenceRow
+	Conflicts                       []conflictView
+	MoreConflicts                   []string
+	Corrections                     []string
+	Disagreements                   []string
+	Notes                           []string
+	Cautions                        []string
+	Sources                         []sourceView
+}
+
+// eventView is an event's windows in graded words.
+type eventView struct{ Name, Sentence string }
+
+// claimView is a claim, its verdict and what survives of it.
+type claimView struct {
+	ID, Event, Date, By, Verdict, Sentence, Deciding string
+	Surviving                                        [3]string
+}
+
+// windowRow is one row of the windows table: an event at a tier.
+type windowRow struct {
+	Event, Tier                string
+	Conflict                   bool
+	Earliest, Latest           string
+	EarliestBy, LatestBy       string
+	EarliestSteps, LatestSteps []string
+}
+
+// evidenceRow is one bound of one piece of evidence.
+type evidenceRow struct {
+	ID, Event, What, Method, Confidence, Bound, Tier, Source string
+}
+
+// conflictView is a minimal conflict and its steps.
+type conflictView struct {
+	Tier, Evidence string
+	Steps          []string
+}
+
+// sourceView is a reference; URL is set only for a web address.
+type sourceView struct{ Key, Cite, URL string }
+
+// newHTMLView puts r in the words of the HTML report.
+func newHTMLView(r *constraint.Result) *htmlView {
+	v := &htmlView{
+		Title: r.Title, File: r.File, ID: r.ID, Place: r.Place, Dataset: datasetLine(r),
+		Consistency: consistencyLine(r), Consistent: r.Consistent[0] && r.Consistent[1] && r.Consistent[2],
+		Picture: template.HTML(picture(r)), PictureText: pictureText(r),
+		Disagreements: nil, Notes: r.Notes, Cautions: r.Cautions,
+	}
+	if v.Title == "" {
+		v.Title = "untitled case"
+	}
+	for _, e := range r.Events {
+		name, sentence := eventWords(e)
+		v.Events = append(v.Events, eventView{Name: name, Sentence: sentence})
+		for t, w := range e.Windows {
+			row := windowRow{Event: e.ID, Tier: wording.Tier(t)}
+			if w == nil {
+				row.Conflict = true
+				v.Windows = append(v.Windows, row)
+				continue
+			}
+			row.Earliest, row.Latest = "open", "open"
+			if w.Earliest.Bounded {
+				row.Earliest = wording.Bound(w.Earliest.Day, false)
+				row.EarliestBy = strings.Join(w.Earliest.Because, " → ")
+				row.EarliestSteps = stepTexts(w.Earliest.Chain)
+			}
+			if w.Latest.Bounded {
+				row.Latest = wording.Bound(w.Latest.Day, true)
+				row.LatestBy = strings.Join(w.Latest.Because, " → ")
+				row.LatestSteps = stepTexts(w.Latest.Chain)
+			}
+			if len(w.Intervals) > 1 {
+				row.Latest += " (in parts: " + spansText(w.Intervals) + ")"
+			}
+			v.Windows = append(v.Windows, row)
+		}
+	}
+	for _, c := range r.Claims {
+		cv := claimView{ID: c.ID, Event: c.Event, Date: c.DateText, By: c.By, Verdict: string(c.Verdict),
+			Sentence: claimWords(c, r.Events), Deciding: strings.Join(c.Deciding, ", ")}
+		for t := range cv.Surviving {
+			if c.Verdict == constraint.Undetermined || network.Tier(t) > c.JudgedAt {
+				cv.Surviving[t] = "not judged"
+			} else {
+				cv.Surviving[t] = spansText(c.Surviving[t])
+			}
+		}
+		v.Claims = append(v.Claims, cv)
+	}
+	for _, e := range r.Evidence {
+		method := e.Method
+		if e.Sample != "" {
+			method += " (" + e.Sample + ")"
+		}
+		if len(e.Bounds) == 0 {
+			none := "none"
+			if e.Unlisted {
+				none = "none: not in the dataset"
+			}
+			v.Evidence = append(v.Evidence, evidenceRow{ID: e.ID, Event: e.Event, What: e.What, Method: method, Confidence: e.Confidence, Bound: none, Source: e.Source})
+			continue
+		}
+		for _, b := range e.Bounds {
+			row := evidenceRow{ID: e.ID, Event: e.Event, What: e.What, Method: method, Confidence: e.Confidence,
+				Bound: b.Side + " " + wording.Bound(b.Day, b.Side == "not after"), Tier: wording.Tier(b.Tier), Source: e.Source}
+			if b.Milestone != "" {
+				row.What = b.MaterialName
+				row.Bound = fmt.Sprintf("%s %s (%s)", b.Side, wording.Bound(b.Day, b.Side == "not after"), b.Milestone)
+				row.Source = b.Source
+			}
+			if e.Kind == "order" {
+				row.Bound = "after " + b.Date
+			}
+			v.Evidence = append(v.Evidence, row)
+		}
+	}
+	for _, c := range r.Conflicts {
+		v.Conflicts = append(v.Conflicts, conflictView{Tier: wording.Tier(c.Tier), Evidence: strings.Join(c.Evidence, ", "), Steps: stepTexts(c.Steps)})
+	}
+	if len(r.Conflicts) > 0 {
+		for t, complete := range r.ConflictsComplete {
+			if !complete {
+				v.MoreConflicts = append(v.MoreConflicts, fmt.Sprintf("More conflicts exist at the %s tier than are listed.", wording.Tier(t)))
+			}
+		}
+		for _, c := range r.Corrections {
+			v.Corrections = append(v.Corrections, fmt.Sprintf("The smallest, weakest change that restores agreement at the %s tier is to set aside %s.", wording.Tier(c.Tier), strings.Join(c.Evidence, ", ")))
+		}
+	}
+	for _, d := range r.Disagreements {
+		v.Disagreements = append(v.Disagreements, d.Text)
+	}
+	for _, s := range r.Sources {
+		sv := sourceView{Key: s.Key, Cite: s.Cite}
+		if sv.Cite == "" {
+			sv.Cite = "(not in the bibliography)"
+		}
+		if strings.HasPrefix(s.URL, "https://") || strings.HasPrefix(s.URL, "http://") {
+			sv.URL = s.URL
+		}
+		v.Sources = append(v.Sources, sv)
+	}
+	return v
+}
+
+func stepTexts(steps []constraint.Step) []string {
+	out := make([]string, len(steps))
+	for i, s := range steps {
+		out[i] = s.Text
+	}
+	return out
+}
+
+// eventWords puts an event's windows in graded words, as the Markdown
+// report's paragraph does, without its markup: "cannot" for the hard
+// tier, "unlikely" for firm, "unusual" for soft; a tier is named only
+// where it narrows the one before.
+func eventWords(e constraint.EventResult) (name, sentence string) {
+	name = e.ID
+	if e.Label != "" {
+		name = e.Label + " (" + e.ID + ")"
+	}
+	if e.Windows[0] == nil {
+		return name, "Even the hard evidence for this event contradicts itself; no window can be given until the conflicts below are resolved."
+	}
+	var parts []string
+	var prevLo, prevHi *constraint.Bound
+	for t, w := range e.Windows {
+		if w == nil {
+			continue
+		}
+		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
+			parts = append(parts, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.Bound(w.Earliest.Day, false), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
+		}
+		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
+			parts = append(parts, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.Bound(w.Latest.Day, true), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
+		}
+		if w.Earliest.Bounded {
+			b := w.Earliest
+			prevLo = &b
+		}
+		if w.Latest.Bounded {
+			b := w.Latest
+			prevHi = &b
+		}
+	}
+	if len(parts) == 0 {
+		return name, "The evidence considered sets no bound on this event."
+	}
+	sentence = "On the evidence considered, it " + joinAnd(parts) + "."
+	if e.Windows[1] == nil || e.Windows[2] == nil {
+		sentence += " The weaker evidence conflicts (see Conflicts), so only the stronger tiers are stated."
+	}
+	return name, sentence
+}
+
+// claimWords says what the verdict on a claim means, as the Markdown
+// report's paragraph does, without its markup.
+func claimWords(c constraint.ClaimResult, events []constraint.EventResult) string {
+	eventName := c.Event
+	for _, e := range events {
+		if e.ID == c.Event && e.Label != "" {
+			eventName = "the " + e.Label + " (" + e.ID + ")"
+		}
+	}
+	by := ""
+	if c.By != "" {
+		by = " by " + c.By
+	}
+	head := fmt.Sprintf("The date claimed%s for %s, %s, is %s", by, eventName, c.DateText, c.Verdict)
+	switch c.Verdict {
+	case constraint.Consistent:
+		return head + ": it meets the window of all the evidence. This does not prove the date; it only fails to rule it out."
+	case constraint.Doubtful:
+		return head + fmt.Sprintf(": it contradicts only soft evidence (%s), which makes it unusual rather than unlikely. Of the claim, %s remains within the firm window.",
+			strings.Join(c.Deciding, ", "), spansText(c.Surviving[network.Firm]))
+	case constraint.Improbable:
+		return head + fmt.Sprintf(": it contradicts firm evidence (%s) and needs an explanation to stand. Of the claim, %s remains possible on the hard evidence alone.",
+			strings.Join(c.Deciding, ", "), spansText(c.Surviving[network.Hard]))
+	case constraint.Excluded:
+		return head + fmt.Sprintf(": it contradicts hard evidence (%s). If the findings belong to this event, the object cannot date from then.",
+			strings.Join(c.Deciding, ", "))
+	}
+	return head + ": " + c.Note + "."
+}
+
+// HTMLStyle is the report's stylesheet, for a page that shows
+// [HTMLBody] inside its own.
+func HTMLStyle() string {
+	var b strings.Builder
+	if err := reportTemplate.ExecuteTemplate(&b, "css", nil); err != nil {
+		return ""
+	}
+	return b.String()
+}
