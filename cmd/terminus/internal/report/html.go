@@ -113,7 +113,7 @@ func newHTMLView(r *constraint.Result) *htmlView {
 		v.Title = "untitled case"
 	}
 	for _, e := range r.Events {
-		name, sentence := eventWords(e)
+		name, sentence := eventName(e), eventSentence(e)
 		v.Events = append(v.Events, eventView{Name: name, Sentence: sentence})
 		for t, w := range e.Windows {
 			row := windowRow{Event: e.ID, Tier: wording.Tier(t)}
@@ -141,7 +141,7 @@ func newHTMLView(r *constraint.Result) *htmlView {
 	}
 	for _, c := range r.Claims {
 		cv := claimView{ID: c.ID, Event: c.Event, Date: c.DateText, By: c.By, Verdict: string(c.Verdict),
-			Sentence: claimWords(c, r.Events), Deciding: strings.Join(c.Deciding, ", ")}
+			Sentence: claimText(c, r.Events), Deciding: strings.Join(c.Deciding, ", ")}
 		for t := range cv.Surviving {
 			if c.Verdict == constraint.Undetermined || network.Tier(t) > c.JudgedAt {
 				cv.Surviving[t] = "not judged"
@@ -213,79 +213,6 @@ func stepTexts(steps []constraint.Step) []string {
 		out[i] = s.Text
 	}
 	return out
-}
-
-// eventWords puts an event's windows in graded words, as the Markdown
-// report's paragraph does, without its markup: "cannot" for the hard
-// tier, "unlikely" for firm, "unusual" for soft; a tier is named only
-// where it narrows the one before.
-func eventWords(e constraint.EventResult) (name, sentence string) {
-	name = e.ID
-	if e.Label != "" {
-		name = e.Label + " (" + e.ID + ")"
-	}
-	if e.Windows[0] == nil {
-		return name, "Even the hard evidence for this event contradicts itself; no window can be given until the conflicts below are resolved."
-	}
-	var parts []string
-	var prevLo, prevHi *constraint.Bound
-	for t, w := range e.Windows {
-		if w == nil {
-			continue
-		}
-		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
-			parts = append(parts, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.Bound(w.Earliest.Day, false), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
-		}
-		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
-			parts = append(parts, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.Bound(w.Latest.Day, true), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
-		}
-		if w.Earliest.Bounded {
-			b := w.Earliest
-			prevLo = &b
-		}
-		if w.Latest.Bounded {
-			b := w.Latest
-			prevHi = &b
-		}
-	}
-	if len(parts) == 0 {
-		return name, "The evidence considered sets no bound on this event."
-	}
-	sentence = "On the evidence considered, it " + joinAnd(parts) + "."
-	if e.Windows[1] == nil || e.Windows[2] == nil {
-		sentence += " The weaker evidence conflicts (see Conflicts), so only the stronger tiers are stated."
-	}
-	return name, sentence
-}
-
-// claimWords says what the verdict on a claim means, as the Markdown
-// report's paragraph does, without its markup.
-func claimWords(c constraint.ClaimResult, events []constraint.EventResult) string {
-	eventName := c.Event
-	for _, e := range events {
-		if e.ID == c.Event && e.Label != "" {
-			eventName = "the " + e.Label + " (" + e.ID + ")"
-		}
-	}
-	by := ""
-	if c.By != "" {
-		by = " by " + c.By
-	}
-	head := fmt.Sprintf("The date claimed%s for %s, %s, is %s", by, eventName, c.DateText, c.Verdict)
-	switch c.Verdict {
-	case constraint.Consistent:
-		return head + ": it meets the window of all the evidence. This does not prove the date; it only fails to rule it out."
-	case constraint.Doubtful:
-		return head + fmt.Sprintf(": it contradicts only soft evidence (%s), which makes it unusual rather than unlikely. Of the claim, %s remains within the firm window.",
-			strings.Join(c.Deciding, ", "), spansText(c.Surviving[network.Firm]))
-	case constraint.Improbable:
-		return head + fmt.Sprintf(": it contradicts firm evidence (%s) and needs an explanation to stand. Of the claim, %s remains possible on the hard evidence alone.",
-			strings.Join(c.Deciding, ", "), spansText(c.Surviving[network.Hard]))
-	case constraint.Excluded:
-		return head + fmt.Sprintf(": it contradicts hard evidence (%s). If the findings belong to this event, the object cannot date from then.",
-			strings.Join(c.Deciding, ", "))
-	}
-	return head + ": " + c.Note + "."
 }
 
 // HTMLStyle is the report's stylesheet, for a page that shows

@@ -123,7 +123,7 @@ func linkedArt(r *constraint.Result, opts LinkedArtOptions) (*laNode, error) {
 		}
 	}
 	for _, c := range r.Claims {
-		obj.ReferredToBy = append(obj.ReferredToBy, statement("verdict on claim "+c.ID, claimWords(c, r.Events)))
+		obj.ReferredToBy = append(obj.ReferredToBy, statement("verdict on claim "+c.ID, claimText(c, r.Events)))
 	}
 	return obj, nil
 }

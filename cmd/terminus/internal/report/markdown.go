@@ -188,82 +188,15 @@ var mdReplacer = strings.NewReplacer("|", `\|`, "*", `\*`, "_", `\_`, "<", "&lt;
 
 func mdEscape(s string) string { return mdReplacer.Replace(s) }
 
-// eventParagraph puts an event's windows in graded words: "cannot" for the
-// hard tier, "unlikely" for firm, "unusual" for soft; a tier is named only
-// where it narrows the one before.
+// eventParagraph puts an event's windows in graded words, in bold the
+// event's name.
 func eventParagraph(e constraint.EventResult) string {
-	name := e.ID
-	if e.Label != "" {
-		name = e.Label + " (" + e.ID + ")"
-	}
-	var lows, highs []string
-	var prevLo, prevHi *constraint.Bound
-	for t, w := range e.Windows {
-		if w == nil {
-			continue
-		}
-		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
-			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.BoundAt(w.Earliest.Day, false, w.Earliest.Precision), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
-		}
-		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
-			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.BoundAt(w.Latest.Day, true, w.Latest.Precision), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
-		}
-		if w.Earliest.Bounded {
-			b := w.Earliest
-			prevLo = &b
-		}
-		if w.Latest.Bounded {
-			b := w.Latest
-			prevHi = &b
-		}
-	}
-	if e.Windows[0] == nil {
-		return fmt.Sprintf("**%s.** Even the hard evidence for this event contradicts itself; no window can be given until the conflicts below are resolved.", mdEscape(name))
-	}
-	var b strings.Builder
-	fmt.Fprintf(&b, "**%s.** ", mdEscape(name))
-	if len(lows) == 0 && len(highs) == 0 {
-		b.WriteString("The evidence considered sets no bound on this event.")
-		return b.String()
-	}
-	b.WriteString("On the evidence considered, it ")
-	all := append(lows, highs...)
-	b.WriteString(mdEscape(joinAnd(all)))
-	b.WriteString(".")
-	if e.Windows[1] == nil || e.Windows[2] == nil {
-		b.WriteString(" The weaker evidence conflicts (see Conflicts), so only the stronger tiers are stated.")
-	}
-	return b.String()
+	return fmt.Sprintf("**%s.** %s", mdEscape(eventName(e)), mdEscape(eventSentence(e)))
 }
 
-func joinAnd(list []string) string {
-	switch len(list) {
-	case 0:
-		return ""
-	case 1:
-		return list[0]
-	}
-	return strings.Join(list[:len(list)-1], "; it ") + "; and it " + list[len(list)-1]
-}
-
+// claimParagraph says what the verdict on a claim means, the verdict in
+// bold.
 func claimParagraph(c constraint.ClaimResult, events []constraint.EventResult) string {
-	eventName := c.Event
-	for _, e := range events {
-		if e.ID == c.Event && e.Label != "" {
-			eventName = "the " + e.Label + " (" + e.ID + ")"
-		}
-	}
-	by := ""
-	if c.By != "" {
-		by = " by " + c.By
-	}
-	head := fmt.Sprintf("The date claimed%s for %s, %s, is **%s**. ", mdEscape(by), mdEscape(eventName), mdEscape(c.DateText), c.Verdict)
-	tail := ""
-	switch c.Verdict {
-	case constraint.Doubtful:
-		tail = fmt.Sprintf(" Of the claim, %s remains within the firm window.", spansText(c.Surviving[network.Firm]))
-	case constraint.Improbable:
-		tail = fmt.Sprintf(" Of the claim, %s remains possible on the hard evidence alone.", spansText(c.Surviving[network.Hard]))
-	}
-	return head + mdEscape(c.Sentence) + tail
+	lead, rest := claimSentences(c, events)
+	return fmt.Sprintf("%s **%s**. %s", mdEscape(lead), c.Verdict, mdEscape(rest))
 }
