@@ -117,8 +117,9 @@ func TestModernAgainstSources(t *testing.T) {
 		{"gel-pen-ink", materials.KindMade, "", "../1984", "Wikipedia (ja), Sakura Kurepasu"},
 		// TIME, 12 February 1979: Paper Mate's erasable Eraser Mate to be launched in spring 1979.
 		{"erasable-ballpoint-ink", materials.KindMade, "", "1979", "TIME, 12 February 1979"},
-		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, toluidine red 1905.
-		{"toluidine-red", materials.KindMade, "", "1905", "Herbst and Hunger 2004 (from memory)"},
+		// Heritage Science 2022, Farbenbuch colour charts, Table 1: Pigment Red 3, discovery or first synthesis 1904; found in a 1925 chart.
+		{"toluidine-red", materials.KindMade, "", "1904", "Heritage Science 2022, Farbenbuch charts, Table 1"},
+		{"toluidine-red", materials.KindAttested, "DE", "1925", "Heritage Science 2022, Farbenbuch charts, Table 1"},
 		// Bagchi, Private Investment in India 1900-1939 (1972), ch. 13, The industry up to 1924: Bally Paper Mills, one machine, 1870.
 		{"fourdrinier-machine-paper", materials.KindArrived, "IN", "1870", "Bagchi 1972, ch. 13"},
 		// chinaadvent.com, Tianzhang Recording Paper Factory, Origins: Shanghai Machine Paper Mill approved in 1882.
@@ -188,6 +189,9 @@ func TestModernAgainstSources(t *testing.T) {
 		{"nitrocellulose-lacquer-duco", materials.KindAttested, "US", "1936/1937", "JAIC 2013, Siqueiros, abstract"},
 		// Trout, Environmental Health Perspectives 1972: PCB carbonless paper in ledger-paper waste about 1970-71.
 		{"pcb-carbonless-copy-paper", materials.KindAttested, "US", "1970/1971", "Trout 1972"},
+		// Vastrick, Carbonless paper (CRC chapter), abstract: patent filed 30 June 1953, first commercial sale 26 March 1954.
+		{"pcb-carbonless-copy-paper", materials.KindMade, "", "1953-06-30", "Vastrick, Carbonless paper, abstract"},
+		{"pcb-carbonless-copy-paper", materials.KindSold, "", "1954-03-26", "Vastrick, Carbonless paper, abstract"},
 		// Heritage 6 (2023), abstract: fluorescent paints in the UBUNTU mural, Reggio Emilia, 2018.
 		{"fluorescent-daylight-pigment", materials.KindAttested, "IT", "2018", "Heritage 2023, UBUNTU mural"},
 		// Ferreira et al., Studies in Conservation 58 (2013), abstract: Portuguese painters using PVAc emulsion paints in 1961.

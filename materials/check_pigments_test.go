@@ -31,6 +31,10 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"arylide-yellow-5gx", materials.KindMade, "", "1909/..", "Seilnacht, Brillantgelb PY74, Geschichte"},
 		// chsopensource.org, PO 5: dated 1907.
 		{"dinitraniline-orange", materials.KindMade, "", "1907", "chsopensource.org, PO 5"},
+		// TIB textbook (record 1867460173), Zur Geschichte der Azofarbstoffe: the naphthol azo dyes after chrysoidine (1876); lower bounds only.
+		{"parachlor-red", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
+		{"orthonitraniline-orange", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
+		{"permanent-red-2b", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
 		// sandrinemaugy.com (2016), perylene family: the first perylene discovered in 1912.
 		{"perylene-scarlet", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
 		{"perylene-maroon", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
@@ -79,10 +83,7 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"diarylide-yellow-aamx", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
 		{"diarylide-yellow-aaot", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
 		{"diarylide-yellow-hr", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
-		{"parachlor-red", materials.KindMade, "", "1880/..", "Herbst and Hunger 2004 (from memory)"},
-		{"orthonitraniline-orange", materials.KindMade, "", "1880/..", "Herbst and Hunger 2004 (from memory)"},
 		{"dinitraniline-orange", materials.KindMade, "", "1907", "Herbst and Hunger 2004 (from memory)"},
-		{"permanent-red-2b", materials.KindMade, "", "1903/..", "Herbst and Hunger 2004 (from memory)"},
 		{"naphthol-red-f3rk", materials.KindMade, "", "1960/1969", "Herbst and Hunger 2004 (from memory)"},
 		{"perylene-scarlet", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
 		{"perylene-maroon", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
