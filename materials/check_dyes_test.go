@@ -289,7 +289,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"chrysophenine-g", materials.KindMade, "", "1884~", "TIB textbook 1867460173, history of the azo dyes"},
 		{"rhodamine-6g", materials.KindMade, "", "1892~", "Colour Index (from memory)"},
 		{"phloxine-b", materials.KindMade, "", "187X/188X", "Colour Index (from memory)"},
-		{"pararosaniline", materials.KindMade, "", "1856/1878", "Zollinger (from memory)"},
+		// de Keijzer et al., triarylmethane dyes, abstract: the group began with Natanson's fuchsine of 1856 (lower bound).
+		{"pararosaniline", materials.KindMade, "", "1856/..", "de Keijzer et al., triarylmethane dyes, abstract"},
 		// Meldola 1891, dated list: the phosgene colours of the rosaniline group introduced in 1883 (class year, approximate).
 		{"victoria-blue-r", materials.KindMade, "", "1883~", "Meldola 1891, dated list"},
 		{"naphthol-blue-black", materials.KindMade, "", "1891~", "Colour Index (from memory)"},

@@ -173,6 +173,8 @@ func TestModernAgainstSources(t *testing.T) {
 		// Journal of Raman Spectroscopy 2008 (DOI 10.1002/jrs.2021), abstract: PG 7 in Beckmann 1950; a naphthol AS red in Baselitz 1964/65.
 		{"phthalocyanine-green", materials.KindAttested, "US", "1950", "J. Raman Spectrosc. 2008, abstract"},
 		{"naphthol-as-red", materials.KindAttested, "DE", "1964/1965", "J. Raman Spectrosc. 2008, abstract"},
+		// German Wikipedia, Naphthol AS, Geschichte: the anilide found as a coupling component in 1911 (lower bound).
+		{"naphthol-as-red", materials.KindMade, "", "1911/..", "de.wikipedia, Naphthol AS, Geschichte"},
 		// CAMEO, "Phthalocyanine blue": ICI marketed Monastral blue in 1935.
 		{"phthalocyanine-blue", materials.KindArrived, "GB", "1935", "CAMEO, Phthalocyanine blue"},
 		// Gettens and Stout 1942, p. 132, and Paint Making and Color Grinding (1913): printing-ink makers had a para red before 1894.

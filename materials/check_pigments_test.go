@@ -100,7 +100,8 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"nickel-azo-green", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
 		{"cobalt-titanate-green", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
 		{"cerium-sulphide", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
-		{"cerium-sulphide", materials.KindSold, "", "199X?", "Herbst and Hunger 2004 (from memory)"},
+		// Elsevier 2001 abstract on gamma-Ce2S3: used as a safe red pigment for plastics by 2001 (start open).
+		{"cerium-sulphide", materials.KindSold, "", "../2001", "Elsevier 2001 abstract, gamma-Ce2S3"},
 	}
 	checkSourceRows(t, d, pigmentsFile, rows)
 }
