@@ -45,7 +45,8 @@ func TestModernAgainstSources(t *testing.T) {
 		// MFA Boston, CAMEO, "Red lake C": first synthesised in Germany in 1902.
 		{"red-lake-c", materials.KindMade, "", "1902", "CAMEO, Red lake C"},
 		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, Hansa Yellow G found 1909.
-		{"hansa-yellow-g", materials.KindMade, "", "1909", "Herbst and Hunger 2004 (from memory)"},
+		// Chemie der organischen Farbstoffe (TIB record 1860183395), p. 48: the first azo dye, 1859 (lower bound).
+		{"hansa-yellow-g", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
 		// Messier, Baas, Tafilowski and Varga, JAIC 44 (2005), abstract: first brightener in samples of 1950-54.
 		{"optical-brightener-photographic-paper", materials.KindMade, "", "1950/1954", "Messier et al. 2005, abstract"},
 		// Wikipedia, "Acrylic paint", History: Rowney's Cryla of 1963, the first artists' acrylic in Europe.
