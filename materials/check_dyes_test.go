@@ -298,6 +298,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"orange-g", materials.KindMade, "", "1878~", "Meldola 1891, naphthol azo dyes"},
 		// TIB textbook (record 1867460173): Poirrier's Oranges and the tropaeolins after chrysoidine (Witt, 1876).
 		{"methyl-orange", materials.KindMade, "", "1876~", "TIB textbook 1867460173, history of the azo dyes"},
+		// CAMEO, Sulfur dye: the first sulphur dye in 1873; sulphur black among them (lower bound).
+		{"sulphur-black-t", materials.KindMade, "", "1873/..", "CAMEO, Sulfur dye"},
 		{"hydron-blue", materials.KindMade, "", "1908~", "Colour Index (from memory)"},
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
