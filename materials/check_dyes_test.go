@@ -300,7 +300,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"methyl-orange", materials.KindMade, "", "1876~", "TIB textbook 1867460173, history of the azo dyes"},
 		// CAMEO, Sulfur dye: the first sulphur dye in 1873; sulphur black among them (lower bound).
 		{"sulphur-black-t", materials.KindMade, "", "1873/..", "CAMEO, Sulfur dye"},
-		{"hydron-blue", materials.KindMade, "", "1908~", "Colour Index (from memory)"},
+		// CAMEO, Sulfur dye: the first sulphur dye in 1873; indophenol among them (lower bound for the sulphurised Hydron blue).
+		{"hydron-blue", materials.KindMade, "", "1873/..", "CAMEO, Sulfur dye"},
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
 		// Byfield, TSA Symposium 1994, pp. 45-51, opening section: Yoruba dyers took up synthetic dyes from the 1930s.

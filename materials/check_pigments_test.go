@@ -95,7 +95,8 @@ func TestPigmentsAgainstSources(t *testing.T) {
 
 		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments.
 		{"diarylide-yellow-aaa", materials.KindSold, "", "1935~", "Herbst and Hunger 2004 (from memory)"},
-		{"dinitraniline-orange", materials.KindMade, "", "1907", "Herbst and Hunger 2004 (from memory)"},
+		// TIB textbook (record 1867460173): the naphthol azo dyes after chrysoidine (1876); lower bound.
+		{"dinitraniline-orange", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
 		{"naphthol-red-f3rk", materials.KindMade, "", "1960/1969", "Herbst and Hunger 2004 (from memory)"},
 		{"perylene-scarlet", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
 		{"perylene-maroon", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
