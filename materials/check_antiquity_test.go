@@ -301,8 +301,6 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"han-purple", materials.KindAttested, "CN", "-0245/-0209", "Liu et al. 2007"},
 		// Shugar et al. 2019, abstract: Kew samples of 1883.
 		{"indian-yellow", materials.KindAttested, "IN", "1883", "Shugar et al. 2019, abstract"},
-		// The Eclectic Light Company (blog, weak source): Noli me tangere, 1368-70.
-		{"lead-tin-yellow-ii", materials.KindAttested, "IT", "1368/1370", "Eclectic Light Company 2018"},
 		// Wikipedia, "Lead-tin-yellow", History and captions: Titian, Rembrandt, Vermeer.
 		{"lead-tin-yellow-i", materials.KindAttested, "IT", "1520/1523", "Wikipedia, Lead-tin-yellow, captions"},
 		{"lead-tin-yellow-i", materials.KindAttested, "NL", "1635/1638", "Wikipedia, Lead-tin-yellow, captions"},

@@ -263,7 +263,8 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"brilliant-crocein-m", materials.KindMade, "", "1885", "de.wikipedia, Acid Red 73"},
 		// Tamburini et al. 2023, Karen garments: orange I in the later textiles; made date from memory.
 		{"orange-i", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
-		{"orange-i", materials.KindMade, "", "1876~", "Colour Index (from memory)"},
+		// TIB textbook (record 1867460173), Zur Geschichte der Azofarbstoffe: Poirrier's Oranges and the tropaeolins after chrysoidine (Witt, 1876).
+		{"orange-i", materials.KindMade, "", "1876~", "TIB textbook 1867460173, history of the azo dyes"},
 		// Japan Blue (company blog), 2017-04-22: synthetic indigo imported into Japan from Meiji 31 (1898).
 		{"synthetic-indigo", materials.KindArrived, "JP", "1898", "Japan Blue, 日本の藍と明治 −インド藍"},
 		// kraska.biz, Sulfur compounds as chromophores, History (web, no author): Immedial black 1897, Sulfur Black T 1899.
@@ -282,16 +283,25 @@ func TestDyesAgainstSources(t *testing.T) {
 		// Meldola 1891, salicylic acid dyes and benzidine colours: chrysamines in use by 1891; the first benzidine colours 1884.
 		{"chrysamine-g", materials.KindMade, "", "1884~/1891", "Meldola 1891, salicylic acid dyes"},
 		// From memory, not read here (Colour Index; Zollinger): approximate dates of dyes added without a source read.
-		{"benzopurpurin-4b", materials.KindMade, "", "1885~", "Colour Index (from memory)"},
-		{"chrysophenine-g", materials.KindMade, "", "1886~", "Colour Index (from memory)"},
+		// Meldola 1891, benzidine colours: Böttiger's first benzidine disazo colours of 1884; tolidine forms the same tetrazo salts (class year, approximate).
+		{"benzopurpurin-4b", materials.KindMade, "", "1884~", "Meldola 1891, azo scarlets and benzidine colours"},
+		// TIB textbook (record 1867460173): Congo red of 1884 the first direct cotton dye, a host of similar ones after it (class year, approximate).
+		{"chrysophenine-g", materials.KindMade, "", "1884~", "TIB textbook 1867460173, history of the azo dyes"},
 		{"rhodamine-6g", materials.KindMade, "", "1892~", "Colour Index (from memory)"},
 		{"phloxine-b", materials.KindMade, "", "187X/188X", "Colour Index (from memory)"},
-		{"pararosaniline", materials.KindMade, "", "1856/1878", "Zollinger (from memory)"},
-		{"victoria-blue-r", materials.KindMade, "", "1883~", "Colour Index (from memory)"},
+		// de Keijzer et al., triarylmethane dyes, abstract: the group began with Natanson's fuchsine of 1856 (lower bound).
+		{"pararosaniline", materials.KindMade, "", "1856/..", "de Keijzer et al., triarylmethane dyes, abstract"},
+		// Meldola 1891, dated list: the phosgene colours of the rosaniline group introduced in 1883 (class year, approximate).
+		{"victoria-blue-r", materials.KindMade, "", "1883~", "Meldola 1891, dated list"},
 		{"naphthol-blue-black", materials.KindMade, "", "1891~", "Colour Index (from memory)"},
-		{"orange-g", materials.KindMade, "", "1878~", "Colour Index (from memory)"},
-		{"methyl-orange", materials.KindMade, "", "1876~", "Colour Index (from memory)"},
-		{"hydron-blue", materials.KindMade, "", "1908~", "Colour Index (from memory)"},
+		// Meldola 1891, naphthol azo dyes: Hoechst's beta-naphthol disulpho-acids and their orange-to-claret dyes, 1878 (class year, approximate).
+		{"orange-g", materials.KindMade, "", "1878~", "Meldola 1891, naphthol azo dyes"},
+		// TIB textbook (record 1867460173): Poirrier's Oranges and the tropaeolins after chrysoidine (Witt, 1876).
+		{"methyl-orange", materials.KindMade, "", "1876~", "TIB textbook 1867460173, history of the azo dyes"},
+		// CAMEO, Sulfur dye: the first sulphur dye in 1873; sulphur black among them (lower bound).
+		{"sulphur-black-t", materials.KindMade, "", "1873/..", "CAMEO, Sulfur dye"},
+		// CAMEO, Sulfur dye: the first sulphur dye in 1873; indophenol among them (lower bound for the sulphurised Hydron blue).
+		{"hydron-blue", materials.KindMade, "", "1873/..", "CAMEO, Sulfur dye"},
 		// From memory, not read here: Colour Index, auramine by Caro and Kern, 1883.
 		{"auramine", materials.KindMade, "", "1883", "Colour Index (from memory)"},
 		// Byfield, TSA Symposium 1994, pp. 45-51, opening section: Yoruba dyers took up synthetic dyes from the 1930s.

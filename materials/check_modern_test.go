@@ -45,7 +45,8 @@ func TestModernAgainstSources(t *testing.T) {
 		// MFA Boston, CAMEO, "Red lake C": first synthesised in Germany in 1902.
 		{"red-lake-c", materials.KindMade, "", "1902", "CAMEO, Red lake C"},
 		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, Hansa Yellow G found 1909.
-		{"hansa-yellow-g", materials.KindMade, "", "1909", "Herbst and Hunger 2004 (from memory)"},
+		// Chemie der organischen Farbstoffe (TIB record 1860183395), p. 48: the first azo dye, 1859 (lower bound).
+		{"hansa-yellow-g", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
 		// Messier, Baas, Tafilowski and Varga, JAIC 44 (2005), abstract: first brightener in samples of 1950-54.
 		{"optical-brightener-photographic-paper", materials.KindMade, "", "1950/1954", "Messier et al. 2005, abstract"},
 		// Wikipedia, "Acrylic paint", History: Rowney's Cryla of 1963, the first artists' acrylic in Europe.
@@ -117,8 +118,9 @@ func TestModernAgainstSources(t *testing.T) {
 		{"gel-pen-ink", materials.KindMade, "", "../1984", "Wikipedia (ja), Sakura Kurepasu"},
 		// TIME, 12 February 1979: Paper Mate's erasable Eraser Mate to be launched in spring 1979.
 		{"erasable-ballpoint-ink", materials.KindMade, "", "1979", "TIME, 12 February 1979"},
-		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments, toluidine red 1905.
-		{"toluidine-red", materials.KindMade, "", "1905", "Herbst and Hunger 2004 (from memory)"},
+		// Heritage Science 2022, Farbenbuch colour charts, Table 1: Pigment Red 3, discovery or first synthesis 1904; found in a 1925 chart.
+		{"toluidine-red", materials.KindMade, "", "1904", "Heritage Science 2022, Farbenbuch charts, Table 1"},
+		{"toluidine-red", materials.KindAttested, "DE", "1925", "Heritage Science 2022, Farbenbuch charts, Table 1"},
 		// Bagchi, Private Investment in India 1900-1939 (1972), ch. 13, The industry up to 1924: Bally Paper Mills, one machine, 1870.
 		{"fourdrinier-machine-paper", materials.KindArrived, "IN", "1870", "Bagchi 1972, ch. 13"},
 		// chinaadvent.com, Tianzhang Recording Paper Factory, Origins: Shanghai Machine Paper Mill approved in 1882.
@@ -172,6 +174,8 @@ func TestModernAgainstSources(t *testing.T) {
 		// Journal of Raman Spectroscopy 2008 (DOI 10.1002/jrs.2021), abstract: PG 7 in Beckmann 1950; a naphthol AS red in Baselitz 1964/65.
 		{"phthalocyanine-green", materials.KindAttested, "US", "1950", "J. Raman Spectrosc. 2008, abstract"},
 		{"naphthol-as-red", materials.KindAttested, "DE", "1964/1965", "J. Raman Spectrosc. 2008, abstract"},
+		// German Wikipedia, Naphthol AS, Geschichte: the anilide found as a coupling component in 1911 (lower bound).
+		{"naphthol-as-red", materials.KindMade, "", "1911/..", "de.wikipedia, Naphthol AS, Geschichte"},
 		// CAMEO, "Phthalocyanine blue": ICI marketed Monastral blue in 1935.
 		{"phthalocyanine-blue", materials.KindArrived, "GB", "1935", "CAMEO, Phthalocyanine blue"},
 		// Gettens and Stout 1942, p. 132, and Paint Making and Color Grinding (1913): printing-ink makers had a para red before 1894.
@@ -188,6 +192,9 @@ func TestModernAgainstSources(t *testing.T) {
 		{"nitrocellulose-lacquer-duco", materials.KindAttested, "US", "1936/1937", "JAIC 2013, Siqueiros, abstract"},
 		// Trout, Environmental Health Perspectives 1972: PCB carbonless paper in ledger-paper waste about 1970-71.
 		{"pcb-carbonless-copy-paper", materials.KindAttested, "US", "1970/1971", "Trout 1972"},
+		// Vastrick, Carbonless paper (CRC chapter), abstract: patent filed 30 June 1953, first commercial sale 26 March 1954.
+		{"pcb-carbonless-copy-paper", materials.KindMade, "", "1953-06-30", "Vastrick, Carbonless paper, abstract"},
+		{"pcb-carbonless-copy-paper", materials.KindSold, "", "1954-03-26", "Vastrick, Carbonless paper, abstract"},
 		// Heritage 6 (2023), abstract: fluorescent paints in the UBUNTU mural, Reggio Emilia, 2018.
 		{"fluorescent-daylight-pigment", materials.KindAttested, "IT", "2018", "Heritage 2023, UBUNTU mural"},
 		// Ferreira et al., Studies in Conservation 58 (2013), abstract: Portuguese painters using PVAc emulsion paints in 1961.

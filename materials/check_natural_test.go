@@ -36,8 +36,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 		{"henna", materials.KindMade, "", "-3399%", "Sienna, Henna in the ancient world (essay)"},
 		// Encyclopaedia Britannica 1911, Henna: used by the ancient Egyptians, as their mummies show; no date is given, so the start is left open.
 		{"henna", materials.KindMade, "", "../-0331", "Encyclopaedia Britannica 1911, Henna"},
-		// Sienna, Henna in the ancient world (essay): Hair of predynastic burials at Nekhen (Hierakonpolis), about 3400 BCE.
-		{"henna", materials.KindAttested, "EG", "-3399%", "Sienna, Henna in the ancient world (essay)"},
 		// TCF DATU, Walnut, Historical Data: Pliny (Natural History, about 77 CE) gives a recipe for dyeing grey hair brown with walnut; Greek and Roman writers knew the tree; the ...
 		{"walnut-hull-dye", materials.KindMade, "", "../0077", "TCF DATU, Walnut, Historical Data"},
 		// Pliny, Natural History 15.24 (Bostock and Riley, Perseus): walnut husk dyes wool; young nuts redden the hair.

@@ -31,6 +31,30 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"arylide-yellow-5gx", materials.KindMade, "", "1909/..", "Seilnacht, Brillantgelb PY74, Geschichte"},
 		// chsopensource.org, PO 5: dated 1907.
 		{"dinitraniline-orange", materials.KindMade, "", "1907", "chsopensource.org, PO 5"},
+		// TIB textbook (record 1867460173), Zur Geschichte der Azofarbstoffe: the naphthol azo dyes after chrysoidine (1876); lower bounds only.
+		{"parachlor-red", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
+		{"orthonitraniline-orange", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
+		{"permanent-red-2b", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
+		// Chemie der organischen Farbstoffe (TIB record 1860183395), p. 48: the first azo dye, Griess's aminoazobenzene, 1859 (lower bounds).
+		{"hansa-yellow-10g", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
+		{"arylide-yellow-rn", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
+		{"arylide-yellow-4gx", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
+		{"arylide-yellow-5gx", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
+		{"arylide-yellow-fgl", materials.KindMade, "", "1859/..", "Chemie der organischen Farbstoffe, p. 48"},
+		// Christie and Abel, Monoazo pigments based on acetoacetanilides, abstract: on the market from the early twentieth century.
+		{"arylide-yellow-rn", materials.KindSold, "", "19XX", "Christie and Abel, monoazo acetoacetanilides, abstract"},
+		{"arylide-yellow-4gx", materials.KindSold, "", "19XX", "Christie and Abel, monoazo acetoacetanilides, abstract"},
+		{"arylide-yellow-5gx", materials.KindSold, "", "19XX", "Christie and Abel, monoazo acetoacetanilides, abstract"},
+		{"arylide-yellow-fgl", materials.KindSold, "", "19XX", "Christie and Abel, monoazo acetoacetanilides, abstract"},
+		// Meldola 1891, benzidine colours: the first disazo colours derived from benzidine, Böttiger 1884 (lower bounds).
+		{"diarylide-yellow-aaa", materials.KindMade, "", "1884/..", "Meldola 1891, azo scarlets and benzidine colours"},
+		{"diarylide-yellow-aamx", materials.KindMade, "", "1884/..", "Meldola 1891, azo scarlets and benzidine colours"},
+		{"diarylide-yellow-aaot", materials.KindMade, "", "1884/..", "Meldola 1891, azo scarlets and benzidine colours"},
+		{"diarylide-yellow-hr", materials.KindMade, "", "1884/..", "Meldola 1891, azo scarlets and benzidine colours"},
+		// Christie and Abel 2021, diarylide yellows, abstract: commercialised in the early twentieth century.
+		{"diarylide-yellow-aamx", materials.KindSold, "", "19XX", "Christie and Abel 2021, diarylides, abstract"},
+		{"diarylide-yellow-aaot", materials.KindSold, "", "19XX", "Christie and Abel 2021, diarylides, abstract"},
+		{"diarylide-yellow-hr", materials.KindSold, "", "19XX", "Christie and Abel 2021, diarylides, abstract"},
 		// sandrinemaugy.com (2016), perylene family: the first perylene discovered in 1912.
 		{"perylene-scarlet", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
 		{"perylene-maroon", materials.KindMade, "", "1912/..", "sandrinemaugy.com 2016, perylene family"},
@@ -70,19 +94,9 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"nickel-titanate-yellow", materials.KindMade, "", "19XX", "de.wikipedia, Mischphasenoxidpigment"},
 
 		// From memory, not read here: Herbst and Hunger, Industrial Organic Pigments.
-		{"hansa-yellow-10g", materials.KindMade, "", "1909/1912", "Herbst and Hunger 2004 (from memory)"},
-		{"arylide-yellow-rn", materials.KindMade, "", "1909/..", "Herbst and Hunger 2004 (from memory)"},
-		{"arylide-yellow-4gx", materials.KindMade, "", "1909/..", "Herbst and Hunger 2004 (from memory)"},
-		{"arylide-yellow-fgl", materials.KindMade, "", "1909/..", "Herbst and Hunger 2004 (from memory)"},
-		{"diarylide-yellow-aaa", materials.KindMade, "", "1911", "Herbst and Hunger 2004 (from memory)"},
 		{"diarylide-yellow-aaa", materials.KindSold, "", "1935~", "Herbst and Hunger 2004 (from memory)"},
-		{"diarylide-yellow-aamx", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
-		{"diarylide-yellow-aaot", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
-		{"diarylide-yellow-hr", materials.KindMade, "", "1911/..", "Herbst and Hunger 2004 (from memory)"},
-		{"parachlor-red", materials.KindMade, "", "1880/..", "Herbst and Hunger 2004 (from memory)"},
-		{"orthonitraniline-orange", materials.KindMade, "", "1880/..", "Herbst and Hunger 2004 (from memory)"},
-		{"dinitraniline-orange", materials.KindMade, "", "1907", "Herbst and Hunger 2004 (from memory)"},
-		{"permanent-red-2b", materials.KindMade, "", "1903/..", "Herbst and Hunger 2004 (from memory)"},
+		// TIB textbook (record 1867460173): the naphthol azo dyes after chrysoidine (1876); lower bound.
+		{"dinitraniline-orange", materials.KindMade, "", "1876/..", "TIB textbook 1867460173, history of the azo dyes"},
 		{"naphthol-red-f3rk", materials.KindMade, "", "1960/1969", "Herbst and Hunger 2004 (from memory)"},
 		{"perylene-scarlet", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
 		{"perylene-maroon", materials.KindMade, "", "1913/..", "Herbst and Hunger 2004 (from memory)"},
@@ -99,7 +113,8 @@ func TestPigmentsAgainstSources(t *testing.T) {
 		{"nickel-azo-green", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
 		{"cobalt-titanate-green", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
 		{"cerium-sulphide", materials.KindMade, "", "19XX", "Herbst and Hunger 2004 (from memory)"},
-		{"cerium-sulphide", materials.KindSold, "", "199X?", "Herbst and Hunger 2004 (from memory)"},
+		// Elsevier 2001 abstract on gamma-Ce2S3: used as a safe red pigment for plastics by 2001 (start open).
+		{"cerium-sulphide", materials.KindSold, "", "../2001", "Elsevier 2001 abstract, gamma-Ce2S3"},
 	}
 	checkSourceRows(t, d, pigmentsFile, rows)
 }
