@@ -420,3 +420,38 @@ func BenchmarkLookupUnknown(b *testing.B) {
 		}
 	}
 }
+
+// TestBuiltinReach holds the built-in dataset to what the project promises
+// of it, as `terminus materials stats` counts: its breadth, its own proof
+// by attestations, and how well it is sourced (every source typed, at least
+// 97 % of milestones read in their source, at most 15 resting on a weak
+// source alone).
+func TestBuiltinReach(t *testing.T) {
+	d := builtinOrFatal(t)
+	s := d.Stats()
+	for _, c := range []struct {
+		what      string
+		got, want int
+	}{
+		{"materials", s.Materials, 380},
+		{"arrivals", s.ByKind[KindArrived], 320},
+		{"places with arrivals", len(s.ArrivedByPlace), 50},
+		{"attestations", s.Attested, 100},
+		{"materials with an attestation", s.AttestedMaterials, 60},
+	} {
+		if c.got < c.want {
+			t.Errorf("%s: %d, want at least %d", c.what, c.got, c.want)
+		}
+	}
+	if share := s.DocumentedShare(); share < 0.97 {
+		t.Errorf("documented: %.1f%%, want at least 97%%", 100*share)
+	}
+	if s.WeakAlone > 15 {
+		t.Errorf("milestones resting on a weak source alone: %d, want at most 15", s.WeakAlone)
+	}
+	for _, src := range d.Sources {
+		if src.Type == "" {
+			t.Errorf("source %q (%s:%d) has no type", src.Key, src.File, src.Line)
+		}
+	}
+}
