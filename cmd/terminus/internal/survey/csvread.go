@@ -140,15 +140,10 @@ func (in *Input) nextCSV() (rawRecord, error) {
 			return rawRecord{}, err
 		}
 		if fail != "" {
-			id := ""
-			if i, ok := in.known[colID]; ok && i < len(s.fields) {
-				id = strings.TrimSpace(s.fields[i].Text)
-			}
-			col := s.start.Column
-			q.pop()
-			r := in.errorRecord(no, col, "a quoted field opens here and "+fail,
+			r := in.errorRecord(no, s.start.Column, "a quoted field opens here and "+fail,
 				"close the quote, or write a quote inside a quoted field as \"\"; the lines after this one are read as rows of their own")
-			r.id = id
+			r.id = in.idOf(s.fields)
+			q.pop()
 			return r, nil
 		}
 		for i := 1; i < n; i++ {
@@ -240,9 +235,7 @@ func (in *Input) csvRecord(n int) rawRecord {
 			r := in.errorRecord(first, 0, "", "")
 			r.err = recordErr(in.DisplayName(), l.no, col, "the text is not valid UTF-8", "save the file as UTF-8 in your editor")
 			r.lines = n
-			if i, ok := in.known[colID]; ok && i < len(s.fields) {
-				r.id = strings.ToValidUTF8(strings.TrimSpace(s.fields[i].Text), "\uFFFD")
-			}
+			r.id = in.idOf(s.fields)
 			return r
 		}
 	}
@@ -254,4 +247,13 @@ func (in *Input) csvRecord(n int) rawRecord {
 // errorRecord is a record of one line that cannot be read.
 func (in *Input) errorRecord(line, col int, msg, suggest string) rawRecord {
 	return rawRecord{in: in, line: line, lines: 1, err: recordErr(in.DisplayName(), line, col, msg, suggest)}
+}
+
+// idOf is the id of an error record, when the fields read so far hold it
+// (with any invalid UTF-8 replaced); "" otherwise.
+func (in *Input) idOf(fields []csvField) string {
+	if i, ok := in.known[colID]; ok && i < len(fields) {
+		return strings.ToValidUTF8(strings.TrimSpace(fields[i].Text), "\uFFFD")
+	}
+	return ""
 }
