@@ -74,6 +74,15 @@ func openFuzz(t *testing.T, text []byte, f Format) (*Input, bool) {
 // one record or a blank line, and every record a case or an error of our
 // type placed on its line, never a panic; and that the id pre-pass keeps
 // every column in its place.
+//
+// Each record goes through the reasoner too, so a record whose analysis
+// does not end stalls the fuzzer. That is how a run once hit its deadline
+// with a busy worker: the mutator grows lines with many records of one of
+// several dates, and the network solver's search for the cheapest
+// correction had no cap (forty such records never ended). The solver's
+// work budget ends it; the stalls of a few tens of seconds that remain in
+// the progress lines (0 execs/sec) are the minimization of new inputs,
+// whose executions are counted only when it ends.
 func FuzzJSONLine(f *testing.F) {
 	for _, s := range []string{
 		`{"id": "a-1", "title": "t", "place": "NL", "findings": [{"material": "lead white"}], "claims": [{"date": "1650"}]}`,
