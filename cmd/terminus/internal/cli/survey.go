@@ -6,6 +6,7 @@ import (
 	"io"
 	"os"
 	"runtime/debug"
+	"strconv"
 
 	"github.com/spf13/cobra"
 
@@ -41,6 +42,13 @@ func isTerminal(w io.Writer) bool {
 	return err == nil && st.Mode()&os.ModeCharDevice != 0
 }
 
+// The garbage collector's settings for a survey (see tuneGC); the help
+// text quotes them.
+const (
+	surveyGCPercent      = 1000
+	surveyMemoryLimitMiB = 64
+)
+
 // tuneGC raises the garbage collector's target for a survey, unless the
 // user set GOGC or GOMEMLIMIT, and returns the function that puts the old
 // settings back. A survey's live heap is small and bounded (the reorder
@@ -53,8 +61,8 @@ func tuneGC() func() {
 	if os.Getenv("GOGC") != "" || os.Getenv("GOMEMLIMIT") != "" {
 		return func() {}
 	}
-	oldPercent := debug.SetGCPercent(1000)
-	oldLimit := debug.SetMemoryLimit(64 << 20)
+	oldPercent := debug.SetGCPercent(surveyGCPercent)
+	oldLimit := debug.SetMemoryLimit(surveyMemoryLimitMiB << 20)
 	return func() {
 		debug.SetGCPercent(oldPercent)
 		debug.SetMemoryLimit(oldLimit)
@@ -90,15 +98,20 @@ per record (windows per tier, verdicts, deciding evidence); md or html, a
 summary report with the counts and the excluded and improbable records first.
 
 A malformed record never stops the survey: it becomes an output record with
-its line and the error. The counts go to stderr (unless --quiet) and into md
-and html reports. A progress line is drawn on stderr when it is a terminal.
+its line and the error. In CSV, a quoted field may span lines only when it
+closes (its quote followed by a comma or the line's end) and the row then has
+the header's number of fields; otherwise the line that opens the quote is an
+error record and reading goes on at the next line. Every line read is
+accounted for: the counts (lines read = header + blank + lines in records;
+records = judged + errors) go to stderr (unless --quiet) and into md and
+html reports. A progress line is drawn on stderr when it is a terminal.
 
 The sensitivity check of check (re-solving under every other claim where
 sources disagree) is off by default here: it multiplies the work by the number
 of disagreements, and a collection is screened first, then its flagged records
 checked one by one. --sensitivity turns it on. Memory stays bounded however
 long the input; unless GOGC or GOMEMLIMIT is set, the survey runs the garbage
-collector at a 400 % target under a 64 MiB soft limit.
+collector at a ` + strconv.Itoa(surveyGCPercent) + ` % target under a ` + strconv.Itoa(surveyMemoryLimitMiB) + ` MiB soft limit.
 
 Exit status: 0 when every record was checked and all are consistent; 1 when a
 claim is not consistent or the evidence conflicts at the --fail-on tier or a
@@ -179,8 +192,9 @@ errors count toward exit 1); 2 for bad usage or an input that cannot be read.`,
 			}
 			if !quiet {
 				fmt.Fprintf(s.Err, "terminus: survey: %s\n", counts)
+				fmt.Fprintf(s.Err, "terminus: survey: %s\n", counts.Accounting())
 				if n := counts.Errors(); n > 0 {
-					fmt.Fprintf(s.Err, "terminus: survey: %d %s could not be checked; the output gives each with its line and the error\n", n, map[bool]string{true: "record", false: "records"}[n == 1])
+					fmt.Fprintf(s.Err, "terminus: survey: %d %s could not be checked; the output gives each with its line and the error\n", n, plural(n, "record", "records"))
 				}
 			}
 			if counts.Failing > 0 {

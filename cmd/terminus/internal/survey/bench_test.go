@@ -103,3 +103,35 @@ func BenchmarkParse(b *testing.B) {
 		})
 	}
 }
+
+// BenchmarkReadCSV splits the records of a CSV collection of 10,000 rows,
+// one in fifty with a quoted field over two lines, without parsing them:
+// the reader's own cost.
+func BenchmarkReadCSV(b *testing.B) {
+	var text bytes.Buffer
+	text.Write(benchCollection(10000, true))
+	for i := range 200 {
+		fmt.Fprintf(&text, "q-%d,\"Object\non two lines\",NL,1840,smalt,,,INV\n", i)
+	}
+	path := writeTemp(b, "c.csv", text.Bytes())
+	b.SetBytes(int64(text.Len()))
+	b.ReportAllocs()
+	for b.Loop() {
+		in, err := Open(path, nil, "")
+		if err != nil {
+			b.Fatal(err)
+		}
+		n := 0
+		for {
+			_, err := in.next()
+			if err != nil {
+				break
+			}
+			n++
+		}
+		in.Close()
+		if n != 10200 {
+			b.Fatalf("%d records", n)
+		}
+	}
+}

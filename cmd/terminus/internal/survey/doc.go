@@ -9,8 +9,11 @@
 // JSON Lines: one case per line, in the case file schema (the same keys as
 // a YAML case file, written as a JSON object), plus an optional "id" (a
 // string or a number) that is kept in the output. Each line is decoded
-// strictly by [constraint.ParseCase]; an error carries the file, the line
-// and the column within the line. Blank lines are not records.
+// strictly by [casefile.Parse]; an error carries the file, the line and
+// the column within the line. Every physical line is one record, save the
+// blank ones (nothing but spaces, tabs and carriage returns): a line of
+// invalid UTF-8, of other white space or over the size limit is an error
+// record of its own.
 //
 // CSV: a header row is required; names are read without regard to case,
 // and a space or hyphen counts as an underscore. The columns read are:
@@ -27,18 +30,33 @@
 //	not_after   a documented latest date (a firm record, id not-after)
 //
 // Every other column is free: it is kept through to the csv and jsonl
-// output unchanged. A header name within two edits of a known column
-// ("matrials") is taken for a typing error and stops the survey, rather
-// than passing the column through unread. Each row is one event,
+// output unchanged. A header name that the one rule of every "did you
+// mean" ([spell.Nearest]) takes for a slip of a known column ("matrials")
+// stops the survey, rather than passing the column through unread; names
+// of fewer than four letters are always free. Each row is one event,
 // "making"; findings are finding-1, finding-2 … and claims claim-1 … in
-// the order written. Fields follow RFC 4180 (quotes, "" inside quotes, a
-// quoted field may span lines), read leniently: a stray quote inside an
-// unquoted field is kept as text.
+// the order written. Fields follow RFC 4180 (quotes, "" inside quotes),
+// read leniently within a line: a stray quote inside an unquoted field,
+// and text after a closing quote, are kept as text.
 //
-// A line or a CSV record longer than [MaxLine] bytes is a record error, so
-// that one runaway line cannot exhaust the memory; a quoted field that runs
-// on past the limit is cut there, and reading goes on at the next line. A
-// quote left open at the end of a file is an error at the line it opens.
+// A quoted field may span lines only when it closes properly (its closing
+// quote followed by a comma or the end of the line), within [MaxLine]
+// bytes, and the row then has the header's number of fields. Otherwise the
+// line that opens the quote is an error record naming that line and
+// column, and reading goes on at the next line: one stray quote costs one
+// record, never the rows after it. Deciding so reads at most MaxLine bytes
+// ahead and costs linear work, however the quotes fall. A line longer than
+// MaxLine, and a record with invalid UTF-8, are error records too.
+//
+// # Every line accounted for
+//
+// Every physical line read is the header, a blank line, or a line of
+// exactly one output record. [Counts] says so: Lines = HeaderLines +
+// BlankLines + RecordLines, and Records = Judged + Errors;
+// [Counts.Accounting] writes it out for people, and the md and html
+// reports and the command's closing line on stderr carry it. The jsonl and
+// csv outputs have one row per input record, with its file and first
+// line, and nothing else.
 //
 // # Records and errors
 //

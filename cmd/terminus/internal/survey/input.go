@@ -8,8 +8,12 @@ import (
 	"io"
 	"os"
 	"path/filepath"
+	"slices"
 	"strings"
 	"sync/atomic"
+	"unicode/utf8"
+
+	"terminus/materials/spell"
 )
 
 // Format is the layout of an input file.
@@ -93,7 +97,12 @@ type Input struct {
 	known  map[string]int // CSV: known column → field index
 	free   []int          // CSV: field index of each free column
 	split  csvSplitter
+	csv    csvQueue
 	width  int // CSV: number of header fields
+
+	// The physical lines read, and of them the header rows and the blank
+	// lines; every other line belongs to a record (see [Counts]).
+	lines, header, blank int
 }
 
 // DisplayName is the name used in messages: the file name, or "stdin".
@@ -200,8 +209,12 @@ func (in *Input) Close() error {
 // normColumn folds a header name: case, surrounding space, and spaces or
 // hyphens for underscores ("Not before" is not_before).
 func normColumn(s string) string {
-	s = strings.ToLower(strings.TrimSpace(s))
-	return strings.NewReplacer(" ", "_", "-", "_").Replace(s)
+	return strings.Map(func(r rune) rune {
+		if r == ' ' || r == '-' {
+			return '_'
+		}
+		return r
+	}, strings.ToLower(strings.TrimSpace(s)))
 }
 
 // columnAlias returns the known column for another spelling of it.
@@ -216,6 +229,7 @@ func columnAlias(n string) (string, bool) {
 }
 
 func (in *Input) readHeader() error {
+	s := &in.split
 	for {
 		text, line, tooLong, err := in.lr.next()
 		if errors.Is(err, io.EOF) {
@@ -224,24 +238,34 @@ func (in *Input) readHeader() error {
 		if err != nil {
 			return &InputError{File: in.Name, Msg: fmt.Sprintf("cannot read the collection: %v", err), Err: err}
 		}
+		in.lines++
 		if tooLong {
 			return &InputError{File: in.Name, Line: line, Msg: "the header row is longer than 1 MiB"}
 		}
-		if len(bytes.TrimSpace(text)) == 0 {
+		if blank(text) {
+			in.blank++
 			continue
 		}
-		if !in.split.feed(text, line) {
+		in.header++
+		if !utf8.Valid(text) {
+			return &InputError{File: in.Name, Line: line, Msg: "the header row is not valid UTF-8", Suggest: "save the file as UTF-8 in your editor"}
+		}
+		s.collect = true
+		s.reset(line)
+		s.feed(text, line)
+		if s.inQuotes {
 			return &InputError{File: in.Name, Line: line, Msg: "the header row opens a quote that it does not close"}
 		}
+		s.finish()
 		in.known = map[string]int{}
-		in.width = len(in.split.fields)
+		in.width = len(s.fields)
 		known := Columns()
-		for i, f := range in.split.fields {
+		for i, f := range s.fields {
 			n := normColumn(f.Text)
 			if a, ok := columnAlias(n); ok {
 				n = a
 			}
-			if contains(known, n) {
+			if slices.Contains(known, n) {
 				if prev, dup := in.known[n]; dup {
 					return &InputError{File: in.Name, Line: line, Msg: fmt.Sprintf("the header names the column %q twice (fields %d and %d)", n, prev+1, i+1)}
 				}
@@ -263,106 +287,54 @@ func (in *Input) readHeader() error {
 	}
 }
 
-// nearColumn returns the known column within two edits of n, for a
-// misspelt header; "" when there is none or n is short.
+// nearColumn returns the known column that a header name is a slip of
+// spelling for, by the one rule of every "did you mean" ([spell.Nearest]);
+// "" when there is none. Names of fewer than four letters are never taken
+// for slips: two edits turn any two-letter name into "id".
 func nearColumn(n string, known []string) string {
-	if len(n) < 4 {
+	if utf8.RuneCountInString(n) < 4 {
 		return ""
 	}
-	for _, k := range known {
-		if d := editDistance(n, k); d > 0 && d <= 2 {
-			return k
-		}
+	if near := spell.Nearest(n, known, 1); len(near) > 0 {
+		return near[0]
 	}
 	return ""
-}
-
-func editDistance(a, b string) int {
-	prev := make([]int, len(b)+1)
-	cur := make([]int, len(b)+1)
-	for j := range prev {
-		prev[j] = j
-	}
-	for i := 1; i <= len(a); i++ {
-		cur[0] = i
-		for j := 1; j <= len(b); j++ {
-			cost := 1
-			if a[i-1] == b[j-1] {
-				cost = 0
-			}
-			cur[j] = min(prev[j]+1, cur[j-1]+1, prev[j-1]+cost)
-		}
-		prev, cur = cur, prev
-	}
-	return prev[len(b)]
-}
-
-func contains(list []string, s string) bool {
-	for _, x := range list {
-		if x == s {
-			return true
-		}
-	}
-	return false
 }
 
 // rawRecord is one record as read, before parsing: a JSON line or the
 // fields of a CSV row.
 type rawRecord struct {
 	in     *Input
-	line   int
+	line   int        // the first line
+	lines  int        // the number of physical lines
 	text   []byte     // JSON Lines: the line (a copy)
 	fields []csvField // CSV: the row (a copy)
 	err    error      // a record that could not even be split
+	id     string     // the id of an error record, when it can be read
 }
 
 // next reads the next record; io.EOF at the end. Blank lines are not
-// records and are skipped.
+// records and are skipped (and counted).
 func (in *Input) next() (rawRecord, error) {
+	if in.Format == CSV {
+		return in.nextCSV()
+	}
 	for {
 		text, line, tooLong, err := in.lr.next()
 		if errors.Is(err, io.EOF) {
-			if in.Format == CSV && in.split.open {
-				start := in.split.start.Line
-				if len(in.split.fields) > 0 {
-					start = in.split.fields[0].Line
-				}
-				in.split.finish()
-				return rawRecord{in: in, line: start, err: recordErr(in.Name, start, 0, "a quoted field opens here and is not closed before the end of the file", "close the quote, or write a quote inside a quoted field as \"\"")}, nil
-			}
 			return rawRecord{}, io.EOF
 		}
 		if err != nil {
 			return rawRecord{}, &InputError{File: in.Name, Line: line, Msg: fmt.Sprintf("cannot read the collection: %v", err), Err: err}
 		}
-		if in.Format == JSONL {
-			if tooLong {
-				return rawRecord{in: in, line: line, err: recordErr(in.Name, line, 0, fmt.Sprintf("the line is longer than %d bytes", MaxLine), "")}, nil
-			}
-			if len(bytes.TrimSpace(text)) == 0 {
-				continue
-			}
-			return rawRecord{in: in, line: line, text: bytes.Clone(text)}, nil
+		in.lines++
+		if tooLong {
+			return in.errorRecord(line, 0, fmt.Sprintf("the line is longer than %d bytes", MaxLine), ""), nil
 		}
-		if !in.split.open && len(bytes.TrimSpace(text)) == 0 {
+		if blank(text) {
+			in.blank++
 			continue
 		}
-		if tooLong || (in.split.open && in.split.size+len(text) > MaxLine) {
-			start := line
-			if in.split.open {
-				start = in.split.start.Line
-				if len(in.split.fields) > 0 {
-					start = in.split.fields[0].Line
-				}
-			}
-			in.split.open = false
-			return rawRecord{in: in, line: start, err: recordErr(in.Name, start, 0, fmt.Sprintf("the record is longer than %d bytes", MaxLine), "a quoted field may be missing its closing quote")}, nil
-		}
-		if !in.split.feed(text, line) {
-			continue
-		}
-		fields := make([]csvField, len(in.split.fields))
-		copy(fields, in.split.fields)
-		return rawRecord{in: in, line: fields[0].Line, fields: fields}, nil
+		return rawRecord{in: in, line: line, lines: 1, text: bytes.Clone(text)}, nil
 	}
 }

@@ -32,8 +32,6 @@ func NewJSONLWriter(w io.Writer, free []string) *JSONLWriter {
 	return &JSONLWriter{w: bufio.NewWriterSize(w, 256<<10), free: free}
 }
 
-func appendString(b []byte, s string) []byte { return report.AppendJSONString(b, s) }
-
 // Render encodes the record.
 func (j *JSONLWriter) Render(o *Outcome) error {
 	var b []byte
@@ -43,32 +41,32 @@ func (j *JSONLWriter) Render(o *Outcome) error {
 		b = make([]byte, 0, 8<<10)
 	}
 	b = append(b, `{"id":`...)
-	b = appendString(b, o.ID)
+	b = report.AppendJSONString(b, o.ID)
 	b = append(b, `,"file":`...)
-	b = appendString(b, o.File)
+	b = report.AppendJSONString(b, o.File)
 	b = append(b, `,"line":`...)
 	b = strconv.AppendInt(b, int64(o.Line), 10)
 	b = append(b, `,"status":`...)
-	b = appendString(b, string(o.Summary.Status))
+	b = report.AppendJSONString(b, string(o.Summary.Status))
 	if len(j.free) > 0 && o.Free != nil {
 		b = append(b, `,"columns":{`...)
 		for i, name := range j.free {
 			if i > 0 {
 				b = append(b, ',')
 			}
-			b = appendString(b, name)
+			b = report.AppendJSONString(b, name)
 			b = append(b, ':')
-			b = appendString(b, o.Free[i])
+			b = report.AppendJSONString(b, o.Free[i])
 		}
 		b = append(b, '}')
 	}
 	switch {
 	case o.Err != nil:
 		b = append(b, `,"error":`...)
-		b = appendString(b, o.Summary.Err)
+		b = report.AppendJSONString(b, o.Summary.Err)
 		if o.Summary.Hint != "" {
 			b = append(b, `,"hint":`...)
-			b = appendString(b, o.Summary.Hint)
+			b = report.AppendJSONString(b, o.Summary.Hint)
 		}
 	case o.Result != nil:
 		b = append(b, `,"result":`...)

@@ -7,9 +7,10 @@ import (
 	"io"
 )
 
-// MaxLine is the longest physical line a reader keeps, in bytes. A longer
-// line becomes a record error (its text is skipped, its place kept), so that
-// one runaway line cannot make the memory grow with the input.
+// MaxLine is the longest physical line a reader keeps, and the longest CSV
+// record, in bytes. A longer line becomes a record error (its text is
+// skipped, its place kept), so that one runaway line cannot make the memory
+// grow with the input.
 const MaxLine = 1 << 20
 
 // lineReader hands out physical lines one by one, without their line end
@@ -20,6 +21,9 @@ type lineReader struct {
 	buf  []byte
 	line int
 	max  int
+	// size is the number of bytes the last line took in the input, its
+	// line end (and a byte-order mark) included.
+	size int
 }
 
 func newLineReader(r io.Reader, max int) *lineReader {
@@ -34,8 +38,10 @@ func newLineReader(r io.Reader, max int) *lineReader {
 // end of the input it returns io.EOF.
 func (lr *lineReader) next() (text []byte, line int, tooLong bool, err error) {
 	lr.buf = lr.buf[:0]
+	lr.size = 0
 	for {
 		chunk, err := lr.r.ReadSlice('\n')
+		lr.size += len(chunk)
 		if len(lr.buf)+len(chunk) <= lr.max {
 			lr.buf = append(lr.buf, chunk...)
 		} else {
@@ -65,4 +71,17 @@ func (lr *lineReader) next() (text []byte, line int, tooLong bool, err error) {
 		text = bytes.TrimPrefix(text, []byte("\xef\xbb\xbf")) // a byte order mark
 	}
 	return text, lr.line, tooLong, nil
+}
+
+// blank reports whether a line holds nothing but spaces, tabs and carriage
+// returns: such a line is no record in either format. Other white space
+// (a no-break space, U+2028) is text, and a record that holds it is read
+// and, where it does not belong, refused.
+func blank(line []byte) bool {
+	for _, c := range line {
+		if c != ' ' && c != '\t' && c != '\r' {
+			return false
+		}
+	}
+	return true
 }

@@ -31,6 +31,9 @@ type parsed struct {
 func parse(r rawRecord) (parsed, error) {
 	p := parsed{id: "line-" + strconv.Itoa(r.line)}
 	if r.err != nil {
+		if r.id != "" {
+			p.id = r.id
+		}
 		return p, r.err
 	}
 	if r.in.Format == CSV {

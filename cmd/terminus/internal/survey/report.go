@@ -250,6 +250,7 @@ func (r *ReportWriter) closeMarkdown(w *bufio.Writer, c Counts) error {
 		}
 	}
 	fmt.Fprintf(w, "| **total** | %d |\n\n", c.Records)
+	fmt.Fprintf(w, "%s\n\n", c.AccountingSentence())
 	if c.Conflicting > 0 {
 		fmt.Fprintf(w, "The evidence of %d %s conflicts at some tier; see the deciding column.\n\n", c.Conflicting, plural(c.Conflicting, "record", "records"))
 	}
@@ -320,6 +321,7 @@ h2.doubtful { color: #875; }
 <table><tr><th>status</th><th>records</th></tr>
 {{range .Rows}}<tr><td>{{.Status}}</td><td class="n">{{.N}}</td></tr>
 {{end}}<tr><th>total</th><th class="n">{{.Records}}</th></tr></table>
+<p>{{.Accounting}}</p>
 {{if .Conflicting}}<p>The evidence of {{.Conflicting}} {{if eq .Conflicting 1}}record{{else}}records{{end}} conflicts at some tier; see the deciding column.</p>
 {{end}}{{if .Unbounded}}<p>No finding or record bounds the date of {{.Unbounded}} {{if eq .Unbounded 1}}record{{else}}records{{end}}: a verdict of consistent there only says that nothing speaks against the claim.</p>
 {{end}}{{if .Unlisted}}<p>{{.Unlisted}} {{if eq .Unlisted 1}}finding{{else}}findings{{end}} of {{.UnlistedRecords}} {{if eq .UnlistedRecords 1}}record name{{else}}records name{{end}} materials not in the dataset, which bound nothing.</p>
@@ -349,8 +351,9 @@ func (r *ReportWriter) closeHTML(w *bufio.Writer, c Counts) error {
 		Records, Conflicting, Failing, Unbounded int
 		Unlisted, UnlistedRecords                int
 		Inputs, Version, SHA, FailOn             string
+		Accounting                               template.HTML
 		Rows                                     []countRow
-	}{Records: c.Records, Conflicting: c.Conflicting, Failing: c.Failing, Unbounded: c.Unbounded,
+	}{Accounting: template.HTML(template.HTMLEscapeString(c.AccountingSentence())), Records: c.Records, Conflicting: c.Conflicting, Failing: c.Failing, Unbounded: c.Unbounded,
 		Unlisted: c.Unlisted, UnlistedRecords: c.UnlistedRecords, Inputs: strings.Join(r.info.Inputs, ", "),
 		Version: r.info.DatasetVersion, SHA: shortSum(r.info.DatasetSHA256), FailOn: r.info.FailOn}
 	for _, s := range Statuses() {

@@ -22,6 +22,9 @@ type Outcome struct {
 	File string
 	Line int
 	ID   string
+	// Lines is the number of physical lines the record takes: one, or
+	// more for a CSV record with a quoted field that spans lines.
+	Lines int
 	// Free holds the values of the free CSV columns, in the order of
 	// [FreeColumns]; empty cells for a record of a file without them.
 	Free []string
@@ -78,9 +81,11 @@ type Options struct {
 // the order they first appear.
 func FreeColumns(inputs []*Input) []string {
 	var out []string
+	seen := map[string]bool{}
 	for _, in := range inputs {
 		for _, f := range in.Free {
-			if !contains(out, f) {
+			if !seen[f] {
+				seen[f] = true
 				out = append(out, f)
 			}
 		}
@@ -139,15 +144,15 @@ func Run(ctx context.Context, inputs []*Input, w Writer, opt Options) (Counts, e
 		opt.Analyze.Memo = constraint.NewMemo(opt.Dataset)
 	}
 	free := FreeColumns(inputs)
+	column := make(map[string]int, len(free))
+	for i, f := range free {
+		column[f] = i
+	}
 	freeIdx := map[*Input][]int{}
 	for _, in := range inputs {
 		idx := make([]int, len(in.Free))
 		for i, f := range in.Free {
-			for j, g := range free {
-				if f == g {
-					idx[i] = j
-				}
-			}
+			idx[i] = column[f]
 		}
 		freeIdx[in] = idx
 	}
@@ -237,6 +242,7 @@ func Run(ctx context.Context, inputs []*Input, w Writer, opt Options) (Counts, e
 				continue
 			}
 			counts.add(cur.Summary)
+			counts.RecordLines += cur.Lines
 			done.Add(1)
 		}
 	}
@@ -259,13 +265,18 @@ func Run(ctx context.Context, inputs []*Input, w Writer, opt Options) (Counts, e
 	if err := ctx.Err(); err != nil {
 		return counts, err // the caller's context is done
 	}
+	for _, in := range inputs { // the reader is done: its counts are final
+		counts.Lines += in.lines
+		counts.HeaderLines += in.header
+		counts.BlankLines += in.blank
+	}
 	return counts, w.Close(counts)
 }
 
 // check parses and analyses one record.
 func check(ctx context.Context, j job, opt Options, fails func(*constraint.Result) bool, freeIdx []int, nfree int) *Outcome {
 	raw := j.raw
-	o := &Outcome{seq: j.seq, File: raw.in.DisplayName(), Line: raw.line}
+	o := &Outcome{seq: j.seq, File: raw.in.DisplayName(), Line: raw.line, Lines: raw.lines}
 	if ctx.Err() != nil {
 		o.canceled = true
 		return o

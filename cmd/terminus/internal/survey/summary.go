@@ -162,9 +162,17 @@ func errorSummary(err error) Summary {
 	return s
 }
 
-// Counts are the totals of a survey.
+// Counts are the totals of a survey. Every physical line read is
+// accounted for: Lines = HeaderLines + BlankLines + RecordLines, and every
+// record is judged or an error: Records = Judged() + Errors() (see
+// [Counts.Balanced] and [Counts.Accounting]).
 type Counts struct {
+	// Records counts the output records, one per input record.
 	Records int
+	// Lines counts the physical lines read; HeaderLines the CSV header
+	// rows and BlankLines the lines with nothing but spaces and tabs among
+	// them; RecordLines the lines of the records, judged or errors.
+	Lines, HeaderLines, BlankLines, RecordLines int
 	// ByStatus counts the records by [Status].
 	ByStatus map[Status]int
 	// Conflicting counts the records whose evidence conflicts at some tier.
@@ -202,6 +210,44 @@ func (c *Counts) add(s Summary) {
 
 // Errors is the number of records that could not be read or checked.
 func (c Counts) Errors() int { return c.ByStatus[StatusError] }
+
+// Judged is the number of records checked (or, in a parse-only pass,
+// read): every record that is not an error.
+func (c Counts) Judged() int { return c.Records - c.Errors() }
+
+// Balanced reports whether every line read is accounted for: in the header,
+// blank, or in exactly one record.
+func (c Counts) Balanced() bool {
+	return c.Lines == c.HeaderLines+c.BlankLines+c.RecordLines
+}
+
+// AccountingSentence is [Counts.Accounting] as a sentence for the
+// summary reports, which says whether the lines add up.
+func (c Counts) AccountingSentence() string {
+	if c.Balanced() {
+		return "Every line read is accounted for: " + c.Accounting() + "."
+	}
+	return "The lines read do not add up, a fault of terminus: " + c.Accounting() + "."
+}
+
+// Accounting says where every line went, in one line for people: "12
+// lines = 1 header + 1 blank + 10 in records; 9 records = 6 judged + 3
+// errors". The header and blank terms are left out when there are none.
+func (c Counts) Accounting() string {
+	judged := "judged"
+	if n := c.ByStatus[StatusParsed]; n > 0 && n == c.Judged() {
+		judged = "read"
+	}
+	out := fmt.Sprintf("%d %s = ", c.Lines, plural(c.Lines, "line", "lines"))
+	if c.HeaderLines > 0 {
+		out += fmt.Sprintf("%d %s + ", c.HeaderLines, plural(c.HeaderLines, "header", "headers"))
+	}
+	if c.BlankLines > 0 {
+		out += fmt.Sprintf("%d blank + ", c.BlankLines)
+	}
+	return out + fmt.Sprintf("%d in records; %d %s = %d %s + %d %s", c.RecordLines, c.Records, plural(c.Records, "record", "records"),
+		c.Judged(), judged, c.Errors(), plural(c.Errors(), "error", "errors"))
+}
 
 // String gives the counts in one line for people: "120 records: 100
 // consistent, 12 improbable, 8 errors".

@@ -19,44 +19,6 @@ import (
 	"terminus/materials"
 )
 
-func TestCSVSplitter(t *testing.T) {
-	tests := []struct {
-		name  string
-		lines []string
-		want  []string
-		cols  []int
-	}{
-		{"plain", []string{"a,b,c"}, []string{"a", "b", "c"}, []int{1, 3, 5}},
-		{"empty fields", []string{",,"}, []string{"", "", ""}, []int{1, 2, 3}},
-		{"quoted comma", []string{`x,"a, b",y`}, []string{"x", "a, b", "y"}, []int{1, 3, 10}},
-		{"doubled quote", []string{`"say ""hi""",z`}, []string{`say "hi"`, "z"}, []int{1, 14}},
-		{"spans lines", []string{`1,"two`, `lines",3`}, []string{"1", "two\nlines", "3"}, []int{1, 3, 8}},
-		{"stray quote kept", []string{`5" x 7",b`}, []string{`5" x 7"`, "b"}, []int{1, 9}},
-		{"text after closing quote", []string{`"a"b,c`}, []string{"ab", "c"}, []int{1, 6}},
-	}
-	for _, tc := range tests {
-		t.Run(tc.name, func(t *testing.T) {
-			var s csvSplitter
-			done := false
-			for i, l := range tc.lines {
-				done = s.feed([]byte(l), i+1)
-				if done != (i == len(tc.lines)-1) {
-					t.Fatalf("after line %d: done %v", i+1, done)
-				}
-			}
-			var got []string
-			var cols []int
-			for _, f := range s.fields {
-				got = append(got, f.Text)
-				cols = append(cols, f.Column)
-			}
-			if fmt.Sprint(got) != fmt.Sprint(tc.want) || fmt.Sprint(cols) != fmt.Sprint(tc.cols) {
-				t.Errorf("got %q at %v, want %q at %v", got, cols, tc.want, tc.cols)
-			}
-		})
-	}
-}
-
 func TestTakeID(t *testing.T) {
 	tests := []struct {
 		name, line, id string
@@ -146,53 +108,6 @@ func openText(t *testing.T, name, text string) *Input {
 		t.Fatal(err)
 	}
 	return in
-}
-
-func TestCSVHeader(t *testing.T) {
-	in := openText(t, "h.csv", "ID, Not Before ,Material,Claimed,Shelf mark\n")
-	for col, idx := range map[string]int{colID: 0, colNotBefore: 1, colMaterials: 2, colClaim: 3} {
-		if in.known[col] != idx {
-			t.Errorf("column %s at %d, want %d (known %v)", col, in.known[col], idx, in.known)
-		}
-	}
-	if fmt.Sprint(in.Free) != "[Shelf mark]" {
-		t.Errorf("free columns %q", in.Free)
-	}
-	for _, tc := range []struct{ text, want string }{
-		{"id,claim,Claim\n", `names the column "claim" twice`},
-		{"title,tittle\n", `did you mean "title"?`},
-		{"\"id,claim\n", "does not close"},
-	} {
-		p := filepath.Join(t.TempDir(), "bad.csv")
-		os.WriteFile(p, []byte(tc.text), 0o644)
-		_, err := Open(p, nil, "")
-		var ie *InputError
-		if !errors.As(err, &ie) || !strings.Contains(err.Error(), tc.want) {
-			t.Errorf("%q: error %v, want an InputError with %q", tc.text, err, tc.want)
-		}
-	}
-}
-
-func TestCSVUnclosedQuote(t *testing.T) {
-	in := openText(t, "q.csv", "id,title\na,ok\nb,\"never closed\nc,lost\n")
-	var got []string
-	for {
-		r, err := in.next()
-		if errors.Is(err, io.EOF) {
-			break
-		}
-		if err != nil {
-			t.Fatal(err)
-		}
-		s := fmt.Sprintf("%d", r.line)
-		if r.err != nil {
-			s += " " + r.err.Error()
-		}
-		got = append(got, s)
-	}
-	if len(got) != 2 || got[0] != "2" || !strings.Contains(got[1], "q.csv:3: a quoted field opens here and is not closed") {
-		t.Errorf("records %q", got)
-	}
 }
 
 // probe is a Writer that checks the order of writes and counts the
@@ -406,34 +321,6 @@ func TestProgress(t *testing.T) {
 	}
 	if !strings.Contains(s, "survey: 0 records [") || !strings.Contains(s, "%") {
 		t.Errorf("no progress line with a bar (the input's size is known): %q", s)
-	}
-}
-
-func TestCSVLongRecords(t *testing.T) {
-	big := strings.Repeat("x", MaxLine*3/5)
-	// Two records of 0.6 MiB each are fine; a quoted field that runs on
-	// past the limit is an error at its first line, and the reader goes on.
-	text := "id,notes\na," + big + "\nb," + big + "\nc,\"" + big + "\n" + big + "\nmore\"\nd,ok\n"
-	in := openText(t, "long.csv", text)
-	var got []string
-	for {
-		r, err := in.next()
-		if errors.Is(err, io.EOF) {
-			break
-		}
-		if err != nil {
-			t.Fatal(err)
-		}
-		s := fmt.Sprint(r.line)
-		if _, err := parse(r); err != nil {
-			s += " error"
-		}
-		got = append(got, s)
-	}
-	// Line 6, the rest of the runaway field, is read as a row of its own,
-	// with one field too few.
-	if want := "[2 3 4 error 6 error 7]"; fmt.Sprint(got) != want {
-		t.Errorf("records %v, want %s", got, want)
 	}
 }
 
