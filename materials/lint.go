@@ -154,6 +154,17 @@ func hasKey(m map[string]Source, k string) bool {
 // A kind with a claim open at its start gives no lower bound, so it is
 // not compared.
 func (d *Dataset) lintOrder(m *Material) []Problem {
+	ps := d.lintSequence(m)
+	if len(m.Claims(KindMade, "")) > 0 {
+		ps = append(ps, d.lintAttestations(m)...)
+	}
+	return ps
+}
+
+// lintSequence finds the milestones of m out of order: no made claim, a
+// sale or arrival starting before the first making, a withdrawal wholly
+// before the first sale.
+func (d *Dataset) lintSequence(m *Material) []Problem {
 	var ps []Problem
 	made := m.Claims(KindMade, "")
 	if len(made) == 0 {
@@ -189,8 +200,17 @@ func (d *Dataset) lintOrder(m *Material) []Problem {
 	} else {
 		end(firstMade, okMade, "made")
 	}
+	return ps
+}
 
-	// Attestations cap the lower bounds.
+// lintAttestations finds the made, sold and arrived bounds of m that are
+// later than an attestation that bounds them (see [Dataset.lintOrder]).
+func (d *Dataset) lintAttestations(m *Material) []Problem {
+	var ps []Problem
+	at := func(ms Milestone, format string, args ...any) {
+		ps = append(ps, Problem{File: ms.File, Line: ms.Line, Column: ms.Column, Msg: fmt.Sprintf(format, args...)})
+	}
+	made, sold := m.Claims(KindMade, ""), m.Claims(KindSold, "")
 	attested := m.Claims(KindAttested, "")
 	capped := func(claims []Milestone, area string, what string) {
 		first, ok := earliestStart(claims)

@@ -91,6 +91,22 @@ func (d *Dataset) Extend(names ...string) (*Dataset, []string, error) {
 	if err != nil {
 		return nil, nil, err
 	}
+	// A user's milestones out of order (a sale before the first making, a
+	// withdrawal before the first sale) would make the reasoner bound on
+	// data that contradicts itself: refuse them as the lint does. (A bound
+	// later than an attestation is capped by the reasoner; the lint still
+	// reports it.)
+	var errs ErrorList
+	for _, m := range user.Materials {
+		for _, p := range user.lintSequence(m) {
+			errs = append(errs, &Error{File: p.File, Line: p.Line, Column: p.Column, Msg: p.Msg,
+				Suggestion: "put the milestones in a possible order ('terminus materials lint FILE' lists every problem)"})
+		}
+	}
+	if len(errs) > 0 {
+		errs.sort()
+		return nil, nil, errs
+	}
 	out, notes := Overlay(d, user)
 	return out, notes, nil
 }

@@ -165,7 +165,7 @@ func newMaterialsListCmd(s IO, load datasetLoader) *cobra.Command {
 and shows that arrival.`,
 		Example: `  terminus materials list --class pigment --made-before 1800
   terminus materials list --place JP --format csv
-  terminus materials list --format json --materials mine.yaml`,
+  terminus materials list --format json --materials examples/own-materials.yaml`,
 		Args: cobra.NoArgs,
 		RunE: func(c *cobra.Command, _ []string) error {
 			ds, err := load()
@@ -568,7 +568,7 @@ every source of the files cited, no name shared by two materials, and milestones
 order (sold not before made, withdrawn not before sold). Prints each
 problem with its file and line, then the counts of documented and
 from-memory milestones. Exit status 1 when there are problems.`,
-		Example: `  terminus materials lint my-pigments.yaml
+		Example: `  terminus materials lint examples/own-materials.yaml
   terminus materials lint materials/data/*.yaml`,
 		Args: cobra.MinimumNArgs(1),
 		RunE: func(c *cobra.Command, args []string) error {

@@ -385,3 +385,23 @@ func TestMaterialsShowText(t *testing.T) {
 		t.Errorf("show:\n got:\n%s\nwant:\n%s", out, want)
 	}
 }
+
+// A user's materials file whose milestones are out of order (a sale before
+// the first making) is bad input for check, as it is for lint.
+func TestCheckRefusesMilestonesOutOfOrder(t *testing.T) {
+	mats := writeFile(t, "order.yaml", `sources:
+  - {key: lab, cite: "Our register, entry 3", type: museum}
+materials:
+  - id: house-blue
+    class: pigment
+    origin: synthetic
+    milestones:
+      - {kind: made, date: "1850", source: lab, basis: documented}
+      - {kind: sold, date: "1840", source: lab, basis: documented}
+`)
+	c := writeFile(t, "case.yaml", "findings:\n  - material: house-blue\n")
+	code, out, errw := runTerminus(t, "check", "--materials", mats, c)
+	if code != 2 || out != "" || !strings.Contains(errw, mats+":9:9: sold milestone of \"house-blue\" (1840) starts before its earliest made claim") {
+		t.Errorf("exit %d, stdout %q, stderr %q", code, out, errw)
+	}
+}

@@ -42,7 +42,7 @@ computer can reach it, unless --listen names another address; the page loads
 nothing from elsewhere. Ctrl-C stops it.`,
 		Example: `  terminus serve
   terminus serve --port 0                      # any free port
-  terminus serve --materials our-pigments.yaml
+  terminus serve --materials examples/own-materials.yaml
   terminus serve --listen 0.0.0.0 --port 8047  # reachable from the network: only on a network you trust`,
 		Args: cobra.NoArgs,
 		RunE: func(cmd *cobra.Command, args []string) error {

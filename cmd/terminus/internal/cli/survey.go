@@ -117,10 +117,10 @@ Exit status: 0 when every record was checked and all are consistent; 1 when a
 claim is not consistent or the evidence conflicts at the --fail-on tier or a
 stronger one in any record, or any record could not be read or checked (record
 errors count toward exit 1); 2 for bad usage or an input that cannot be read.`,
-		Example: `  terminus survey collection.jsonl > results.jsonl
-  terminus survey --format csv export.csv > flagged.csv
-  terminus survey --format html --fail-on firm part-*.csv > survey.html
-  some-export | terminus survey --input csv -`,
+		Example: `  terminus survey examples/collection.jsonl > results.jsonl
+  terminus survey --format csv examples/collection.csv > flagged.csv
+  terminus survey --format html --fail-on firm examples/collection.*sv > survey.html
+  terminus survey --input csv - < examples/collection.csv`,
 		Args: cobra.MinimumNArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			inFormat, err := survey.ParseFormat(input)
