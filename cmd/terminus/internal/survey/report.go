@@ -149,8 +149,8 @@ type rowData struct {
 
 func (r *ReportWriter) data(o *Outcome) rowData {
 	s := o.Summary
-	return rowData{ID: o.ID, File: o.File, Line: o.Line, Title: s.Title, Claims: s.Claims, Hard: window(s.Windows[0]),
-		Firm: window(s.Windows[1]), Soft: window(s.Windows[2]), Deciding: s.Deciding, Conflicts: s.Conflicts, Err: s.Err, Hint: s.Hint}
+	return rowData{ID: o.ID, File: o.File, Line: o.Line, Title: s.Title, Claims: s.Claims, Hard: window(s.WindowsText[0]),
+		Firm: window(s.WindowsText[1]), Soft: window(s.WindowsText[2]), Deciding: s.Deciding, Conflicts: s.Conflicts, Err: s.Err, Hint: s.Hint}
 }
 
 // Render makes the record's table row.

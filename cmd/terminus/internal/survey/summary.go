@@ -7,6 +7,7 @@ import (
 
 	"terminus/constraint"
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 )
 
 // Status is what became of one record: the worst verdict among its claims,
@@ -54,8 +55,11 @@ type Summary struct {
 	Event string
 	// Windows holds per tier (hard, firm, soft) the earliest and latest
 	// day: ISO 8601, ".." when unbounded, "conflict" when the tier's
-	// evidence contradicts itself.
-	Windows [3][2]string
+	// evidence contradicts itself. WindowsText holds the same as people
+	// write it, at the precision of the evidence ("1200 BCE", "1658",
+	// "open"), for the summaries people read.
+	Windows     [3][2]string
+	WindowsText [3][2]string
 	// Deciding names the evidence that rules out each claim that is not
 	// consistent: "finding-2 (Prussian blue)".
 	Deciding string
@@ -127,9 +131,11 @@ func summarize(r *constraint.Result, fails bool) Summary {
 		for t, w := range e.Windows {
 			if w == nil {
 				s.Windows[t] = [2]string{"conflict", "conflict"}
+				s.WindowsText[t] = s.Windows[t]
 				continue
 			}
 			s.Windows[t] = [2]string{boundText(w.Earliest), boundText(w.Latest)}
+			s.WindowsText[t] = [2]string{peopleText(w.Earliest, false), peopleText(w.Latest, true)}
 		}
 		s.Unbounded = s.Windows[network.Soft] == [2]string{"..", ".."}
 	}
@@ -144,6 +150,14 @@ func summarize(r *constraint.Result, fails bool) Summary {
 	}
 	s.Conflicts = strings.Join(conflicts, "; ")
 	return s
+}
+
+// peopleText shows a bound as people write it, at its precision.
+func peopleText(b constraint.Bound, upper bool) string {
+	if !b.Bounded {
+		return "open"
+	}
+	return wording.BoundAt(b.Day, upper, b.Precision)
 }
 
 func boundText(b constraint.Bound) string {
