@@ -1111,8 +1111,13 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 				reported[key] = true
 				res.Conflicts = append(res.Conflicts, Conflict{Tier: t, Evidence: evs, Steps: steps})
 			}
-			evs, _ := b.explainSet(sol.Correction)
-			res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs})
+			if sol.BudgetSpent {
+				res.Notes = append(res.Notes, fmt.Sprintf("The explanation of the %s tier stopped at its work budget: the correction given, if any, may not be the cheapest.", t))
+			}
+			if len(sol.Correction) > 0 {
+				evs, _ := b.explainSet(sol.Correction)
+				res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs})
+			}
 			continue
 		}
 		for i := range a.events {

@@ -2,13 +2,17 @@ package network
 
 import (
 	"encoding/binary"
+	"errors"
 	"slices"
 )
 
-// This file explains an inconsistent set of constraints: a first minimal
-// conflict by QuickXplain, more of them until the hitting-set duality says
-// there are no others, and the cheapest correction by an implicit
-// hitting-set loop.
+// This file explains an inconsistent set of constraints within a work
+// budget: a first minimal conflict by QuickXplain, more of them until the
+// hitting-set duality says there are no others, and the cheapest
+// correction by an implicit hitting-set loop.
+
+// errOutOfWork ends an explanation whose work budget is spent.
+var errOutOfWork = errors.New("work budget spent")
 
 // explainer is the state of one explanation.
 type explainer struct {
@@ -16,19 +20,25 @@ type explainer struct {
 	active    []int32   // the active constraints, in the order of their ids
 	conflicts [][]int32 // the minimal conflicts to report, each sorted by index
 	complete  bool      // conflicts holds them all
-	// correction is the cheapest hitting set whose complement is
-	// consistent.
+	// correction is the cheapest hitting set found whose complement is
+	// consistent; cheapest reports that none costs less.
 	correction []int32
+	cheapest   bool
 	// verified holds the hitting sets whose complement is consistent.
 	verified map[string]bool
+	budget   int // the work the explanation may spend
+	halt     int // the work at which the current step stops
+	work     int // the work spent
 }
 
 // explain fills the conflicts and the correction of an inconsistent set of
 // active constraints. seed, when not nil, is a candidate small
 // inconsistent subset (the constraints of a negative cycle).
 func (s *solver) explain(active []int32, seed []int32, r *Result) error {
-	e := &explainer{solver: s, active: s.byRank(active), verified: map[string]bool{}}
-	if err := e.run(seed); err != nil {
+	e := &explainer{solver: s, active: s.byRank(active), verified: map[string]bool{}, budget: s.opt.maxWork()}
+	s.unary = make([][]piece, len(s.n.cons)) // every check reads the same sets
+	defer func() { s.unary = nil }()
+	if err := e.run(seed); err != nil && !errors.Is(err, errOutOfWork) {
 		return err
 	}
 	for _, c := range e.conflicts {
@@ -37,21 +47,52 @@ func (s *solver) explain(active []int32, seed []int32, r *Result) error {
 	slices.SortFunc(r.Conflicts, s.compareSets)
 	r.ConflictsComplete = e.complete
 	r.Correction = s.indicesByID(e.correction)
+	r.BudgetSpent = !e.cheapest
+	r.Work = e.work
 	return nil
 }
 
-// run finds a first conflict, lists more, and looks for the cheapest
-// correction.
+// run finds a first conflict, lists more with half of the budget, and
+// looks for a correction with the rest.
 func (e *explainer) run(seed []int32) error {
+	e.halt = e.budget
 	first, err := e.firstConflict(seed)
 	if err != nil {
 		return err
 	}
 	e.conflicts = [][]int32{first}
-	if e.complete, err = e.listConflicts(); err != nil {
+	e.halt = e.budget / 2
+	e.complete, err = e.listConflicts()
+	if err != nil && !errors.Is(err, errOutOfWork) {
 		return err
 	}
 	return e.findCorrection()
+}
+
+// spend counts units of work, and fails when the current step's share of
+// the budget is spent.
+func (e *explainer) spend(units int) error {
+	e.work += units
+	if e.work > e.halt {
+		return errOutOfWork
+	}
+	return nil
+}
+
+// check reports whether the constraints cs are consistent, counting the
+// check and its search nodes as work; a search that passes its limit ends
+// the explanation.
+func (e *explainer) check(cs []int32) (bool, []int32, error) {
+	if err := e.spend(1); err != nil {
+		return false, nil, err
+	}
+	before := e.nodes
+	ok, cycle, err := e.consistent(cs, e.halt-e.work)
+	e.work += e.nodes - before
+	if errors.Is(err, ErrLimit) {
+		return false, nil, errOutOfWork
+	}
+	return ok, cycle, err
 }
 
 // checkWithout reports whether the active constraints less the sorted set
@@ -61,7 +102,7 @@ func (e *explainer) checkWithout(h []int32) (bool, error) {
 	if e.verified[key] {
 		return true, nil
 	}
-	ok, _, err := e.consistent(without(e.active, h))
+	ok, _, err := e.check(without(e.active, h))
 	if ok {
 		e.verified[key] = true
 	}
@@ -74,7 +115,7 @@ func (e *explainer) firstConflict(seed []int32) ([]int32, error) {
 	cand := e.active
 	if len(seed) > 0 {
 		seed = e.byRank(seed)
-		ok, _, err := e.consistent(seed)
+		ok, _, err := e.check(seed)
 		if err != nil {
 			return nil, err
 		}
@@ -90,9 +131,9 @@ func (e *explainer) firstConflict(seed []int32) ([]int32, error) {
 // complement of every minimal hitting set of the conflicts is consistent.
 func (e *explainer) listConflicts() (bool, error) {
 	for len(e.conflicts) < e.opt.maxConflicts() {
-		hs, capped := minimalHittingSets(e.conflicts)
-		if capped {
-			return false, nil
+		hs, capped, err := e.minimalHittingSets(e.conflicts)
+		if err != nil || capped {
+			return false, err
 		}
 		slices.SortFunc(hs, e.compareByCost)
 		h, err := e.inconsistentComplement(hs)
@@ -107,9 +148,9 @@ func (e *explainer) listConflicts() (bool, error) {
 	}
 	// The cap is reached: the list is complete only if the duality check
 	// passes.
-	hs, capped := minimalHittingSets(e.conflicts)
-	if capped {
-		return false, nil
+	hs, capped, err := e.minimalHittingSets(e.conflicts)
+	if err != nil || capped {
+		return false, err
 	}
 	h, err := e.inconsistentComplement(hs)
 	return err == nil && h == nil, err
@@ -130,31 +171,100 @@ func (e *explainer) inconsistentComplement(hs [][]int32) ([]int32, error) {
 	return nil, nil
 }
 
-// findCorrection runs the implicit hitting-set loop: the cheapest hitting
-// set of the conflicts known is the correction when its complement is
-// consistent; else that complement holds another conflict. The loop is
-// exact even when the reported list of conflicts is capped.
+// findCorrection finds the cheapest correction with three quarters of the
+// budget, and any correction with the rest when that runs out.
 func (e *explainer) findCorrection() error {
+	e.halt = e.budget * 3 / 4
+	last, err := e.cheapestCorrection()
+	if !errors.Is(err, errOutOfWork) {
+		return err
+	}
+	e.halt = e.budget
+	return e.anyCorrection(last)
+}
+
+// cheapestCorrection runs the implicit hitting-set loop: the cheapest
+// hitting set of the conflicts known is the correction when its
+// complement is consistent; else that complement holds another conflict.
+// The loop is exact even when the reported list of conflicts is capped.
+// When the budget runs out, it returns the last hitting set it tried.
+func (e *explainer) cheapestCorrection() ([]int32, error) {
 	all := slices.Clone(e.conflicts)
 	for {
-		h := e.cheapestHittingSet(all)
+		h, cheapest, err := e.cheapestHittingSet(all)
+		if err != nil {
+			return nil, err
+		}
 		ok, err := e.checkWithout(h)
 		if err != nil {
-			return err
+			return h, err
 		}
 		if ok {
-			e.correction = h
-			return nil
+			e.correction, e.cheapest = h, cheapest
+			return nil, nil
+		}
+		if !cheapest {
+			return h, errOutOfWork
 		}
 		m, err := e.quickXplain(without(e.active, h))
 		if err != nil {
-			return err
+			return h, err
 		}
 		all = append(all, m)
 		if len(e.conflicts) < e.opt.maxConflicts() {
 			e.conflicts = append(e.conflicts, m)
 		}
 	}
+}
+
+// anyCorrection finds constraints whose removal restores consistency,
+// perhaps not the cheapest: it keeps the constraints that stay consistent
+// with those kept before them, the costliest first, then those outside
+// the hitting set last tried, then in the order of their ids; it adds
+// them in blocks, halving a block that fails, so that it takes about
+// two checks per constraint removed for each halving.
+func (e *explainer) anyCorrection(last []int32) error {
+	order := slices.Clone(e.active) // by rank
+	slices.SortStableFunc(order, func(a, b int32) int {
+		if ca, cb := cost(e.n.cons[a].Tier), cost(e.n.cons[b].Tier); ca != cb {
+			return cmp64(cb, ca)
+		}
+		_, inA := slices.BinarySearch(last, a)
+		_, inB := slices.BinarySearch(last, b)
+		switch {
+		case inA && !inB:
+			return 1
+		case inB && !inA:
+			return -1
+		}
+		return 0
+	})
+	var kept, removed []int32
+	var grow func(block []int32) error
+	grow = func(block []int32) error {
+		ok, _, err := e.check(concat(kept, block))
+		if err != nil {
+			return err
+		}
+		switch {
+		case ok:
+			kept = append(kept, block...)
+		case len(block) == 1:
+			removed = append(removed, block[0])
+		default:
+			if err := grow(block[:len(block)/2]); err != nil {
+				return err
+			}
+			return grow(block[len(block)/2:])
+		}
+		return nil
+	}
+	if err := grow(order); err != nil {
+		return err
+	}
+	slices.Sort(removed)
+	e.correction = removed
+	return nil
 }
 
 // quickXplain returns a minimal inconsistent subset of the inconsistent
@@ -164,7 +274,7 @@ func (e *explainer) quickXplain(cs []int32) ([]int32, error) {
 	var rec func(b, d, c []int32) ([]int32, error)
 	rec = func(b, d, c []int32) ([]int32, error) {
 		if len(d) > 0 {
-			ok, _, err := e.consistent(b)
+			ok, _, err := e.check(b)
 			if err != nil {
 				return nil, err
 			}

@@ -1,6 +1,9 @@
 package network
 
-import "slices"
+import (
+	"fmt"
+	"slices"
+)
 
 // This file holds the hitting sets of a family of conflicts: all the
 // minimal ones (for the duality check), and a cheapest one (for the
@@ -12,12 +15,23 @@ import "slices"
 const maxHittingSets = 4096
 
 // minimalHittingSets enumerates the minimal hitting sets of the sets
-// (Berge's incremental method). It reports true when the count passed
-// maxHittingSets.
-func minimalHittingSets(sets [][]int32) ([][]int32, bool) {
+// (Berge's incremental method), counting each candidate as a unit of
+// work. It reports true when the count passed maxHittingSets.
+func (e *explainer) minimalHittingSets(sets [][]int32) ([][]int32, bool, error) {
 	cur := [][]int32{{}}
 	for _, s := range sets {
-		var next [][]int32
+		candidates := 0
+		for _, h := range cur {
+			if intersects(h, s) {
+				candidates++
+			} else {
+				candidates += len(s)
+			}
+		}
+		if err := e.spend(candidates); err != nil {
+			return nil, false, err
+		}
+		next := make([][]int32, 0, candidates)
 		for _, h := range cur {
 			if intersects(h, s) {
 				next = append(next, h)
@@ -40,12 +54,12 @@ func minimalHittingSets(sets [][]int32) ([][]int32, bool) {
 			if !hasSubset(cur, x) {
 				cur = append(cur, x)
 			}
-		}
-		if len(cur) > maxHittingSets {
-			return nil, true
+			if len(cur) > maxHittingSets {
+				return nil, true, nil
+			}
 		}
 	}
-	return cur, false
+	return cur, false, nil
 }
 
 // insertSorted returns a copy of the sorted set h with x added.
@@ -114,45 +128,150 @@ func (s *solver) rankList(h []int32) []int32 {
 	return out
 }
 
-// cheapestHittingSet returns a hitting set of least cost (then least ids)
-// by branch and bound; the result is sorted by index.
-func (s *solver) cheapestHittingSet(sets [][]int32) []int32 {
-	var best []int32
-	bestCost := int64(-1)
-	var chosen []int32
-	var rec func(cost int64)
-	rec = func(c int64) {
-		if bestCost >= 0 && c > bestCost {
-			return
-		}
-		var open []int32
-		for _, st := range sets {
-			if !intersects(chosen, st) {
-				open = st
-				break
-			}
-		}
-		if open == nil {
-			h := slices.Clone(chosen)
-			slices.Sort(h)
-			if bestCost < 0 || s.compareByCost(h, best) < 0 {
-				best, bestCost = h, c
-			}
-			return
-		}
-		es := slices.Clone(open)
-		slices.SortFunc(es, func(a, b int32) int {
-			if ca, cb := cost(s.n.cons[a].Tier), cost(s.n.cons[b].Tier); ca != cb {
-				return cmp64(ca, cb)
-			}
-			return int(s.rank[a]) - int(s.rank[b])
-		})
-		for _, e := range es {
-			chosen = append(chosen, e)
-			rec(c + cost(s.n.cons[e].Tier))
-			chosen = chosen[:len(chosen)-1]
+// hittingSearch is a branch and bound for a cheapest hitting set: least
+// cost, then least ids. Each node takes the first conflict not yet hit
+// and branches on its members, cheapest first; each branch sets aside the
+// members tried before it, so that no set is reached twice. A node is cut
+// when its cost plus a lower bound of what it must still pay exceeds the
+// best found (a node that only ties goes on, as it may find smaller ids).
+type hittingSearch struct {
+	*solver
+	sets     [][]int32
+	chosen   []int32
+	taken    []bool  // per constraint: in chosen
+	aside    []bool  // per constraint: set aside in the current branch
+	packed   []int32 // per constraint: the node whose lower bound used it
+	best     []int32
+	bestCost int64
+	nodes    int // nodes spent
+	limit    int // the most nodes, once a hitting set is found
+	capped   bool
+}
+
+// cheapestHittingSet returns a hitting set of least cost (then least ids),
+// sorted by index, and whether it is known to be the cheapest: a search
+// that passes its node limit (the lesser of Options.MaxNodes and half of
+// the work left) returns the best it found. Its nodes count as work.
+func (e *explainer) cheapestHittingSet(sets [][]int32) ([]int32, bool, error) {
+	n := len(e.n.cons)
+	hs := &hittingSearch{
+		solver: e.solver, sets: sets, bestCost: -1,
+		taken: make([]bool, n), aside: make([]bool, n), packed: make([]int32, n),
+		limit: min(e.opt.maxNodes(), max(0, e.halt-e.work)/2),
+	}
+	hs.visit(0)
+	e.work += hs.nodes // a search that ran to its end is exact whatever it cost
+	if err := e.ctx.Err(); err != nil {
+		return nil, false, fmt.Errorf("solve: %w", err)
+	}
+	return hs.best, !hs.capped, nil
+}
+
+// visit explores the node whose chosen members cost c.
+func (hs *hittingSearch) visit(c int64) {
+	if hs.best != nil && hs.nodes >= hs.limit {
+		hs.capped = true
+		return
+	}
+	hs.nodes++
+	open, bound, dead := hs.survey()
+	switch {
+	case dead:
+		return
+	case open == nil:
+		hs.offer(c)
+		return
+	case hs.best != nil && c+bound > hs.bestCost:
+		return
+	}
+	members := hs.free(open)
+	for _, x := range members {
+		hs.chosen = append(hs.chosen, x)
+		hs.taken[x] = true
+		hs.visit(c + cost(hs.n.cons[x].Tier))
+		hs.taken[x] = false
+		hs.chosen = hs.chosen[:len(hs.chosen)-1]
+		hs.aside[x] = true
+		if hs.capped {
+			break
 		}
 	}
-	rec(0)
-	return best
+	for _, x := range members {
+		hs.aside[x] = false
+	}
+}
+
+// survey returns the first conflict not hit, a lower bound of what the
+// conflicts not hit still cost (the cheapest free member of each of a run
+// of them with no free member in common), and dead when a conflict not
+// hit has every member set aside.
+func (hs *hittingSearch) survey() (open []int32, bound int64, dead bool) {
+	stamp := int32(hs.nodes)
+	for _, st := range hs.sets {
+		if hs.hit(st) {
+			continue
+		}
+		if open == nil {
+			open = st
+		}
+		cheapest, disjoint := int64(-1), true
+		for _, x := range st {
+			if hs.aside[x] {
+				continue
+			}
+			if hs.packed[x] == stamp {
+				disjoint = false
+			}
+			if c := cost(hs.n.cons[x].Tier); cheapest < 0 || c < cheapest {
+				cheapest = c
+			}
+		}
+		if cheapest < 0 {
+			return nil, 0, true
+		}
+		if disjoint {
+			bound += cheapest
+			for _, x := range st {
+				hs.packed[x] = stamp
+			}
+		}
+	}
+	return open, bound, false
+}
+
+func (hs *hittingSearch) hit(set []int32) bool {
+	for _, x := range set {
+		if hs.taken[x] {
+			return true
+		}
+	}
+	return false
+}
+
+// free returns the members of the conflict not set aside, cheapest first,
+// then in the order of their ids.
+func (hs *hittingSearch) free(set []int32) []int32 {
+	out := make([]int32, 0, len(set))
+	for _, x := range set {
+		if !hs.aside[x] {
+			out = append(out, x)
+		}
+	}
+	slices.SortFunc(out, func(a, b int32) int {
+		if ca, cb := cost(hs.n.cons[a].Tier), cost(hs.n.cons[b].Tier); ca != cb {
+			return cmp64(ca, cb)
+		}
+		return int(hs.rank[a]) - int(hs.rank[b])
+	})
+	return out
+}
+
+// offer keeps the chosen set, which hits every conflict at cost c, when
+// it beats the best found.
+func (hs *hittingSearch) offer(c int64) {
+	h := slices.Clone(hs.chosen)
+	slices.Sort(h)
+	if hs.best == nil || c < hs.bestCost || c == hs.bestCost && slices.Compare(hs.rankList(h), hs.rankList(hs.best)) < 0 {
+		hs.best, hs.bestCost = h, c
+	}
 }

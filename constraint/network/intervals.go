@@ -30,6 +30,27 @@ func unaryPiece(a Alt, ci int32) piece {
 	return p
 }
 
+// unarySet is the union of the alternatives of the unary constraint ci,
+// kept when the solver keeps them (for the many checks of an
+// explanation): the caller must not change it.
+func (s *solver) unarySet(ci int32) []piece {
+	if s.unary == nil {
+		return unarySet(&s.n.cons[ci], ci)
+	}
+	if s.unary[ci] == nil {
+		s.unary[ci] = unarySet(&s.n.cons[ci], ci)
+	}
+	return s.unary[ci]
+}
+
+// ownUnarySet is unarySet(ci) for the caller to change.
+func (s *solver) ownUnarySet(ci int32) []piece {
+	if s.unary == nil {
+		return unarySet(&s.n.cons[ci], ci)
+	}
+	return slices.Clone(s.unarySet(ci))
+}
+
 // unarySet is the union of the alternatives of the unary constraint c
 // (index ci).
 func unarySet(c *Constraint, ci int32) []piece {
@@ -83,7 +104,7 @@ func (s *solver) intersect(a, b []piece) []piece {
 	if a == nil {
 		return b
 	}
-	out := make([]piece, 0, len(a)+len(b))
+	out := s.scratch[:0]
 	i, j := 0, 0
 	for i < len(a) && j < len(b) {
 		p, q := a[i], b[j]
@@ -96,7 +117,8 @@ func (s *solver) intersect(a, b []piece) []piece {
 			j++
 		}
 	}
-	return out
+	s.scratch = out
+	return append(make([]piece, 0, len(out)), out...) // not nil: an empty set is no set
 }
 
 // meet is the common part of two runs, each end keeping the constraint

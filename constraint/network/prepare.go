@@ -74,10 +74,13 @@ func allVars(nv int) []Var {
 // c (index ci) bounds with c, and notes the first variable left empty.
 func (s *solver) addUnary(p *prepared, c *Constraint, ci int32) {
 	v, _ := unaryOf(c)
-	if len(c.Alts) == 1 && p.sets[v] != nil {
+	switch {
+	case len(c.Alts) == 1 && p.sets[v] != nil:
 		p.sets[v] = s.clip(p.sets[v], c, ci)
-	} else {
-		p.sets[v] = s.intersect(p.sets[v], unarySet(c, ci))
+	case p.sets[v] == nil:
+		p.sets[v] = s.ownUnarySet(ci)
+	default:
+		p.sets[v] = s.intersect(p.sets[v], s.unarySet(ci))
 	}
 	if len(p.sets[v]) == 0 && p.empty < 0 {
 		p.empty = int(v)
@@ -96,9 +99,9 @@ func (s *solver) prepare(active []int32) *prepared {
 			continue
 		}
 		s.addUnary(p, c, ci)
-	}
-	if p.empty >= 0 {
-		return p
+		if p.empty >= 0 {
+			return p // nothing to solve: the caller needs no more
+		}
 	}
 	if len(links) == 0 { // every variable stands alone
 		p.isolated = allVars(nv)

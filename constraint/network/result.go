@@ -8,7 +8,16 @@ type Options struct {
 	// domain computation; 0 means 1,000,000. Beyond it Solve fails with
 	// [ErrLimit].
 	MaxNodes int
+	// MaxWork is the work budget of explaining an inconsistency (see the
+	// package documentation for its units and its shares); 0 means
+	// [DefaultMaxWork]. Beyond it Solve returns what it has found, marked
+	// with [Result.BudgetSpent].
+	MaxWork int
 }
+
+// DefaultMaxWork is the work budget of explaining an inconsistency when
+// [Options.MaxWork] is 0.
+const DefaultMaxWork = 200_000
 
 func (o Options) maxConflicts() int {
 	if o.MaxConflicts <= 0 {
@@ -22,6 +31,13 @@ func (o Options) maxNodes() int {
 		return 1_000_000
 	}
 	return o.MaxNodes
+}
+
+func (o Options) maxWork() int {
+	if o.MaxWork <= 0 {
+		return DefaultMaxWork
+	}
+	return o.MaxWork
 }
 
 // Interval is a closed run of integers; Lo <= -Inf or Hi >= Inf marks an
@@ -64,10 +80,19 @@ type Result struct {
 	// ConflictsComplete reports that Conflicts holds every minimal conflict.
 	ConflictsComplete bool
 	// Correction is a cheapest set of constraints whose removal restores
-	// consistency; empty when consistent.
+	// consistency; empty when consistent. When BudgetSpent, it restores
+	// consistency but may not be the cheapest, and is empty when the
+	// budget did not suffice to find one.
 	Correction []int
+	// BudgetSpent reports that the work budget (Options.MaxWork) ran out
+	// before the cheapest correction was proved. (When the budget cut the
+	// list of conflicts short, ConflictsComplete is false.)
+	BudgetSpent bool
 	// Nodes counts the search nodes (network solves) spent on the domains.
 	Nodes int
+	// Work counts the work spent explaining an inconsistency, in the units
+	// of Options.MaxWork.
+	Work int
 
 	domains  []Set
 	earliest []Bound

@@ -32,8 +32,10 @@ func (s *solver) domains(active []int32, r *Result) (bool, []int32, error) {
 }
 
 // consistent reports whether the given constraints are consistent, and on
-// an inconsistent simple network the constraints of a negative cycle.
-func (s *solver) consistent(active []int32) (bool, []int32, error) {
+// an inconsistent simple network the constraints of a negative cycle. It
+// spends at most limit search nodes in all, and at most Options.MaxNodes
+// on one component.
+func (s *solver) consistent(active []int32, limit int) (bool, []int32, error) {
 	if err := s.ctx.Err(); err != nil {
 		return false, nil, fmt.Errorf("solve: %w", err)
 	}
@@ -42,10 +44,11 @@ func (s *solver) consistent(active []int32) (bool, []int32, error) {
 		return false, nil, nil
 	}
 	for _, pr := range p.problems {
-		sr, err := s.searchComponent(pr, false, s.opt.maxNodes())
+		sr, err := s.searchComponent(pr, false, min(limit, s.opt.maxNodes()))
 		if err != nil || !sr.found {
 			return false, sr.seed, err
 		}
+		limit -= sr.spent
 	}
 	return true, nil, nil
 }

@@ -11,7 +11,7 @@ import (
 // tiers at once.
 
 // Solve solves the network with every constraint whose tier is at most
-// tier. It fails only when ctx is done or a search exceeds
+// tier. It fails only when ctx is done or a search for the domains exceeds
 // [Options.MaxNodes]; an inconsistent network is a Result, not an error.
 func (n *Network) Solve(ctx context.Context, tier Tier, opt Options) (*Result, error) {
 	return n.newSolver(ctx, opt, n.ranks()).solve(tier)
@@ -38,12 +38,14 @@ func (n *Network) SolveTiers(ctx context.Context, opt Options) ([3]*Result, erro
 
 // solver holds what one call of Solve shares between its searches.
 type solver struct {
-	n     *Network
-	ctx   context.Context
-	opt   Options
-	rank  []int32 // constraint index → rank of its id
-	nodes int     // search nodes spent, by every search
-	g     stn
+	n       *Network
+	ctx     context.Context
+	opt     Options
+	rank    []int32 // constraint index → rank of its id
+	nodes   int     // search nodes spent, by every search
+	g       stn
+	unary   [][]piece // per constraint: the union of its alternatives, when kept
+	scratch []piece   // an intersection being made
 }
 
 func (n *Network) newSolver(ctx context.Context, opt Options, rank []int32) *solver {
