@@ -103,27 +103,28 @@
 // must lie within ±[Limit] and a network may hold at most [MaxVars]
 // variables, so that no path length overflows int64.
 //
-// Explaining an inconsistency is exponential at worst too: forty records
-// of one object, each one of two hundred years, the even and the odd years
-// in turn, make four hundred conflicts of two, and the minimal hitting
-// sets and cheapest corrections of random one-of sets grow faster still.
-// So an explanation has a work budget, [Options.MaxWork]: 0 means
+// Explaining an inconsistency is exponential at worst too: forty records of
+// one object, each one of two hundred years, the even and the odd years in
+// turn, make four hundred conflicts of two, and the minimal hitting sets
+// and cheapest corrections of random one-of sets grow faster still. So an
+// explanation has a work budget, [Options.MaxWork]: 0 means
 // [DefaultMaxWork], 200,000 units, and a caller that wants more (or less)
 // sets another positive value. A unit is one consistency check, one search
 // node inside a check, one node of the search for a cheapest hitting set,
-// or one candidate set of the enumeration of minimal hitting sets. The
-// first conflict may use the whole budget; the search for more conflicts
-// stops when half of the budget is spent (ConflictsComplete is then
-// false), the search for the cheapest correction when three quarters are,
-// and the rest goes to finding any correction: the constraints are added,
-// the costliest first, in blocks that halve when they fail, and those that
-// fail alone are the correction. A consistency check that passes
-// [Options.MaxNodes] also ends the step it serves. When the cheapest
-// correction was not proved, [Result.BudgetSpent] says so: Correction then
-// restores consistency but may not be the cheapest, or is empty when even
-// the last quarter did not suffice. The conflicts listed are minimal in
-// every case, and [Result.Work] tells the work spent. The records above
-// take 32,144 units (TestRecordsOneOfEnds) and about 0.2 s.
+// or one candidate set of the enumeration of minimal hitting sets (and one
+// per 64 sets a candidate is compared with). The first conflict may use the
+// whole budget; the search for more conflicts stops when half of the budget
+// is spent (ConflictsComplete is then false), the search for the cheapest
+// correction when three quarters are, and the rest goes to finding any
+// correction: the constraints are added, the costliest first, in blocks
+// that halve when they fail, and those that fail alone are the correction.
+// A consistency check that passes [Options.MaxNodes] also ends the step it
+// serves. When the cheapest correction was not proved, [Result.BudgetSpent]
+// says so: Correction then restores consistency but may not be the
+// cheapest, or is empty when even the last quarter did not suffice. The
+// conflicts listed are minimal in every case, and [Result.Work] tells the
+// work spent. The records above take 32,144 units (TestRecordsOneOfEnds)
+// and about 0.2 s.
 //
 // Measured with go test -bench . -benchmem on a shared two-core AMD EPYC
 // machine (the spread is the load of other work), solving at the soft tier

@@ -26,9 +26,10 @@ type explainer struct {
 	cheapest   bool
 	// verified holds the hitting sets whose complement is consistent.
 	verified map[string]bool
-	budget   int // the work the explanation may spend
-	halt     int // the work at which the current step stops
-	work     int // the work spent
+	hitting  hittingSearch // the search for the cheapest hitting set, reused
+	budget   int           // the work the explanation may spend
+	halt     int           // the work at which the current step stops
+	work     int           // the work spent
 }
 
 // explain fills the conflicts and the correction of an inconsistent set of
@@ -36,8 +37,8 @@ type explainer struct {
 // inconsistent subset (the constraints of a negative cycle).
 func (s *solver) explain(active []int32, seed []int32, r *Result) error {
 	e := &explainer{solver: s, active: s.byRank(active), verified: map[string]bool{}, budget: s.opt.maxWork()}
-	s.unary = make([][]piece, len(s.n.cons)) // every check reads the same sets
-	defer func() { s.unary = nil }()
+	s.keepUnary = true // every check reads the same sets
+	defer func() { s.keepUnary, s.unary = false, nil }()
 	if err := e.run(seed); err != nil && !errors.Is(err, errOutOfWork) {
 		return err
 	}
@@ -80,8 +81,8 @@ func (e *explainer) spend(units int) error {
 }
 
 // check reports whether the constraints cs are consistent, counting the
-// check and its search nodes as work; a search that passes its limit ends
-// the explanation.
+// check and its search nodes as work; a search that passes its limit (the
+// step's share of the budget, or Options.MaxNodes) ends the step.
 func (e *explainer) check(cs []int32) (bool, []int32, error) {
 	if err := e.spend(1); err != nil {
 		return false, nil, err

@@ -15,8 +15,9 @@ import (
 const maxHittingSets = 4096
 
 // minimalHittingSets enumerates the minimal hitting sets of the sets
-// (Berge's incremental method), counting each candidate as a unit of
-// work. It reports true when the count passed maxHittingSets.
+// (Berge's incremental method), counting as a unit of work each candidate
+// and each 64 sets a candidate is compared with. It reports true when the
+// count passed maxHittingSets.
 func (e *explainer) minimalHittingSets(sets [][]int32) ([][]int32, bool, error) {
 	cur := [][]int32{{}}
 	for _, s := range sets {
@@ -51,6 +52,9 @@ func (e *explainer) minimalHittingSets(sets [][]int32) ([][]int32, bool, error) 
 		next = slices.CompactFunc(next, slices.Equal)
 		cur = cur[:0]
 		for _, x := range next {
+			if err := e.spend(len(cur) / 64); err != nil {
+				return nil, false, err
+			}
 			if !hasSubset(cur, x) {
 				cur = append(cur, x)
 			}
@@ -140,7 +144,8 @@ type hittingSearch struct {
 	chosen   []int32
 	taken    []bool  // per constraint: in chosen
 	aside    []bool  // per constraint: set aside in the current branch
-	packed   []int32 // per constraint: the node whose lower bound used it
+	packed   []int32 // per constraint: the stamp of the lower bound that used it
+	stamp    int32
 	best     []int32
 	bestCost int64
 	nodes    int // nodes spent
@@ -153,12 +158,15 @@ type hittingSearch struct {
 // that passes its node limit (the lesser of Options.MaxNodes and half of
 // the work left) returns the best it found. Its nodes count as work.
 func (e *explainer) cheapestHittingSet(sets [][]int32) ([]int32, bool, error) {
-	n := len(e.n.cons)
-	hs := &hittingSearch{
-		solver: e.solver, sets: sets, bestCost: -1,
-		taken: make([]bool, n), aside: make([]bool, n), packed: make([]int32, n),
-		limit: min(e.opt.maxNodes(), max(0, e.halt-e.work)/2),
+	hs := &e.hitting // its arrays are clean after each search
+	if hs.taken == nil {
+		n := len(e.n.cons)
+		hs.solver = e.solver
+		hs.taken, hs.aside, hs.packed = make([]bool, n), make([]bool, n), make([]int32, n)
 	}
+	hs.sets, hs.chosen, hs.best, hs.bestCost = sets, hs.chosen[:0], nil, -1
+	hs.nodes, hs.capped = 0, false
+	hs.limit = min(e.opt.maxNodes(), max(0, e.halt-e.work)/2)
 	hs.visit(0)
 	e.work += hs.nodes // a search that ran to its end is exact whatever it cost
 	if err := e.ctx.Err(); err != nil {
@@ -206,7 +214,8 @@ func (hs *hittingSearch) visit(c int64) {
 // of them with no free member in common), and dead when a conflict not
 // hit has every member set aside.
 func (hs *hittingSearch) survey() (open []int32, bound int64, dead bool) {
-	stamp := int32(hs.nodes)
+	hs.stamp++
+	stamp := hs.stamp
 	for _, st := range hs.sets {
 		if hs.hit(st) {
 			continue

@@ -30,25 +30,33 @@ func unaryPiece(a Alt, ci int32) piece {
 	return p
 }
 
-// unarySet is the union of the alternatives of the unary constraint ci,
-// kept when the solver keeps them (for the many checks of an
-// explanation): the caller must not change it.
+// unarySet is the union of the alternatives of the unary constraint ci.
+// While the solver keeps them (for the many checks of an explanation),
+// the unions of several alternatives are made once: the caller must not
+// change the set.
 func (s *solver) unarySet(ci int32) []piece {
-	if s.unary == nil {
-		return unarySet(&s.n.cons[ci], ci)
+	c := &s.n.cons[ci]
+	if !s.keepUnary || len(c.Alts) == 1 {
+		return unarySet(c, ci)
 	}
-	if s.unary[ci] == nil {
-		s.unary[ci] = unarySet(&s.n.cons[ci], ci)
+	set, ok := s.unary[ci]
+	if !ok {
+		if s.unary == nil {
+			s.unary = map[int32][]piece{}
+		}
+		set = unarySet(c, ci)
+		s.unary[ci] = set
 	}
-	return s.unary[ci]
+	return set
 }
 
 // ownUnarySet is unarySet(ci) for the caller to change.
 func (s *solver) ownUnarySet(ci int32) []piece {
-	if s.unary == nil {
-		return unarySet(&s.n.cons[ci], ci)
+	set := s.unarySet(ci)
+	if s.keepUnary && len(s.n.cons[ci].Alts) > 1 {
+		return slices.Clone(set)
 	}
-	return slices.Clone(s.unarySet(ci))
+	return set
 }
 
 // unarySet is the union of the alternatives of the unary constraint c

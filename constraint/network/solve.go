@@ -38,14 +38,17 @@ func (n *Network) SolveTiers(ctx context.Context, opt Options) ([3]*Result, erro
 
 // solver holds what one call of Solve shares between its searches.
 type solver struct {
-	n       *Network
-	ctx     context.Context
-	opt     Options
-	rank    []int32 // constraint index → rank of its id
-	nodes   int     // search nodes spent, by every search
-	g       stn
-	unary   [][]piece // per constraint: the union of its alternatives, when kept
-	scratch []piece   // an intersection being made
+	n     *Network
+	ctx   context.Context
+	opt   Options
+	rank  []int32 // constraint index → rank of its id
+	nodes int     // search nodes spent, by every search
+	g     stn
+	// keepUnary keeps in unary, per constraint of several alternatives
+	// on one variable, their union.
+	keepUnary bool
+	unary     map[int32][]piece
+	scratch   []piece // an intersection being made
 }
 
 func (n *Network) newSolver(ctx context.Context, opt Options, rank []int32) *solver {
