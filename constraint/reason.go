@@ -60,10 +60,9 @@ type built struct {
 	noArrival []placeNames
 }
 
-// link returns the link of the network constraint id.
-func (b *built) link(id string) (link, bool) {
-	i, ok := b.net.Index(id)
-	if !ok || i >= len(b.links) {
+// link returns the link of the network constraint of index i.
+func (b *built) link(i int) (link, bool) {
+	if i < 0 || i >= len(b.links) {
 		return link{}, false
 	}
 	return b.links[i], true
@@ -112,7 +111,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 		b.vars = append(b.vars, b.net.AddVar(e.ID))
 	}
 	add := func(c network.Constraint, l link) error {
-		if err := b.net.Add(c); err != nil {
+		if _, err := b.net.Add(c); err != nil {
 			return fmt.Errorf("building the network for %s: %w", l.evidence, err)
 		}
 		b.links = append(b.links, l) // in the network's order of constraints
@@ -427,8 +426,13 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 				reported[key] = true
 				res.Conflicts = append(res.Conflicts, Conflict{Tier: t, Evidence: evs, Steps: steps})
 			}
-			evs, _ := b.explainSet(sol.Correction)
-			res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs})
+			if sol.BudgetSpent {
+				res.Notes = append(res.Notes, fmt.Sprintf("The explanation of the %s tier stopped at its work budget: the correction given, if any, may not be the cheapest.", t))
+			}
+			if len(sol.Correction) > 0 {
+				evs, _ := b.explainSet(sol.Correction)
+				res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs})
+			}
 			continue
 		}
 		for i := range a.events {
@@ -513,8 +517,8 @@ func (b *built) bound(nb network.Bound, upper bool) Bound {
 	if upper && nb.Value < network.Inf || !upper && nb.Value > -network.Inf {
 		out.Day, out.Bounded = date.Day(nb.Value), true
 	}
-	for _, id := range nb.Because {
-		l, ok := b.link(id)
+	for _, i := range nb.Because {
+		l, ok := b.link(i)
 		if !ok {
 			continue
 		}
@@ -531,14 +535,14 @@ func (b *built) bound(nb network.Bound, upper bool) Bound {
 	return out
 }
 
-// explainSet maps network constraint ids to evidence ids (sorted, without
-// repeats) and the steps that say what each contributes.
-func (b *built) explainSet(ids []string) ([]string, []Step) {
+// explainSet maps network constraint indices to evidence ids (sorted,
+// without repeats) and the steps that say what each contributes.
+func (b *built) explainSet(indices []int) ([]string, []Step) {
 	seen := map[string]bool{}
 	var evs []string
 	var steps []Step
-	for _, id := range ids {
-		l, ok := b.link(id)
+	for _, i := range indices {
+		l, ok := b.link(i)
 		if !ok {
 			continue
 		}

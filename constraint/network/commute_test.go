@@ -36,7 +36,7 @@ func commute(t *testing.T, aTravel, bTravel []Alt) (*Network, [5]Var) {
 		{ID: "b-travel", Alts: bTravel},
 		{ID: "a-arrived-after-b-left", Alts: []Alt{{v[3], v[2], 10, 20}}},
 	} {
-		if err := n.Add(c); err != nil {
+		if _, err := n.Add(c); err != nil {
 			t.Fatal(err)
 		}
 	}
@@ -67,12 +67,12 @@ func TestCommute(t *testing.T) {
 			}
 		}
 		// A arrives no earlier than 40: a-left (>= 10) then car (>= 30).
-		if got := r.Earliest(v[2]); got.Value != 40 || !slices.Equal(got.Because, []string{"a-left", "a-travel"}) {
+		if got := r.Earliest(v[2]); got.Value != 40 || !slices.Equal(n.IDs(got.Because), []string{"a-left", "a-travel"}) {
 			t.Errorf("earliest arrival of A = %v, want 40 because [a-left a-travel]", got)
 		}
 		// A arrives no later than 50: B arrives <= 70, carpool >= 40, so B
 		// leaves <= 30, and A arrives at most 20 after.
-		if got := r.Latest(v[2]); got.Value != 50 || !slices.Equal(got.Because, []string{"b-arrived", "b-travel", "a-arrived-after-b-left"}) {
+		if got := r.Latest(v[2]); got.Value != 50 || !slices.Equal(n.IDs(got.Because), []string{"b-arrived", "b-travel", "a-arrived-after-b-left"}) {
 			t.Errorf("latest arrival of A = %v", got)
 		}
 	})
@@ -89,15 +89,15 @@ func TestCommute(t *testing.T) {
 			t.Fatal("bus and carpool: consistent, want inconsistent")
 		}
 		all := []string{"a-arrived-after-b-left", "a-left", "a-travel", "b-arrived", "b-travel"}
-		if len(r.Conflicts) != 1 || !slices.Equal(r.Conflicts[0], all) || !r.ConflictsComplete {
+		if len(r.Conflicts) != 1 || !slices.Equal(n.IDs(r.Conflicts[0]), all) || !r.ConflictsComplete {
 			t.Errorf("conflicts %v (complete %v), want exactly [%v]", r.Conflicts, r.ConflictsComplete, all)
 		}
-		if len(r.Correction) != 1 || !slices.Contains(all, r.Correction[0]) {
+		if len(r.Correction) != 1 || !slices.Contains(all, n.ID(r.Correction[0])) {
 			t.Errorf("correction %v, want one of the five constraints", r.Correction)
 		}
 		// The negative cycle itself: A arrives >= 10 + 60 = 70 and
 		// A arrives <= (70 - 40) + 20 = 50, a cycle of weight 50 - 70 = -20.
-		s := n.newSolver(ctx, Options{})
+		s := n.newSolver(ctx, Options{}, n.ranks())
 		p := s.prepare([]int32{0, 1, 2, 3, 4})
 		pr := p.problems[0]
 		var arcs []arc
@@ -137,10 +137,10 @@ func TestCommute(t *testing.T) {
 		// A arrives <= 20 after B leaves), the path naming the chosen
 		// alternative's disjunction; no earlier than 40 (A leaves >= 10,
 		// by car >= 30).
-		if got := r.Latest(v[2]); got.Value != 70 || !slices.Equal(got.Because, []string{"b-arrived", "b-travel", "a-arrived-after-b-left"}) {
+		if got := r.Latest(v[2]); got.Value != 70 || !slices.Equal(n.IDs(got.Because), []string{"b-arrived", "b-travel", "a-arrived-after-b-left"}) {
 			t.Errorf("latest arrival of A = %v, want 70 because [b-arrived b-travel a-arrived-after-b-left]", got)
 		}
-		if got := r.Earliest(v[2]); got.Value != 40 || !slices.Equal(got.Because, []string{"a-left", "a-travel"}) {
+		if got := r.Earliest(v[2]); got.Value != 40 || !slices.Equal(n.IDs(got.Because), []string{"a-left", "a-travel"}) {
 			t.Errorf("earliest arrival of A = %v, want 40 because [a-left a-travel]", got)
 		}
 		for i := 1; i <= 4; i++ {

@@ -20,7 +20,7 @@ func Example() {
 		{ID: "inventory", Tier: network.Firm, Alts: []network.Alt{{From: network.Zero, To: retouch, Lo: -network.Inf, Hi: 400}}},
 		{ID: "order", Tier: network.Hard, Alts: []network.Alt{{From: making, To: retouch, Lo: 30, Hi: network.Inf}}},
 	} {
-		if err := n.Add(c); err != nil {
+		if _, err := n.Add(c); err != nil {
 			fmt.Println(err)
 			return
 		}
@@ -32,7 +32,7 @@ func Example() {
 	}
 	for _, v := range []network.Var{making, retouch} {
 		lo, hi := r.Earliest(v), r.Latest(v)
-		fmt.Printf("%s: %d %v .. %d %v\n", n.Name(v), lo.Value, lo.Because, hi.Value, hi.Because)
+		fmt.Printf("%s: %d %v .. %d %v\n", n.Name(v), lo.Value, n.IDs(lo.Because), hi.Value, n.IDs(hi.Because))
 	}
 	// Output:
 	// making: 100 [pigment] .. 370 [inventory order]
@@ -44,11 +44,15 @@ func Example() {
 func ExampleResult_Conflicts() {
 	n := network.New()
 	x := n.AddVar("making")
-	_ = n.Add(network.Constraint{ID: "pigment", Tier: network.Hard, Alts: []network.Alt{{From: network.Zero, To: x, Lo: 100, Hi: network.Inf}}})
-	_ = n.Add(network.Constraint{ID: "style", Tier: network.Soft, Alts: []network.Alt{{From: network.Zero, To: x, Lo: -network.Inf, Hi: 50}}})
+	_, _ = n.Add(network.Constraint{ID: "pigment", Tier: network.Hard, Alts: []network.Alt{{From: network.Zero, To: x, Lo: 100, Hi: network.Inf}}})
+	_, _ = n.Add(network.Constraint{ID: "style", Tier: network.Soft, Alts: []network.Alt{{From: network.Zero, To: x, Lo: -network.Inf, Hi: 50}}})
 	for _, tier := range []network.Tier{network.Hard, network.Soft} {
 		r, _ := n.Solve(context.Background(), tier, network.Options{})
-		fmt.Println(tier, r.Consistent, r.Conflicts, r.ConflictsComplete, r.Correction)
+		var conflicts [][]string
+		for _, c := range r.Conflicts {
+			conflicts = append(conflicts, n.IDs(c))
+		}
+		fmt.Println(tier, r.Consistent, conflicts, r.ConflictsComplete, n.IDs(r.Correction))
 	}
 	// Output:
 	// hard true [] false []
@@ -59,14 +63,14 @@ func ExampleResult_Conflicts() {
 func ExampleResult_Domain() {
 	n := network.New()
 	x := n.AddVar("letter")
-	_ = n.Add(network.Constraint{ID: "one-of", Alts: []network.Alt{
+	_, _ = n.Add(network.Constraint{ID: "one-of", Alts: []network.Alt{
 		{From: network.Zero, To: x, Lo: 10, Hi: 19},
 		{From: network.Zero, To: x, Lo: 40, Hi: 49},
 		{From: network.Zero, To: x, Lo: 70, Hi: 79},
 	}})
-	_ = n.Add(network.Constraint{ID: "after", Alts: []network.Alt{{From: network.Zero, To: x, Lo: 15, Hi: network.Inf}}})
+	_, _ = n.Add(network.Constraint{ID: "after", Alts: []network.Alt{{From: network.Zero, To: x, Lo: 15, Hi: network.Inf}}})
 	r, _ := n.Solve(context.Background(), network.Soft, network.Options{})
-	fmt.Println(r.Domain(x), r.Earliest(x).Because)
+	fmt.Println(r.Domain(x), n.IDs(r.Earliest(x).Because))
 	// Output:
 	// [{15 19} {40 49} {70 79}] [after]
 }

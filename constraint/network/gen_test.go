@@ -49,7 +49,7 @@ func genNetwork(rng *rand.Rand, sp genSpec) *Network {
 		for range k {
 			c.Alts = append(c.Alts, alt())
 		}
-		if err := n.Add(c); err != nil {
+		if _, err := n.Add(c); err != nil {
 			panic(err)
 		}
 	}
@@ -57,6 +57,15 @@ func genNetwork(rng *rand.Rand, sp genSpec) *Network {
 }
 
 // satisfies reports whether the assignment x (x[0] = 0) meets c.
+// constraintsAt returns the constraints of the given indices.
+func constraintsAt(n *Network, indices []int) []Constraint {
+	out := make([]Constraint, len(indices))
+	for k, i := range indices {
+		out[k] = n.cons[i]
+	}
+	return out
+}
+
 func satisfies(c Constraint, x []int64) bool {
 	for _, a := range c.Alts {
 		d := x[a.To] - x[a.From]

@@ -11,7 +11,7 @@ import (
 func TestAddRefuses(t *testing.T) {
 	n := New()
 	a := n.AddVar("a")
-	if err := n.Add(Constraint{ID: "taken", Alts: []Alt{{Zero, a, 0, 1}}}); err != nil {
+	if _, err := n.Add(Constraint{ID: "taken", Alts: []Alt{{Zero, a, 0, 1}}}); err != nil {
 		t.Fatal(err)
 	}
 	tests := []struct {
@@ -33,10 +33,13 @@ func TestAddRefuses(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.name, func(t *testing.T) {
-			err := n.Add(tt.c)
+			i, err := n.Add(tt.c)
 			var ce *ConstraintError
 			if !errors.As(err, &ce) || !errors.Is(err, ErrInvalid) {
 				t.Fatalf("Add: %v, want a *ConstraintError wrapping ErrInvalid", err)
+			}
+			if i != -1 {
+				t.Errorf("Add refused the constraint but gave index %d, want -1", i)
 			}
 			if !strings.Contains(err.Error(), tt.want) {
 				t.Errorf("Add: %q, want it to say %q", err, tt.want)
@@ -47,8 +50,8 @@ func TestAddRefuses(t *testing.T) {
 		t.Errorf("%d constraints kept, want 1 (refused ones must not be added)", got)
 	}
 	// Sides beyond ±Inf are stored as ±Inf.
-	if err := n.Add(Constraint{ID: "wide", Alts: []Alt{{Zero, a, -5 * Inf, 3 * Inf}}}); err != nil {
-		t.Fatal(err)
+	if i, err := n.Add(Constraint{ID: "wide", Alts: []Alt{{Zero, a, -5 * Inf, 3 * Inf}}}); err != nil || i != 1 {
+		t.Fatalf("Add: index %d, %v; want index 1", i, err)
 	}
 	if got := n.Constraints()[1].Alts[0]; got.Lo != -Inf || got.Hi != Inf {
 		t.Errorf("stored %v, want sides ±Inf", got)
@@ -111,7 +114,7 @@ func TestUnboundedAndInconsistentAccessors(t *testing.T) {
 	if r.Consistent || r.Domain(x) != nil || r.Earliest(x).Value != Inf {
 		t.Errorf("inconsistent network: consistent %v, domain %v, earliest %v", r.Consistent, r.Domain(x), r.Earliest(x))
 	}
-	if len(r.Correction) != 1 || r.Correction[0] != "hi" {
+	if len(r.Correction) != 1 || n.ID(r.Correction[0]) != "hi" {
 		t.Errorf("correction %v, want [hi] (firm is cheaper than hard)", r.Correction)
 	}
 }
@@ -145,7 +148,7 @@ func TestConflictCap(t *testing.T) {
 	if len(r.Conflicts) != 5 || r.ConflictsComplete {
 		t.Errorf("%d conflicts, complete %v; want 5, incomplete", len(r.Conflicts), r.ConflictsComplete)
 	}
-	if len(r.Correction) != 1 || r.Correction[0] != "upper" {
+	if len(r.Correction) != 1 || n.ID(r.Correction[0]) != "upper" {
 		t.Errorf("correction %v, want [upper]", r.Correction)
 	}
 	r, err = n.Solve(context.Background(), Soft, Options{MaxConflicts: 20})

@@ -126,29 +126,18 @@ func checkAgainstBrute(t *testing.T, name string, n *Network, cs []Constraint, r
 		}
 		return
 	}
-	byID := map[string]Constraint{}
-	for _, c := range cs {
-		byID[c.ID] = c
-	}
-	pick := func(ids []string) []Constraint {
-		var out []Constraint
-		for _, id := range ids {
-			out = append(out, byID[id])
-		}
-		return out
-	}
 	if len(res.Conflicts) == 0 {
 		t.Errorf("%s: inconsistent without a conflict", name)
 	}
 	for _, k := range res.Conflicts {
-		if bruteConsistent(nv, pick(k), rc) {
-			t.Errorf("%s: conflict %v is consistent", name, k)
+		if bruteConsistent(nv, constraintsAt(n, k), rc) {
+			t.Errorf("%s: conflict %v is consistent", name, n.IDs(k))
 			continue
 		}
 		for i := range k {
 			sub := slices.Delete(slices.Clone(k), i, i+1)
-			if !bruteConsistent(nv, pick(sub), rc) {
-				t.Errorf("%s: conflict %v is not minimal: %v is inconsistent", name, k, sub)
+			if !bruteConsistent(nv, constraintsAt(n, sub), rc) {
+				t.Errorf("%s: conflict %v is not minimal: %v is inconsistent", name, n.IDs(k), n.IDs(sub))
 				break
 			}
 		}
@@ -196,7 +185,10 @@ func checkAgainstBrute(t *testing.T, name string, n *Network, cs []Constraint, r
 		}
 	}
 	if res.ConflictsComplete {
-		got := slices.Clone(res.Conflicts)
+		var got [][]string
+		for _, k := range res.Conflicts {
+			got = append(got, n.IDs(k))
+		}
 		slices.SortFunc(got, slices.Compare)
 		slices.SortFunc(muses, slices.Compare)
 		if !slices.EqualFunc(got, muses, slices.Equal) {
@@ -208,7 +200,7 @@ func checkAgainstBrute(t *testing.T, name string, n *Network, cs []Constraint, r
 	var rest []Constraint
 	var paid int64
 	for _, c := range cs {
-		if slices.Contains(res.Correction, c.ID) {
+		if slices.Contains(n.IDs(res.Correction), c.ID) {
 			paid += cost(c.Tier)
 		} else {
 			rest = append(rest, c)
@@ -251,7 +243,8 @@ func checkBecause(t *testing.T, name string, n *Network, cs []Constraint, v Var,
 			continue
 		}
 		sub := []Constraint{{ID: "beyond", Alts: []Alt{b.past}}}
-		for _, id := range b.bound.Because {
+		for _, i := range b.bound.Because {
+			id := n.ID(i)
 			c, ok := byID[id]
 			if !ok {
 				t.Errorf("%s: %s: explanation names %q, not an active constraint", name, n.Name(v), id)

@@ -266,30 +266,19 @@ func TestZ3(t *testing.T) {
 			continue
 		}
 		incons++
-		byID := map[string]Constraint{}
-		for _, c := range cs {
-			byID[c.ID] = c
-		}
-		pick := func(ids []string) []Constraint {
-			var out []Constraint
-			for _, id := range ids {
-				out = append(out, byID[id])
-			}
-			return out
-		}
 		for _, k := range res.Conflicts {
-			if z.sat(t, n, pick(k), "") {
-				t.Errorf("%s: conflict %v is satisfiable", name, k)
+			if z.sat(t, n, constraintsAt(n, k), "") {
+				t.Errorf("%s: conflict %v is satisfiable", name, n.IDs(k))
 			}
 			for j := range k {
-				if !z.sat(t, n, pick(slices.Delete(slices.Clone(k), j, j+1)), "") {
-					t.Errorf("%s: conflict %v is not minimal without %s", name, k, k[j])
+				if !z.sat(t, n, constraintsAt(n, slices.Delete(slices.Clone(k), j, j+1)), "") {
+					t.Errorf("%s: conflict %v is not minimal without %s", name, n.IDs(k), n.ID(k[j]))
 				}
 			}
 		}
 		var rest []Constraint
 		for _, c := range cs {
-			if !slices.Contains(res.Correction, c.ID) {
+			if !slices.Contains(n.IDs(res.Correction), c.ID) {
 				rest = append(rest, c)
 			}
 		}

@@ -1,0 +1,77 @@
+package constraint
+
+import (
+	"context"
+	"fmt"
+	"os"
+	"slices"
+	"strings"
+	"testing"
+
+	"terminus/constraint/network"
+	"terminus/materials"
+)
+
+// analyzeFile analyses a case file of testdata against the built-in
+// dataset.
+func analyzeFile(tb testing.TB, path string) *Result {
+	tb.Helper()
+	data, err := os.ReadFile(path)
+	if err != nil {
+		tb.Fatal(err)
+	}
+	c, err := ParseCase(path, data, "yaml")
+	if err != nil {
+		tb.Fatal(err)
+	}
+	ds, err := materials.Builtin()
+	if err != nil {
+		tb.Fatal(err)
+	}
+	res, err := Analyze(context.Background(), c, ds, Options{})
+	if err != nil {
+		tb.Fatal(err)
+	}
+	return res
+}
+
+// TestHostileRecordsEnd analyses forty records, each one of two hundred
+// years, the even and the odd years in turn: four hundred conflicts of
+// two, whose cheapest correction once took a search that never ended. The
+// analysis ends with the list of conflicts marked incomplete and the
+// cheapest correction: the twenty odd records at each inconsistent tier
+// (as costly as the even ones, and "record-1" sorts first). The work it
+// takes is counted by TestRecordsOneOfEnds in the network package.
+func TestHostileRecordsEnd(t *testing.T) {
+	res := analyzeFile(t, "testdata/hostile/records-40-oneof-200.yaml")
+	var odd []string
+	for i := 1; i <= 39; i += 2 {
+		odd = append(odd, fmt.Sprintf("record-%d", i))
+	}
+	slices.Sort(odd)
+	if res.Consistent[network.Firm] || res.ConflictsComplete[network.Firm] {
+		t.Errorf("firm tier: consistent %v, conflicts complete %v; want inconsistent, incomplete", res.Consistent[network.Firm], res.ConflictsComplete[network.Firm])
+	}
+	if len(res.Corrections) == 0 {
+		t.Fatal("no correction")
+	}
+	for _, c := range res.Corrections {
+		if !slices.Equal(c.Evidence, odd) {
+			t.Errorf("%s tier: correction %v, want the odd records", c.Tier, c.Evidence)
+		}
+	}
+	for _, n := range res.Notes {
+		if strings.Contains(n, "work budget") {
+			t.Errorf("note %q: the budget should not run out here", n)
+		}
+	}
+}
+
+// BenchmarkHostileRecords is the analysis of TestHostileRecordsEnd: it
+// must take under a second and allocate under 256 MiB in all.
+func BenchmarkHostileRecords(b *testing.B) {
+	b.ReportAllocs()
+	for b.Loop() {
+		analyzeFile(b, "testdata/hostile/records-40-oneof-200.yaml")
+	}
+}
