@@ -1,4 +1,4 @@
-package constraint
+package constraint_test
 
 import (
 	"context"
@@ -8,19 +8,22 @@ import (
 	"strings"
 	"testing"
 
+	"terminus/constraint"
+	"terminus/constraint/casefile"
+	"terminus/constraint/input"
 	"terminus/constraint/network"
 	"terminus/materials"
 )
 
 // analyzeFile analyses a case file of testdata against the built-in
 // dataset.
-func analyzeFile(tb testing.TB, path string) *Result {
+func analyzeFile(tb testing.TB, path string) *constraint.Result {
 	tb.Helper()
 	data, err := os.ReadFile(path)
 	if err != nil {
 		tb.Fatal(err)
 	}
-	c, err := ParseCase(path, data, "yaml")
+	c, err := casefile.Parse(path, data, input.YAML, input.Limits{})
 	if err != nil {
 		tb.Fatal(err)
 	}
@@ -28,7 +31,7 @@ func analyzeFile(tb testing.TB, path string) *Result {
 	if err != nil {
 		tb.Fatal(err)
 	}
-	res, err := Analyze(context.Background(), c, ds, Options{})
+	res, err := constraint.Analyze(context.Background(), c, ds, constraint.Options{})
 	if err != nil {
 		tb.Fatal(err)
 	}
