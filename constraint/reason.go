@@ -58,6 +58,8 @@ type built struct {
 	// noArrival lists, per place (in the order met), the materials without
 	// arrival data there.
 	noArrival []placeNames
+	// chains holds the chains of evidence read back, by solver path.
+	chains map[chainKey]*chainEntry
 }
 
 // link returns the link of the network constraint of index i.
@@ -435,16 +437,20 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 			}
 			continue
 		}
+		paths := make([][2][]int, len(a.events))
 		for i := range a.events {
 			v := b.vars[i]
 			w := &Window{}
 			for _, iv := range sol.Domain(v) {
 				w.Intervals = append(w.Intervals, spanOf(iv))
 			}
-			w.Earliest = b.bound(sol.Earliest(v), false)
-			w.Latest = b.bound(sol.Latest(v), true)
+			lo, hi := sol.Earliest(v), sol.Latest(v)
+			w.Earliest = b.bound(lo, false)
+			w.Latest = b.bound(hi, true)
+			paths[i] = [2][]int{lo.Because, hi.Because}
 			res.Events[i].Windows[t] = w
 		}
+		b.linkChains(res.Events, t, paths)
 	}
 	for _, e := range res.Events {
 		// The soft window is the narrowest; when even it is open on both
@@ -510,29 +516,6 @@ func spanOf(iv network.Interval) Span {
 		s.OpenEnd, s.Last = true, 0
 	}
 	return s
-}
-
-func (b *built) bound(nb network.Bound, upper bool) Bound {
-	out := Bound{}
-	if upper && nb.Value < network.Inf || !upper && nb.Value > -network.Inf {
-		out.Day, out.Bounded = date.Day(nb.Value), true
-	}
-	for _, i := range nb.Because {
-		l, ok := b.link(i)
-		if !ok {
-			continue
-		}
-		if len(out.Because) == 0 || out.Because[len(out.Because)-1] != l.evidence {
-			out.Because = append(out.Because, l.evidence)
-		}
-		text := l.lower
-		if upper {
-			text = l.upper
-		}
-		out.Chain = append(out.Chain, Step{Evidence: l.evidence, Text: text.String()})
-		out.Precision = wording.Coarser(out.Precision, l.precision)
-	}
-	return out
 }
 
 // explainSet maps network constraint indices to evidence ids (sorted,

@@ -91,6 +91,13 @@ type Bound struct {
 	// dates: the coarsest of its steps (day when none states one). Reports
 	// show the bound no finer ([wording.BoundAt]); Day stays exact.
 	Precision wording.Precision
+	// From names the event whose bound at the same tier and side this one
+	// continues (through an order), when there is one: Chain[:Own] is that
+	// bound's chain, Chain[Own:] this bound's own steps. The slices share
+	// their storage with From's, so a long order of events costs linear
+	// space; a report may write the chain as a reference to From.
+	From string
+	Own  int
 }
 
 // Step is one link of a chain of evidence.

@@ -84,7 +84,7 @@ func evidence(f VerdictFacts) string {
 	case len(ids) == 0:
 		return ""
 	case !f.EachAlone:
-		return " (" + strings.Join(ids, " → ") + ", together)"
+		return " (" + Chain(ids) + ", together)"
 	case len(ids) == 1:
 		return " (" + ids[0] + ")"
 	}

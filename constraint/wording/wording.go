@@ -107,3 +107,18 @@ func NotBefore[T ~int8 | ~int](t T) string { return lowerWords[t] }
 
 // NotAfter is [NotBefore] for an upper bound.
 func NotAfter[T ~int8 | ~int](t T) string { return upperWords[t] }
+
+// chainShown is how many ids of a chain are written out in full; a longer
+// chain shows its first and last two with the count of those between.
+const chainShown = 6
+
+// Chain writes the ids of a chain of evidence with arrows: "r-dendro →
+// order:felling>heartwood", or for a long one "r → o1 → … 996 more … →
+// o998 → o999", so that a report of a long order of events grows with
+// the case, not with its square.
+func Chain(ids []string) string {
+	if len(ids) <= chainShown {
+		return strings.Join(ids, " → ")
+	}
+	return strings.Join(ids[:2], " → ") + " → … " + itoa(len(ids)-4) + " more … → " + strings.Join(ids[len(ids)-2:], " → ")
+}

@@ -125,12 +125,12 @@ func newHTMLView(r *constraint.Result) *htmlView {
 			row.Earliest, row.Latest = "open", "open"
 			if w.Earliest.Bounded {
 				row.Earliest = wording.Bound(w.Earliest.Day, false)
-				row.EarliestBy = strings.Join(w.Earliest.Because, " → ")
+				row.EarliestBy = wording.Chain(w.Earliest.Because)
 				row.EarliestSteps = stepTexts(w.Earliest.Chain)
 			}
 			if w.Latest.Bounded {
 				row.Latest = wording.Bound(w.Latest.Day, true)
-				row.LatestBy = strings.Join(w.Latest.Because, " → ")
+				row.LatestBy = wording.Chain(w.Latest.Because)
 				row.LatestSteps = stepTexts(w.Latest.Chain)
 			}
 			if len(w.Intervals) > 1 {

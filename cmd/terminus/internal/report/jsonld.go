@@ -202,10 +202,10 @@ func activity(r *constraint.Result, e constraint.EventResult, typ string, t netw
 	dating.UsedSpecificObject = append(dating.UsedSpecificObject, statement("materials dataset", fmt.Sprintf("terminus materials dataset %s, sha256 %s", r.Dataset.Version, r.Dataset.SHA256)))
 	var words []string
 	if w.Earliest.Bounded {
-		words = append(words, fmt.Sprintf("%s %s (%s)", wording.NotBefore(t), wording.Bound(w.Earliest.Day, false), strings.Join(w.Earliest.Because, " → ")))
+		words = append(words, fmt.Sprintf("%s %s (%s)", wording.NotBefore(t), wording.Bound(w.Earliest.Day, false), wording.Chain(w.Earliest.Because)))
 	}
 	if w.Latest.Bounded {
-		words = append(words, fmt.Sprintf("%s %s (%s)", wording.NotAfter(t), wording.Bound(w.Latest.Day, true), strings.Join(w.Latest.Because, " → ")))
+		words = append(words, fmt.Sprintf("%s %s (%s)", wording.NotAfter(t), wording.Bound(w.Latest.Day, true), wording.Chain(w.Latest.Because)))
 	}
 	if len(words) == 0 {
 		words = append(words, "the evidence considered sets no bound")

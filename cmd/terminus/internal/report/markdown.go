@@ -63,7 +63,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 				hi += " (only within " + spansText(win.Intervals) + ")"
 			}
 			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), wording.Tier(t), lo, mdEscape(hi),
-				mdEscape(strings.Join(win.Earliest.Because, " → ")), mdEscape(strings.Join(win.Latest.Because, " → ")))
+				mdEscape(wording.Chain(win.Earliest.Because)), mdEscape(wording.Chain(win.Latest.Because)))
 		}
 	}
 	fmt.Fprintln(ew)

@@ -141,7 +141,7 @@ func boundLabel(e constraint.EventResult, t int, b constraint.Bound, upper bool)
 	for _, s := range b.Chain {
 		steps = append(steps, s.Text)
 	}
-	full = fmt.Sprintf("%s, %s tier, %s %s: %s", e.ID, wording.Tier(t), which, day, strings.Join(b.Because, " → "))
+	full = fmt.Sprintf("%s, %s tier, %s %s: %s", e.ID, wording.Tier(t), which, day, wording.Chain(b.Because))
 	if len(steps) > 0 {
 		full += "\n" + strings.Join(steps, "\n→ ")
 	}

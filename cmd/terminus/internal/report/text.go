@@ -250,14 +250,28 @@ func writeChain(w io.Writer, which string, b constraint.Bound) {
 		wrap(w, prefix, "(no evidence recorded)")
 		return
 	}
+	arrow := strings.Repeat(" ", len([]rune(prefix))-2) + "→ "
 	for i, s := range b.Chain {
+		// A long chain shows its first and last two steps and counts
+		// the others, so that a long order of events reads in linear
+		// space.
+		if len(b.Chain) > chainStepsShown && i >= 2 && i < len(b.Chain)-2 {
+			if i == 2 {
+				wrap(w, arrow, fmt.Sprintf("… %d more steps …", len(b.Chain)-4))
+			}
+			continue
+		}
 		if i == 0 {
 			wrap(w, prefix, s.Text)
 		} else {
-			wrap(w, strings.Repeat(" ", len([]rune(prefix))-2)+"→ ", s.Text)
+			wrap(w, arrow, s.Text)
 		}
 	}
 }
+
+// chainStepsShown is how many steps of a chain text and Markdown write
+// out in full.
+const chainStepsShown = 6
 
 type errWriter struct {
 	w   io.Writer

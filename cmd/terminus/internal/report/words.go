@@ -35,10 +35,10 @@ func eventSentence(e constraint.EventResult) string {
 			continue
 		}
 		if w.Earliest.Bounded && (prevLo == nil || prevLo.Day != w.Earliest.Day) {
-			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.BoundAt(w.Earliest.Day, false, w.Earliest.Precision), wording.Tier(t), strings.Join(w.Earliest.Because, " → ")))
+			lows = append(lows, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotBefore(t), wording.BoundAt(w.Earliest.Day, false, w.Earliest.Precision), wording.Tier(t), wording.Chain(w.Earliest.Because)))
 		}
 		if w.Latest.Bounded && (prevHi == nil || prevHi.Day != w.Latest.Day) {
-			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.BoundAt(w.Latest.Day, true, w.Latest.Precision), wording.Tier(t), strings.Join(w.Latest.Because, " → ")))
+			highs = append(highs, fmt.Sprintf("%s %s (%s evidence: %s)", wording.NotAfter(t), wording.BoundAt(w.Latest.Day, true, w.Latest.Precision), wording.Tier(t), wording.Chain(w.Latest.Because)))
 		}
 		if w.Earliest.Bounded {
 			b := w.Earliest
