@@ -123,17 +123,16 @@
 // says so: Correction then restores consistency but may not be the
 // cheapest, or is empty when even the last quarter did not suffice. The
 // conflicts listed are minimal in every case, and [Result.Work] tells the
-// work spent. The records above take 32,144 units (TestRecordsOneOfEnds)
-// and about 0.2 s.
+// work spent. The records above take 32,144 units (TestRecordsOneOfEnds).
 //
-// Measured with go test -bench . -benchmem on a shared two-core AMD EPYC
-// machine (the spread is the load of other work), solving at the soft tier
-// and reading every bound with its explanation:
+// Measured with go test -bench . -benchmem -count 6 on a shared two-core
+// AMD EPYC (Turin) machine (the spread is the load of other work), solving
+// at the soft tier and reading every bound with its explanation:
 //
-//	events              10         100          1,000         10,000
-//	ordered series   8–18 µs    66–157 µs     1.0–1.9 ms     14–20 ms
-//	dense (8n pairs) 20–41 µs   0.26–0.51 ms  4.5–7.1 ms     64–72 ms
-//	disjunctive     21–45 µs    1.2–2.2 ms    170–220 ms     20–25 s
+//	events              10          100          1,000        10,000
+//	ordered series   19–31 µs   171–243 µs     2.0–2.5 ms    21–26 ms
+//	dense (8n pairs) 46–66 µs   0.47–0.75 ms   7.0–9.6 ms    79–128 ms
+//	disjunctive      41–58 µs   2.1–3.3 ms     212–309 ms    25–34 s
 //
 // The ordered series and the dense network grow as n log n. The ordered
 // series has a window on every item (one in seven open on one side), the
@@ -143,12 +142,13 @@
 // (84, 886 and 8,544 nodes for 100, 1,000 and 10,000 items) and each
 // costs O(n), so it grows as n². The z3 SMT solver on the same instances
 // (one process, push/pop, two optimisation queries per variable, answers
-// checked equal) takes 24–34 ms, 47–61 ms and 30–43 ms for the three
-// shapes at 10 events and 1.4–1.9 s, 11.9–14.0 s and 1.7–2.3 s at 100.
-// Timed in the same runs, that is 1,300–4,200 times slower at 10 events
-// and 9,000–53,000 at 100 on the simple shapes, and 800–1,700 (10) and
-// 1,000–1,300 (100) on the disjunctive one. Made inconsistent by one soft
+// checked equal) takes 28–46 ms, 51–96 ms and 33–54 ms for the three
+// shapes at 10 events and 1.2–2.4 s, 16.5–26.9 s and 1.8–3.3 s at 100.
+// Timed in the same runs, that is 790–1,800 times slower at 10 events and
+// 5,400–51,000 at 100 on the simple shapes, and 600–1,000 (10) and
+// 660–1,400 (100) on the disjunctive one. Made inconsistent by one soft
 // bound on the first item, the shapes give their conflicts and correction
-// in 0.7–2.8 ms at 100 events and about 20 ms at 1,000
-// (BenchmarkConflicts).
+// in 0.65–4.8 ms at 100 events and 6.7–40 ms at 1,000
+// (BenchmarkConflicts). The forty records above take 141–157 ms and 57 MiB
+// allocated in all (BenchmarkRecordsOneOf).
 package network
