@@ -93,9 +93,11 @@ func (b *built) extend(prev *chainEntry, i int, upper bool) *chainEntry {
 }
 
 // linkChains notes, for each event's bound at a tier, the event whose
-// bound at that tier and side is its path less the last step (the event
-// before it in an order): the bound is that one's chain and one step
-// more, which a report may write as a reference.
+// bound at that tier and side it continues: the last step of its chain is
+// an order from that event, and that event's chain is its own less that
+// step (the same storage, or the same length: the solver's explanation of
+// a value reached through a tight order). A report may then write the
+// bound as a reference to that one and its last step.
 func (b *built) linkChains(events []EventResult, t network.Tier, paths [][2][]int) {
 	owner := map[chainKey]int{}
 	for i, p := range paths {
@@ -111,23 +113,34 @@ func (b *built) linkChains(events []EventResult, t network.Tier, paths [][2][]in
 			continue
 		}
 		for side, path := range p {
-			if len(path) < 2 {
+			n := len(path)
+			if n < 2 {
 				continue
 			}
-			j, ok := owner[keyOf(path, len(path)-1, side == 1)]
-			if !ok || j == i {
+			j, ok := owner[keyOf(path, n-1, side == 1)]
+			if !ok {
+				// The last step is an order from the event before (after,
+				// for an upper bound) whose chain is one step shorter.
+				l, isLink := b.link(path[n-1])
+				if !isLink || !l.order {
+					continue
+				}
+				j = l.before
+				if side == 1 {
+					j = l.after
+				}
+			}
+			if j == i || events[j].Windows[t] == nil {
 				continue
 			}
-			bd := &w.Earliest
+			prev, bd := &events[j].Windows[t].Earliest, &w.Earliest
 			if side == 1 {
-				bd = &w.Latest
+				prev, bd = &events[j].Windows[t].Latest, &w.Latest
 			}
-			bd.From = events[j].ID
-			prev := events[j].Windows[t].Earliest
-			if side == 1 {
-				prev = events[j].Windows[t].Latest
+			if len(prev.Chain) != len(bd.Chain)-1 {
+				continue
 			}
-			bd.Own = len(prev.Chain)
+			bd.From, bd.Own = events[j].ID, len(prev.Chain)
 		}
 	}
 }

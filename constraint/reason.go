@@ -22,6 +22,10 @@ type link struct {
 	// precision is how finely the evidence states its date (or its gap):
 	// a bound is shown no finer than the coarsest step behind it.
 	precision wording.Precision
+	// order is set for an order between two events: the earlier one's
+	// index and the later one's.
+	order         bool
+	before, after int
 }
 
 // lazyText is a text made on first use; the windows of three tiers often
@@ -145,7 +149,9 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 			}
 			c := network.Constraint{ID: o.ID, Tier: o.Strength, Alts: []network.Alt{{From: b.vars[a.eventIdx[o.Event]], To: b.vars[i], Lo: lo, Hi: hi}}}
 			p := wording.Coarser(wording.PrecisionOfDuration(o.AtLeast), wording.PrecisionOfDuration(o.AtMost))
-			if err := add(c, same(o.ID, p, func() string { return text })); err != nil {
+			l := same(o.ID, p, func() string { return text })
+			l.order, l.before, l.after = true, a.eventIdx[o.Event], i
+			if err := add(c, l); err != nil {
 				return nil, err
 			}
 			row := Evidence{ID: o.ID, Kind: "order", Event: e.ID, What: text}

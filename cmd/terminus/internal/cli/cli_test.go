@@ -146,7 +146,7 @@ func TestCheckJSON(t *testing.T) {
 	if err := json.Unmarshal([]byte(out), &doc); err != nil {
 		t.Fatalf("not JSON: %v\n%s", err, out)
 	}
-	if doc.SchemaVersion != 1 || !doc.Consistent["soft"] || len(doc.Cautions) != 5 {
+	if doc.SchemaVersion != 2 || !doc.Consistent["soft"] || len(doc.Cautions) != 5 {
 		t.Errorf("header fields: %+v", doc)
 	}
 	hard := doc.Events[0].Windows["hard"]

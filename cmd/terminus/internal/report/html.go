@@ -207,12 +207,19 @@ func newHTMLView(r *constraint.Result) *htmlView {
 	return v
 }
 
+// stepTexts are the texts of a chain's steps; a long chain keeps its first
+// and last two and counts the others, so that a long order of events
+// gives a report that grows with the case, not with its square.
 func stepTexts(steps []constraint.Step) []string {
-	out := make([]string, len(steps))
-	for i, s := range steps {
-		out[i] = s.Text
+	if len(steps) <= chainStepsShown {
+		out := make([]string, len(steps))
+		for i, s := range steps {
+			out[i] = s.Text
+		}
+		return out
 	}
-	return out
+	n := len(steps)
+	return []string{steps[0].Text, steps[1].Text, fmt.Sprintf("… %d more steps …", n-4), steps[n-2].Text, steps[n-1].Text}
 }
 
 // HTMLStyle is the report's stylesheet, for a page that shows

@@ -14,8 +14,10 @@ import (
 )
 
 // SchemaVersion is the version of the JSON layout; it grows when a field
-// changes meaning or goes away (new fields do not change it).
-const SchemaVersion = 1
+// changes meaning or goes away (new fields do not change it). Version 2:
+// a long chain of evidence may be written as a reference to the bound it
+// continues ("from", "steps").
+const SchemaVersion = 2
 
 // JSON writes r as indented JSON with a schema_version: the document
 // [AppendJSONLine] writes, indented by two spaces (one writer, one schema).

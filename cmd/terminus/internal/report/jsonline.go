@@ -253,11 +253,39 @@ func appendBound(b []byte, bd *constraint.Bound) []byte {
 	} else {
 		b = append(b, `null,"year":null,"precision":null`...)
 	}
+	because, chain, from := chainOf(bd)
 	b = append(b, `,"because":`...)
-	b = appendStrings(b, bd.Because)
+	b = appendStrings(b, because)
 	b = append(b, `,"chain":`...)
-	b = appendSteps(b, bd.Chain)
+	b = appendSteps(b, chain)
+	b = append(b, `,"from":`...)
+	b = appendOptString(b, from)
+	b = append(b, `,"steps":`...)
+	b = strconv.AppendInt(b, int64(len(bd.Chain)), 10)
 	return append(b, '}')
+}
+
+// maxJSONChain is the longest chain the JSON writes whole in each bound.
+// A longer one that continues another event's bound (through an order)
+// is written as a reference: "from" names that event (its bound at the
+// same tier and side comes first), "because" and "chain" hold this
+// bound's own steps and "steps" counts them all, so that the document
+// grows with the case, not with its square.
+const maxJSONChain = 8
+
+// chainOf is what the JSON writes of a bound's chain: the ids, the steps
+// and the event it continues ("" when written whole).
+func chainOf(bd *constraint.Bound) (because []string, chain []constraint.Step, from string) {
+	if bd.From == "" || len(bd.Chain) <= maxJSONChain {
+		return bd.Because, bd.Chain, ""
+	}
+	chain = bd.Chain[bd.Own:]
+	for _, s := range chain {
+		if len(because) == 0 || because[len(because)-1] != s.Evidence {
+			because = append(because, s.Evidence)
+		}
+	}
+	return because, chain, bd.From
 }
 
 func appendSteps(b []byte, steps []constraint.Step) []byte {

@@ -71,6 +71,8 @@ type jsonBound struct {
 	Precision *string    `json:"precision"`
 	Because   []string   `json:"because"`
 	Chain     []jsonStep `json:"chain"`
+	From      *string    `json:"from"`
+	Steps     int        `json:"steps"`
 }
 
 type jsonStep struct {
@@ -167,14 +169,15 @@ func spans(list []constraint.Span) [][2]*string {
 }
 
 func bound(b constraint.Bound) jsonBound {
-	out := jsonBound{Because: nonNil(b.Because), Chain: []jsonStep{}}
+	because, chain, from := chainOf(&b)
+	out := jsonBound{Because: nonNil(because), Chain: []jsonStep{}, From: strPtr(from), Steps: len(b.Chain)}
 	if b.Bounded {
 		out.Date = dayPtr(b.Day, true)
 		y := b.Day.Year()
 		out.Year = &y
 		out.Precision = strPtr(b.Precision.String())
 	}
-	for _, s := range b.Chain {
+	for _, s := range chain {
 		out.Chain = append(out.Chain, jsonStep{Evidence: s.Evidence, Text: s.Text})
 	}
 	return out

@@ -137,10 +137,7 @@ func boundLabel(e constraint.EventResult, t int, b constraint.Bound, upper bool)
 	if upper {
 		which = "latest"
 	}
-	var steps []string
-	for _, s := range b.Chain {
-		steps = append(steps, s.Text)
-	}
+	steps := stepTexts(b.Chain)
 	full = fmt.Sprintf("%s, %s tier, %s %s: %s", e.ID, wording.Tier(t), which, day, wording.Chain(b.Because))
 	if len(steps) > 0 {
 		full += "\n" + strings.Join(steps, "\n→ ")
