@@ -439,7 +439,7 @@ func (a *analysis) run(ctx context.Context, opt Options, ov override) (*Result, 
 			}
 			if len(sol.Correction) > 0 {
 				evs, _ := b.explainSet(sol.Correction)
-				res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs})
+				res.Corrections = append(res.Corrections, Correction{Tier: t, Evidence: evs, Cheapest: !sol.BudgetSpent})
 			}
 			continue
 		}

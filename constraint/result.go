@@ -142,6 +142,9 @@ type Conflict struct {
 type Correction struct {
 	Tier     network.Tier
 	Evidence []string
+	// Cheapest is false when the search stopped at its work budget before
+	// it could prove that no cheaper correction exists.
+	Cheapest bool
 }
 
 // Evidence is one row of the evidence table.

@@ -134,3 +134,13 @@ func Join(xs []string, and string) string {
 	}
 	return strings.Join(xs[:len(xs)-1], ", ") + " " + and + " " + xs[len(xs)-1]
 }
+
+// Correction says what restores agreement at a tier: the smallest, weakest
+// set of evidence to set aside, or, when the search stopped at its work
+// budget, one that does (perhaps not the cheapest).
+func Correction(tier string, evidence []string, cheapest bool) string {
+	if !cheapest {
+		return "Setting aside " + strings.Join(evidence, ", ") + " restores agreement at the " + tier + " tier; the search stopped at its work budget, so a cheaper change may exist."
+	}
+	return "The smallest, weakest change that restores agreement at the " + tier + " tier is to set aside " + strings.Join(evidence, ", ") + "."
+}

@@ -188,7 +188,7 @@ func newHTMLView(r *constraint.Result) *htmlView {
 			}
 		}
 		for _, c := range r.Corrections {
-			v.Corrections = append(v.Corrections, fmt.Sprintf("The smallest, weakest change that restores agreement at the %s tier is to set aside %s.", wording.Tier(c.Tier), strings.Join(c.Evidence, ", ")))
+			v.Corrections = append(v.Corrections, wording.Correction(wording.Tier(c.Tier), c.Evidence, c.Cheapest))
 		}
 	}
 	for _, d := range r.Disagreements {

@@ -142,6 +142,8 @@ func AppendJSONLine(b []byte, r *constraint.Result) []byte {
 		b = AppendJSONString(b, c.Tier.String())
 		b = append(b, `,"remove":`...)
 		b = appendStrings(b, c.Evidence)
+		b = append(b, `,"cheapest":`...)
+		b = strconv.AppendBool(b, c.Cheapest)
 		b = append(b, '}')
 	}
 	b = append(b, `],"evidence":[`...)

@@ -102,8 +102,9 @@ type jsonConflict struct {
 }
 
 type jsonCorrection struct {
-	Tier   string   `json:"tier"`
-	Remove []string `json:"remove"`
+	Tier     string   `json:"tier"`
+	Remove   []string `json:"remove"`
+	Cheapest bool     `json:"cheapest"`
 }
 
 type jsonEvidence struct {
@@ -242,7 +243,7 @@ func toJSON(r *constraint.Result) jsonResult {
 		out.Conflicts = append(out.Conflicts, jc)
 	}
 	for _, c := range r.Corrections {
-		out.Corrections = append(out.Corrections, jsonCorrection{Tier: c.Tier.String(), Remove: nonNil(c.Evidence)})
+		out.Corrections = append(out.Corrections, jsonCorrection{Tier: c.Tier.String(), Remove: nonNil(c.Evidence), Cheapest: c.Cheapest})
 	}
 	for _, e := range r.Evidence {
 		je := jsonEvidence{ID: e.ID, Kind: e.Kind, Event: e.Event, What: e.What, Method: e.Method, Sample: e.Sample,

@@ -140,7 +140,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 			}
 		}
 		for _, c := range r.Corrections {
-			fmt.Fprintf(ew, "- The smallest, weakest change that restores agreement at the %s tier is to set aside %s.\n", wording.Tier(c.Tier), mdEscape(strings.Join(c.Evidence, ", ")))
+			fmt.Fprintf(ew, "- %s\n", mdEscape(wording.Correction(wording.Tier(c.Tier), c.Evidence, c.Cheapest)))
 		}
 		fmt.Fprintln(ew)
 	}

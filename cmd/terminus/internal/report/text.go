@@ -199,7 +199,11 @@ func Text(w io.Writer, r *constraint.Result) error {
 			}
 		}
 		for _, c := range r.Corrections {
-			wrap(ew, "  ", fmt.Sprintf("Cheapest correction at the %s tier: set aside %s.", wording.Tier(c.Tier), strings.Join(c.Evidence, ", ")))
+			if c.Cheapest {
+				wrap(ew, "  ", fmt.Sprintf("Cheapest correction at the %s tier: set aside %s.", wording.Tier(c.Tier), strings.Join(c.Evidence, ", ")))
+			} else {
+				wrap(ew, "  ", wording.Correction(wording.Tier(c.Tier), c.Evidence, false))
+			}
 		}
 	}
 
