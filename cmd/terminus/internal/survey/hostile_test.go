@@ -1,6 +1,7 @@
 package survey
 
 import (
+	"bytes"
 	"context"
 	"io"
 	"os"
@@ -135,5 +136,49 @@ func BenchmarkHostile(b *testing.B) {
 			}
 			b.ReportMetric(float64(peak)/(1<<20), "heap-sys-MiB")
 		})
+	}
+}
+
+// A survey never stalls on one record: the record of forty one-of-two-
+// hundred records, among two thousand ordinary ones, ends within the
+// solver's work budget (its conflicts listed as incomplete), and every
+// record gets its output record in order.
+func TestHostileSlowRecord(t *testing.T) {
+	data, err := os.ReadFile(filepath.Join("testdata", "hostile", "survey-one-slow-record.jsonl"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out bytes.Buffer
+	c, err := Run(context.Background(), []*Input{openText(t, "slow.jsonl", string(data))}, NewJSONLWriter(&out, nil), Options{Dataset: builtin(t)})
+	if err != nil {
+		t.Fatal(err)
+	}
+	if c.Records != 2001 || !c.Balanced() {
+		t.Fatalf("%d records, balanced %v; want 2001, balanced", c.Records, c.Balanced())
+	}
+	lines := strings.Split(strings.TrimSpace(out.String()), "\n")
+	if len(lines) != 2001 {
+		t.Fatalf("%d output records, want 2001", len(lines))
+	}
+	slow := lines[1000]
+	if !strings.Contains(slow, `"id":"slow-sets"`) || !strings.Contains(slow, `"conflicts_complete":{"hard":true,"firm":false`) {
+		t.Errorf("the slow record's output: %.300s", slow)
+	}
+}
+
+// One record of a long order of events writes an output record that
+// grows linearly with the order (see TestLongOrdersGrowLinearly in cli).
+func TestHostileChainRecord(t *testing.T) {
+	data, err := os.ReadFile(filepath.Join("testdata", "hostile", "survey-one-chain-record-88KB.jsonl"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	var out bytes.Buffer
+	if _, err := Run(context.Background(), []*Input{openText(t, "chain.jsonl", string(data))}, NewJSONLWriter(&out, nil), Options{Dataset: builtin(t)}); err != nil {
+		t.Fatal(err)
+	}
+	// 88 KB of input; the chains copied per event made hundreds of MB.
+	if out.Len() > 100*len(data) {
+		t.Errorf("%d bytes of output for %d of input", out.Len(), len(data))
 	}
 }
