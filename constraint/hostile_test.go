@@ -78,3 +78,53 @@ func BenchmarkHostileRecords(b *testing.B) {
 		analyzeFile(b, "testdata/hostile/records-40-oneof-200.yaml")
 	}
 }
+
+// TestHostileChainsShare reads the hostile orders of 1,000 and 2,000
+// events: each bound's chain runs the length of the order, and the chains
+// of successive events share their storage (as the solver's paths do, in
+// arrays that double as they grow), so that all the chains of an order of
+// n events hold a few times n steps, not n²/2. (The bytes written per
+// format are held to linear growth by TestLongOrdersGrowLinearly in the
+// command's tests.)
+func TestHostileChainsShare(t *testing.T) {
+	for _, n := range []int{1000, 2000} {
+		res := analyzeFile(t, fmt.Sprintf("testdata/hostile/chain-%d-events.yaml", n))
+		last := res.Events[n-1].Windows[network.Hard].Earliest
+		if len(last.Chain) != n || last.From != fmt.Sprintf("e%d", n-2) || last.Own != n-1 {
+			t.Fatalf("%d events: last chain %d steps from %q own %d", n, len(last.Chain), last.From, last.Own)
+		}
+		held := map[*constraint.Step]int{} // each backing array once, by its first step
+		steps := 0
+		for _, e := range res.Events {
+			for _, w := range e.Windows {
+				if w == nil {
+					continue
+				}
+				for _, b := range []constraint.Bound{w.Earliest, w.Latest} {
+					steps += len(b.Chain)
+					if len(b.Chain) > 0 {
+						held[&b.Chain[0]] = max(held[&b.Chain[0]], cap(b.Chain))
+					}
+				}
+			}
+		}
+		total := 0
+		for _, c := range held {
+			total += c
+		}
+		// Three tiers, two sides: the chains show about 3n² steps; the
+		// arrays behind them hold each chain once, in arrays that at most
+		// double: under 4n steps a chain, 24n in all.
+		if total > 24*n {
+			t.Errorf("%d events: %d steps shown, %d held in storage; want linear", n, steps, total)
+		}
+	}
+}
+
+// BenchmarkHostileChain analyses the order of 2,000 events.
+func BenchmarkHostileChain(b *testing.B) {
+	b.ReportAllocs()
+	for b.Loop() {
+		analyzeFile(b, "testdata/hostile/chain-2000-events.yaml")
+	}
+}

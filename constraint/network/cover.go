@@ -73,7 +73,20 @@ func (sr *search) recordSide(lower bool) {
 	}
 	c.extended = c.extended[:k]
 	clear(c.extended)
-	c.paths[0] = []int{}
+	// The root's path is empty, with room for the deepest path of the
+	// side's tree: a chain of ordered events then grows its paths in one
+	// array, each node's path a prefix of the next one's (linear space for
+	// the explanations of a long order, and one storage for a reader to
+	// share).
+	depth := int32(0)
+	hops := g.upHops
+	if lower {
+		hops = g.loHops
+	}
+	for _, h := range hops[:k] {
+		depth = max(depth, h)
+	}
+	c.paths[0] = make([]int, 0, depth)
 	for v := 1; v < k; v++ {
 		var val int64
 		var b *Bound
