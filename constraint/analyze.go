@@ -262,11 +262,7 @@ func (a *analysis) resolvePlace(place string, p Pos) (string, error) {
 	}
 	hint := "use an ISO 3166-1 alpha-2 code (NL, GB, JP), a UN M49 area code (\"155\" Western Europe) or a country's English name"
 	if s := a.ds.Regions.SuggestPlace(place); len(s) > 0 {
-		named := make([]string, len(s))
-		for i, c := range s {
-			named[i] = c
-		}
-		hint = "did you mean " + input.OrList(named) + "? (" + placeList(a.ds.Regions, s) + ")"
+		hint = "did you mean " + input.OrList(s) + "? (" + placeList(a.ds.Regions, s) + ")"
 	}
 	return "", a.errAt(p, hint, "unknown place %q", place)
 }
