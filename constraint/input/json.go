@@ -349,6 +349,25 @@ func (r *jsonReader) number() (*Node, error) {
 		}
 	}
 	n.Value = string(r.data[r.pos:i])
+	n.Type = yamlNumberType(n.Value, n.Type)
 	r.advance(i - r.pos)
 	return n, nil
+}
+
+// yamlNumberType types a JSON number's text as the YAML reader does: an
+// integer too large for 64 bits is a float, and a number too large for a
+// float is text.
+func yamlNumberType(text string, t Type) Type {
+	if t == Int {
+		if _, err := strconv.ParseInt(text, 10, 64); err == nil {
+			return Int
+		}
+		if _, err := strconv.ParseUint(text, 10, 64); err == nil {
+			return Int
+		}
+	}
+	if _, err := strconv.ParseFloat(text, 64); err != nil {
+		return String
+	}
+	return Float
 }

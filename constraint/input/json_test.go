@@ -202,7 +202,7 @@ func TestJSONReaderErrors(t *testing.T) {
 // FuzzJSONReader holds the JSON reader to encoding/json and the YAML
 // reader on arbitrary input.
 func FuzzJSONReader(f *testing.F) {
-	for _, s := range []string{`{"findings": [{"material": "smalt"}], "claims": [{"date": "1650"}]}`, "[1, 2.5e3, true, null]", `"\u00e9\/"`, "{\r\n\"a\":\t[]}", "", "{"} {
+	for _, s := range []string{`{"findings": [{"material": "smalt"}], "claims": [{"date": "1650"}]}`, "[1, 2.5e3, true, null]", "[1e400, 99999999999999999999, -9223372036854775809]", `"\u00e9\/"`, "{\r\n\"a\":\t[]}", "", "{"} {
 		f.Add([]byte(s))
 	}
 	f.Fuzz(func(t *testing.T, data []byte) {
