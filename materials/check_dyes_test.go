@@ -177,7 +177,7 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"eosin-lake", materials.KindMade, "", "1874/1909", "Meyers, Fluoreszeïn"},
 		// RCE, The quest for Van Gogh's inks (2018): methyl violet in the violet ink of 1888.
 		{"methyl-violet", materials.KindAttested, "FR", "1888-05/1888-06", "RCE 2018, Van Gogh's inks"},
-		// Neevel et al., lecture abstract: crystal violet by HPLC in the ink of Montmajour (1888).
+		// Neevel et al., abstract (Akademie der bildenden Künste Wien): crystal violet by HPLC in the ink of Montmajour (1888).
 		{"crystal-violet", materials.KindAttested, "FR", "1888-05/1888-06", "Neevel et al., Van Gogh's drawing inks"},
 		// NGV Melbourne, record 50864: methyl violet in a dress of about 1865 (TLC, SERS).
 		{"methyl-violet", materials.KindAttested, "", "1865~", "NGV 50864"},
