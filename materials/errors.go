@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"terminus/constraint/input"
+	"terminus/constraint/wording"
 )
 
 // Error is a problem in a materials file, at a position: the one shape of
@@ -25,7 +26,7 @@ func (l ErrorList) Error() string {
 	case 1:
 		return l[0].Error()
 	}
-	return fmt.Sprintf("%s (and %d more %s)", l[0].Error(), len(l)-1, plural(len(l)-1, "problem", "problems"))
+	return fmt.Sprintf("%s (and %d more %s)", l[0].Error(), len(l)-1, wording.Plural(len(l)-1, "problem", "problems"))
 }
 
 // Hint returns the first problem's hint, or how to see every problem.
@@ -116,11 +117,4 @@ func orList(xs []string) string {
 		return q[0]
 	}
 	return strings.Join(q[:len(q)-1], ", ") + " or " + q[len(q)-1]
-}
-
-func plural(n int, one, many string) string {
-	if n == 1 {
-		return one
-	}
-	return many
 }
