@@ -74,7 +74,7 @@ func (e *NotFoundError) Hint() string {
 	if len(e.Suggestions) == 0 {
 		return "run 'terminus materials list' to see every material, or add your own with --materials FILE"
 	}
-	return "did you mean " + orList(e.Suggestions) + "?"
+	return "did you mean " + input.OrList(e.Suggestions) + "?"
 }
 
 // AmbiguousError is a lookup of one material by a name that stands for
@@ -104,17 +104,3 @@ func (e *AmbiguousError) Hint() string {
 }
 
 func quote(s string) string { return "'" + s + "'" }
-
-func orList(xs []string) string {
-	q := make([]string, len(xs))
-	for i, x := range xs {
-		q[i] = quote(x)
-	}
-	switch len(q) {
-	case 0:
-		return ""
-	case 1:
-		return q[0]
-	}
-	return strings.Join(q[:len(q)-1], ", ") + " or " + q[len(q)-1]
-}

@@ -376,7 +376,7 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 				e := &Error{File: ms.File, Line: line, Column: col,
 					Msg: fmt.Sprintf("milestone of %q cites source %q, which is not in the bibliography", m.ID, ms.Source)}
 				if s := nearestWords(ms.Source, all, 3); len(s) > 0 {
-					e.Suggestion = "did you mean " + orList(s) + "? (or add the source under 'sources:')"
+					e.Suggestion = "did you mean " + input.OrList(s) + "? (or add the source under 'sources:')"
 				} else {
 					e.Suggestion = "add it under 'sources:' with its full citation"
 				}

@@ -373,7 +373,7 @@ func (p *parser) milestone(n *input.Node, what string) (Milestone, bool) {
 		if ms.Place != "" && !p.regions.Valid(ms.Place) {
 			hint := "a place is an ISO 3166-1 alpha-2 code (\"NL\") or a UN M49 area code (\"155\", quoted)"
 			if s := p.regions.Suggest(ms.Place); len(s) > 0 {
-				hint = "did you mean " + orList(s) + "? (" + hint + ")"
+				hint = "did you mean " + input.OrList(s) + "? (" + hint + ")"
 			}
 			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where())
 			if f.Value.Type == input.Int {
