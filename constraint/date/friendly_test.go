@@ -1,6 +1,9 @@
 package date
 
-import "testing"
+import (
+	"slices"
+	"testing"
+)
 
 // The friendly forms, each with the reading the package documentation
 // promises (these meanings are the project's own choices, written down
@@ -95,11 +98,11 @@ func TestFriendly(t *testing.T) {
 			if d.String() != tt.people {
 				t.Errorf("String() = %q, want %q", d.String(), tt.people)
 			}
-			if got := iso(d); !sameStrings(got, tt.alts) {
+			if got := iso(d); !slices.Equal(got, tt.alts) {
 				t.Errorf("days = %v, want %v", got, tt.alts)
 			}
 			again, err := Parse(d.EDTF())
-			if err != nil || !sameStrings(iso(again), tt.alts) {
+			if err != nil || !slices.Equal(iso(again), tt.alts) {
 				t.Errorf("Parse(%q) = %v, %v; want the same days", d.EDTF(), iso(again), err)
 			}
 			if d.Input != tt.in {

@@ -174,7 +174,7 @@ func TestArithmeticCalendarsAgainstICU(t *testing.T) {
 			}
 			text := row.day + " " + persianMonths[atoiT(t, row.month)-1] + " " + row.year + " SH"
 			if got, err := Parse(text); err != nil || got.Alternatives[0].First != d || got.Alternatives[0].Last != d {
-				t.Errorf("%s: %q reads as %v, %v", row.iso, text, daysOf(got), err)
+				t.Errorf("%s: %q reads as %v, %v", row.iso, text, iso(got), err)
 			}
 		case "hebrew":
 			y, m, dd := hebrewFromDay(d)
@@ -183,7 +183,7 @@ func TestArithmeticCalendarsAgainstICU(t *testing.T) {
 			}
 			text := row.day + " " + row.month + " " + row.year
 			if got, err := Parse(text); err != nil || got.Alternatives[0].First != d || got.Alternatives[len(got.Alternatives)-1].Last != d {
-				t.Errorf("%s: %q reads as %v, %v", row.iso, text, daysOf(got), err)
+				t.Errorf("%s: %q reads as %v, %v", row.iso, text, iso(got), err)
 			}
 		case "buddhist":
 			text := "BE " + row.year
@@ -256,7 +256,7 @@ func TestJapaneseAgainstICU(t *testing.T) {
 		case y >= 1873:
 			text := era + " " + row.year + "." + row.month + "." + row.day
 			if got, err := Parse(text); err != nil || got.Alternatives[0].First != d || got.Alternatives[0].Last != d {
-				t.Errorf("%s: %q reads as %v, %v", row.iso, text, daysOf(got), err)
+				t.Errorf("%s: %q reads as %v, %v", row.iso, text, iso(got), err)
 			}
 			compared++
 		case m >= 3:

@@ -1,6 +1,9 @@
 package date
 
-import "testing"
+import (
+	"slices"
+	"testing"
+)
 
 // iso writes the alternatives of d as "first→last" pairs, ".." for open.
 func iso(d Date) []string {
@@ -16,18 +19,6 @@ func iso(d Date) []string {
 		out = append(out, f+"→"+l)
 	}
 	return out
-}
-
-func sameStrings(a, b []string) bool {
-	if len(a) != len(b) {
-		return false
-	}
-	for i := range a {
-		if a[i] != b[i] {
-			return false
-		}
-	}
-	return true
 }
 
 func TestParseBasics(t *testing.T) {
@@ -57,7 +48,7 @@ func TestParseBasics(t *testing.T) {
 			if d.EDTF() != tt.edtf {
 				t.Errorf("EDTF() = %q, want %q", d.EDTF(), tt.edtf)
 			}
-			if got := iso(d); !sameStrings(got, tt.alts) {
+			if got := iso(d); !slices.Equal(got, tt.alts) {
 				t.Errorf("alternatives = %v, want %v", got, tt.alts)
 			}
 			if d.Precision != tt.prec {
