@@ -7,10 +7,10 @@ import (
 	"flag"
 	"os"
 	"path/filepath"
-	"regexp"
-	"strconv"
 	"strings"
 	"testing"
+
+	"terminus/cmd/terminus/internal/golden"
 )
 
 var update = flag.Bool("update", false, "rewrite the expected reports of the examples")
@@ -205,36 +205,9 @@ func TestExamples(t *testing.T) {
 			}
 			// The dataset's digest changes with every edit of the data; the
 			// reports are compared without it.
-			if normDigest(string(b)) != normDigest(out) {
-				t.Errorf("report differs from %s (go test -update rewrites it):\n%s", want, lineDiff(string(b), out))
+			if golden.Normalize(string(b)) != golden.Normalize(out) {
+				t.Errorf("report differs from %s (go test -update rewrites it):\n%s", want, golden.Diff(string(b), out))
 			}
 		})
 	}
-}
-
-var digestRe = regexp.MustCompile(`sha256 [0-9a-f]+…`)
-
-func normDigest(s string) string { return digestRe.ReplaceAllString(s, "sha256 …") }
-
-// lineDiff shows the first lines that differ.
-func lineDiff(want, got string) string {
-	w, g := strings.Split(want, "\n"), strings.Split(got, "\n")
-	var b strings.Builder
-	shown := 0
-	for i := 0; i < len(w) || i < len(g); i++ {
-		var wl, gl string
-		if i < len(w) {
-			wl = w[i]
-		}
-		if i < len(g) {
-			gl = g[i]
-		}
-		if wl != gl {
-			b.WriteString("line " + strconv.Itoa(i+1) + ":\n- " + wl + "\n+ " + gl + "\n")
-			if shown++; shown == 5 {
-				break
-			}
-		}
-	}
-	return b.String()
 }

@@ -12,6 +12,8 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"terminus/cmd/terminus/internal/golden"
 )
 
 // The collections of testdata/survey use the invented fixture materials
@@ -292,7 +294,7 @@ func TestSurveyOrderIsDeterministic(t *testing.T) {
 			if first[format] == "" {
 				first[format] = out
 			} else if out != first[format] {
-				t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, lineDiff(first[format], out))
+				t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, golden.Diff(first[format], out))
 			}
 			if format != "jsonl" {
 				continue
