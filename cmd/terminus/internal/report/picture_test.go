@@ -2,7 +2,6 @@ package report
 
 import (
 	"bytes"
-	"context"
 	"encoding/json"
 	"flag"
 	"math"
@@ -16,7 +15,6 @@ import (
 	"terminus/cmd/terminus/internal/golden"
 	"terminus/cmd/terminus/internal/nodetest"
 	"terminus/constraint"
-	"terminus/constraint/casefile"
 	"terminus/constraint/input"
 	"terminus/materials"
 )
@@ -45,20 +43,12 @@ func builtinResult(t testing.TB, path string) *constraint.Result {
 	if err != nil {
 		t.Fatal(err)
 	}
-	rel, _ := filepath.Rel(repoRoot, path)
-	c, err := casefile.Parse(filepath.ToSlash(rel), data, input.FormatOf(path), input.Limits{})
-	if err != nil {
-		t.Fatal(err)
-	}
 	ds, err := materials.Builtin()
 	if err != nil {
 		t.Fatal(err)
 	}
-	r, err := constraint.Analyze(context.Background(), c, ds, constraint.Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
-	return r
+	rel, _ := filepath.Rel(repoRoot, path)
+	return analyze(t, filepath.ToSlash(rel), data, input.FormatOf(path), ds)
 }
 
 func checkPictureGolden(t *testing.T, name, got string) {
