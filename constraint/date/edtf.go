@@ -18,9 +18,7 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		return p.scatteredCore(i, hi, neg, pt)
 	}
 	j := i
-	for i < hi && (isDigit(s[i]) || s[i] == 'X') {
-		i++
-	}
+	i = digitsOrX(s, i, hi)
 	n := i - j
 	if n > 4 {
 		return i, p.failHint(j, "a year of more than four digits takes the Y prefix",
@@ -70,11 +68,8 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 	}
 	// Month or season.
 	if i < hi && s[i] == '-' {
-		i++
-		j = i
-		for i < hi && (isDigit(s[i]) || s[i] == 'X') {
-			i++
-		}
+		j = i + 1
+		i = digitsOrX(s, j, hi)
 		if i-j != 2 {
 			return i, p.failHint(j, "expected a month of two digits (01–12) or a season (21–24)", "write 1874-05")
 		}
@@ -97,11 +92,8 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		seenX = seenX || pt.mx > 0
 		// Day.
 		if i < hi && s[i] == '-' {
-			i++
-			j = i
-			for i < hi && (isDigit(s[i]) || s[i] == 'X') {
-				i++
-			}
+			j = i + 1
+			i = digitsOrX(s, j, hi)
 			if i-j != 2 {
 				return i, p.failHint(j, "expected a day of two digits (01–31)", "write 1874-05-21")
 			}
@@ -131,6 +123,15 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 	}
 	pt.span()
 	return i, nil
+}
+
+// digitsOrX is where the run of digits and X that starts at s[i] ends
+// (at hi at the latest).
+func digitsOrX(s string, i, hi int) int {
+	for i < hi && (isDigit(s[i]) || s[i] == 'X') {
+		i++
+	}
+	return i
 }
 
 // xField reads the two characters at j of a month or a day, which may end
