@@ -24,16 +24,7 @@ func checkSpec(t *testing.T, cases []specCase) {
 	t.Helper()
 	for _, c := range cases {
 		t.Run(c.section+" "+c.in, func(t *testing.T) {
-			d, err := Parse(c.in)
-			if err != nil {
-				t.Fatalf("Parse(%q): %v", c.in, err)
-			}
-			if d.EDTF() != c.in {
-				t.Errorf("EDTF() = %q, want the example itself %q", d.EDTF(), c.in)
-			}
-			if got := iso(d); !slices.Equal(got, c.alts) {
-				t.Errorf("days = %v, want %v", got, c.alts)
-			}
+			d := parsedAs(t, c.in, c.in, c.alts) // the EDTF form is the example itself
 			if d.Precision != c.prec {
 				t.Errorf("precision = %v, want %v", d.Precision, c.prec)
 			}

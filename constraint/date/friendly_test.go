@@ -88,18 +88,9 @@ func TestFriendly(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.in, func(t *testing.T) {
-			d, err := Parse(tt.in)
-			if err != nil {
-				t.Fatalf("Parse(%q): %v", tt.in, err)
-			}
-			if d.EDTF() != tt.edtf {
-				t.Errorf("EDTF() = %q, want %q", d.EDTF(), tt.edtf)
-			}
+			d := parsedAs(t, tt.in, tt.edtf, tt.alts)
 			if d.String() != tt.people {
 				t.Errorf("String() = %q, want %q", d.String(), tt.people)
-			}
-			if got := iso(d); !slices.Equal(got, tt.alts) {
-				t.Errorf("days = %v, want %v", got, tt.alts)
 			}
 			again, err := Parse(d.EDTF())
 			if err != nil || !slices.Equal(iso(again), tt.alts) {
