@@ -4,7 +4,6 @@ import (
 	"strings"
 	"testing"
 
-	"terminus/constraint/date"
 	"terminus/materials"
 )
 
@@ -336,7 +335,6 @@ func TestAntiquityAgainstSources(t *testing.T) {
 // the family must carry.
 func TestAntiquityTradeFacts(t *testing.T) {
 	d := checkBuiltin(t)
-	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
 
 	t.Run("madder dyed by about 2000 BCE", func(t *testing.T) {
 		// Common practice: madder was used to dye leather and cloth by about 2000 BCE.
@@ -367,10 +365,7 @@ func TestAntiquityTradeFacts(t *testing.T) {
 	t.Run("group names read as every member", func(t *testing.T) {
 		// Common practice: a report that names only the compound or the trade
 		// family cannot tell which member was used, so every member counts.
-		for _, tc := range []struct {
-			name string
-			want []string
-		}{
+		checkGroups(t, d, []groupRow{
 			{"cochineal", []string{"american-cochineal", "polish-cochineal", "armenian-cochineal", "cochineal-carmine"}},
 			{"carminic acid", []string{"american-cochineal", "polish-cochineal", "armenian-cochineal", "cochineal-carmine"}},
 			{"brazilwood", []string{"sappanwood", "american-brazilwood"}},
@@ -381,22 +376,7 @@ func TestAntiquityTradeFacts(t *testing.T) {
 			{"lazurite", []string{"natural-ultramarine"}},
 			{"ochre", []string{"red-ochre", "yellow-ochre"}},
 			{"mercury sulphide", []string{"cinnabar", "vermilion"}},
-		} {
-			r, err := d.Resolve(tc.name)
-			if err != nil {
-				t.Errorf("Resolve(%q): %v", tc.name, err)
-				continue
-			}
-			got := map[string]bool{}
-			for _, m := range r.Materials {
-				got[m.ID] = true
-			}
-			for _, id := range tc.want {
-				if !got[id] {
-					t.Errorf("Resolve(%q) lacks %s (has %v)", tc.name, id, got)
-				}
-			}
-		}
+		})
 	})
 	t.Run("medieval brazil is not bounded by the American wood", func(t *testing.T) {
 		// Common practice: 'brazil' in a medieval recipe or manuscript is the
@@ -439,34 +419,8 @@ func TestAntiquityTradeFacts(t *testing.T) {
 	})
 }
 
-// TestAntiquityFileLintsClean runs the dataset lint and reports the
-// problems that fall in this family's file, and checks that each of its
-// materials resolves by every one of its names.
+// TestAntiquityFileLintsClean checks what every family file promises (see
+// checkFamilyFile) for this family.
 func TestAntiquityFileLintsClean(t *testing.T) {
-	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, antiquityFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	n := 0
-	for _, m := range d.Materials {
-		if !strings.HasSuffix(m.File, antiquityFile) {
-			continue
-		}
-		n++
-		for _, name := range m.Names {
-			got, err := d.Lookup(name)
-			if err != nil {
-				t.Errorf("Lookup(%q): %v", name, err)
-				continue
-			}
-			if got.ID != m.ID {
-				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
-			}
-		}
-	}
-	if n < 12 {
-		t.Errorf("only %d materials come from %s", n, antiquityFile)
-	}
+	checkFamilyFile(t, checkBuiltin(t), antiquityFile, 12)
 }

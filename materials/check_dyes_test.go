@@ -358,7 +358,7 @@ func TestDyesTradeFacts(t *testing.T) {
 		// derivatives of natural dyes (indigo carmine) are older by nature.
 		limit := date.Gregorian(1856, 1, 1)
 		early := map[string]bool{}
-		for _, m := range dyesMaterials(d) {
+		for _, m := range familyMaterials(d, dyesFile) {
 			if m.Origin != "synthetic" {
 				continue
 			}
@@ -378,7 +378,7 @@ func TestDyesTradeFacts(t *testing.T) {
 
 	t.Run("variants practitioners keep apart are separate entries", func(t *testing.T) {
 		// Common practice: each pair has its own history and dates.
-		pairs := [][2]string{
+		checkApart(t, d, [][2]string{
 			{"methyl violet", "crystal violet"},
 			{"methyl violet 6B", "crystal violet"},
 			{"fluorescein", "eosin Y"},
@@ -390,21 +390,12 @@ func TestDyesTradeFacts(t *testing.T) {
 			{"indigo carmine", "synthetic indigo"},
 			{"alizarin crimson", "madder lake"},
 			{"aniline yellow", "acid yellow (aminoazobenzene sulphonic acid)"},
-		}
-		for _, p := range pairs {
-			a := mustLookup(t, d, p[0])
-			b := mustLookup(t, d, p[1])
-			if a.ID == b.ID {
-				t.Errorf("%q and %q resolve to the same material %s", p[0], p[1], a.ID)
-			}
-		}
+		})
 	})
 
-	order := []struct {
-		earlier, later string
-		kind           materials.Kind
-		why            string
-	}{
+	// Some pairs start in the same year (a lake with its dye, methylene
+	// blue with Lauth's violet): the order here is "no later than".
+	checkOrder(t, d, orderRule{sameDay: true}, []orderRow{
 		// Common practice: the crude mixture came two decades before the pure compound.
 		{"methyl-violet", "crystal-violet", materials.KindMade, "methyl violet (1861) before crystal violet (1883)"},
 		// Common practice: eosin is brominated fluorescein.
@@ -425,20 +416,7 @@ func TestDyesTradeFacts(t *testing.T) {
 		{"synthetic-indigo", "thioindigo", materials.KindMade, "indigo before thioindigo"},
 		// Common practice: a lake is no older than its dye.
 		{"synthetic-alizarin", "alizarin-crimson", materials.KindMade, "alizarin before its lake"},
-	}
-	for _, o := range order {
-		t.Run(o.why, func(t *testing.T) {
-			a, b := mustLookup(t, d, o.earlier), mustLookup(t, d, o.later)
-			ea, okA := earliestOf(a.Claims(o.kind, ""))
-			eb, okB := earliestOf(b.Claims(o.kind, ""))
-			if !okA || !okB {
-				t.Fatalf("missing %s claims: %s %v, %s %v", o.kind, a.ID, okA, b.ID, okB)
-			}
-			if ea > eb {
-				t.Errorf("%s %s %s is after %s %s", a.ID, o.kind, ea.ISO(), b.ID, eb.ISO())
-			}
-		})
-	}
+	})
 
 	t.Run("invention is not availability: synthetic indigo took years to sell", func(t *testing.T) {
 		// Common practice: Baeyer's synthesis and BASF's sale lie about two decades apart.
@@ -491,39 +469,15 @@ func TestDyesTradeFacts(t *testing.T) {
 // and resolves by every name.
 func TestDyesFileShape(t *testing.T) {
 	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, dyesFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	ms := dyesMaterials(d)
-	if len(ms) < 60 {
-		t.Errorf("%d materials in %s, want at least 60", len(ms), dyesFile)
-	}
+	ms := checkFamilyFile(t, d, dyesFile, 60)
 	regions := map[string]bool{}
 	var arrivals, milestones, documented, disagreeing int
 	for _, m := range ms {
-		for _, name := range m.Names {
-			got, err := d.Lookup(name)
-			if err != nil {
-				t.Errorf("Lookup(%q): %v", name, err)
-				continue
-			}
-			if got.ID != m.ID {
-				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
-			}
-		}
-		if len(m.Claims(materials.KindMade, "")) == 0 {
-			t.Errorf("%s has no made milestone", m.ID)
-		}
 		groups := map[string]map[string]bool{}
 		for _, x := range m.Milestones {
 			milestones++
 			if x.Basis == materials.BasisDocumented {
 				documented++
-			}
-			if _, ok := d.Source(x.Source); !ok {
-				t.Errorf("%s cites unknown source %q", m.ID, x.Source)
 			}
 			switch x.Kind {
 			case materials.KindArrived:
@@ -560,14 +514,4 @@ func TestDyesFileShape(t *testing.T) {
 	if share := float64(documented) / float64(milestones); share < 0.9 {
 		t.Errorf("documented share %.2f, want at least 0.90", share)
 	}
-}
-
-func dyesMaterials(d *materials.Dataset) []*materials.Material {
-	var out []*materials.Material
-	for _, m := range d.Materials {
-		if strings.HasSuffix(m.File, dyesFile) {
-			out = append(out, m)
-		}
-	}
-	return out
 }

@@ -1,7 +1,6 @@
 package materials_test
 
 import (
-	"strings"
 	"testing"
 
 	"terminus/materials"
@@ -273,12 +272,7 @@ func TestInksAgainstSources(t *testing.T) {
 
 // TestInksOrderOfTheTrade checks orders that the trade takes for granted.
 func TestInksOrderOfTheTrade(t *testing.T) {
-	d := checkBuiltin(t)
-	rows := []struct {
-		earlier, later string
-		kind           materials.Kind
-		why            string
-	}{
+	checkOrder(t, checkBuiltin(t), orderRule{soldOrMade: true}, []orderRow{
 		// Common practice: the gelatin hectograph came before the spirit duplicator that grew out of it.
 		{"hectograph-copy", "spirit-duplicator-copy", materials.KindMade, "hectograph before spirit duplicator (common practice)"},
 		// Common practice: salted paper came before albumen paper.
@@ -297,72 +291,21 @@ func TestInksOrderOfTheTrade(t *testing.T) {
 		{"inkjet-dye-ink", "inkjet-pigment-ink", materials.KindSold, "dye before pigment inkjet ink (common practice)"},
 		// Common practice: the hand-coated cyanotype came before commercial blueprint paper.
 		{"cyanotype", "blueprint-paper", materials.KindSold, "cyanotype before commercial blueprint paper (common practice)"},
-	}
-	for _, r := range rows {
-		t.Run(r.earlier+"<"+r.later, func(t *testing.T) {
-			a, okA := earliestOf(mustLookup(t, d, r.earlier).Claims(r.kind, ""))
-			if !okA && r.kind == materials.KindSold {
-				// A material without a sale claim (on either side) falls back to its made claim.
-				a, okA = earliestOf(mustLookup(t, d, r.earlier).Claims(materials.KindMade, ""))
-			}
-			b, okB := earliestOf(mustLookup(t, d, r.later).Claims(r.kind, ""))
-			if !okB && r.kind == materials.KindSold {
-				b, okB = earliestOf(mustLookup(t, d, r.later).Claims(materials.KindMade, ""))
-			}
-			if !okA || !okB {
-				t.Fatalf("%s: missing %s claim (%v, %v)", r.why, r.kind, okA, okB)
-			}
-			if a >= b {
-				t.Errorf("%s: %s %s starts %v, not before %s at %v", r.why, r.earlier, r.kind, a, r.later, b)
-			}
-		})
-	}
+	})
 }
 
-// TestInksFileShape checks what this family promises: every material has a
-// made milestone, each source has a type, each material resolves by all of
-// its names, enough materials are attested by a dated object, and the file
-// lints clean.
+// TestInksFileShape checks what this family promises: what every family file
+// promises (see checkFamilyFile), at least 22 materials, enough inks and
+// supports, enough materials attested by a dated object, and enough arrivals.
 func TestInksFileShape(t *testing.T) {
-	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, inksFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	var n, attestedMaterials, arrivals int
+	var attestedMaterials, arrivals int
 	classes := map[string]int{}
-	for _, m := range d.Materials {
-		if !strings.HasSuffix(m.File, inksFile) {
-			continue
-		}
-		n++
+	for _, m := range checkFamilyFile(t, checkBuiltin(t), inksFile, 22) {
 		classes[string(m.Class)]++
-		if len(m.Claims(materials.KindMade, "")) == 0 {
-			t.Errorf("%s has no made milestone", m.ID)
-		}
 		if len(m.Claims(materials.KindAttested, "")) > 0 {
 			attestedMaterials++
 		}
 		arrivals += len(m.Claims(materials.KindArrived, ""))
-		for _, name := range m.Names {
-			got, err := d.Lookup(name)
-			if err != nil {
-				t.Errorf("Lookup(%q): %v", name, err)
-				continue
-			}
-			if got.ID != m.ID {
-				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
-			}
-		}
-	}
-	for _, s := range d.Sources {
-		if strings.HasSuffix(s.File, inksFile) && s.Type == "" {
-			t.Errorf("source %s has no type", s.Key)
-		}
-	}
-	if n < 22 {
-		t.Errorf("only %d materials come from %s, want at least 22", n, inksFile)
 	}
 	if classes["ink"] < 10 || classes["support"] < 10 {
 		t.Errorf("want at least 10 inks and 10 supports, have %v", classes)

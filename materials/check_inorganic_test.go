@@ -1,10 +1,8 @@
 package materials_test
 
 import (
-	"strings"
 	"testing"
 
-	"terminus/constraint/date"
 	"terminus/materials"
 )
 
@@ -279,7 +277,6 @@ func TestInorganicAgainstSources(t *testing.T) {
 // kept as separate claims.
 func TestInorganicTradeFacts(t *testing.T) {
 	d := checkBuiltin(t)
-	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
 
 	t.Run("Prussian blue in Japan by about 1830", func(t *testing.T) {
 		// Common practice: Prussian blue was in use in Japan by about 1830.
@@ -333,10 +330,7 @@ func TestInorganicTradeFacts(t *testing.T) {
 	t.Run("sale follows invention", func(t *testing.T) {
 		// Common practice: invention is not availability; a colour is sold no
 		// earlier than it is first made.
-		for _, m := range d.Materials {
-			if !strings.HasSuffix(m.File, inorganicFile) {
-				continue
-			}
+		for _, m := range familyMaterials(d, inorganicFile) {
 			made, ok := earliestOf(m.Claims(materials.KindMade, ""))
 			if !ok {
 				continue
@@ -366,49 +360,17 @@ func TestInorganicTradeFacts(t *testing.T) {
 	t.Run("variants stay apart", func(t *testing.T) {
 		// Common practice: hydrated and anhydrous chromium oxide greens, and the
 		// two cobalt violets, are different pigments with different dates.
-		pairs := [][2]string{
+		checkApart(t, d, [][2]string{
 			{"viridian", "chromium oxide green"},
 			{"cobalt violet dark", "cobalt violet light"},
 			{"cadmium red", "cadmium red lithopone"},
 			{"ultramarine violet", "ultramarine red"},
-		}
-		for _, p := range pairs {
-			a, b := mustLookup(t, d, p[0]), mustLookup(t, d, p[1])
-			if a.ID == b.ID {
-				t.Errorf("%q and %q resolve to the same material %s", p[0], p[1], a.ID)
-			}
-		}
+		})
 	})
 }
 
-// TestInorganicFileLintsClean runs the dataset lint and reports the
-// problems that fall in this family's file, and checks that each of its
-// materials resolves by every one of its names.
+// TestInorganicFileLintsClean checks what every family file promises (see
+// checkFamilyFile) for this family.
 func TestInorganicFileLintsClean(t *testing.T) {
-	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, inorganicFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	n := 0
-	for _, m := range d.Materials {
-		if !strings.HasSuffix(m.File, inorganicFile) {
-			continue
-		}
-		n++
-		for _, name := range m.Names {
-			got, err := d.Lookup(name)
-			if err != nil {
-				t.Errorf("Lookup(%q): %v", name, err)
-				continue
-			}
-			if got.ID != m.ID {
-				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
-			}
-		}
-	}
-	if n < 30 {
-		t.Errorf("only %d materials come from %s", n, inorganicFile)
-	}
+	checkFamilyFile(t, checkBuiltin(t), inorganicFile, 30)
 }

@@ -1,7 +1,6 @@
 package materials_test
 
 import (
-	"strings"
 	"testing"
 
 	"terminus/materials"
@@ -284,11 +283,7 @@ func TestModernAgainstSources(t *testing.T) {
 // this family to each other. Each comparison uses the earliest bounded claim.
 func TestModernOrderOfTheTrade(t *testing.T) {
 	d := checkBuiltin(t)
-	rows := []struct {
-		earlier, later string
-		kind           materials.Kind
-		why            string
-	}{
+	checkOrder(t, d, orderRule{}, []orderRow{
 		// Common practice: anatase grades from the late 1910s, rutile grades only from about 1940.
 		{"titanium-white-anatase", "titanium-white-rutile", materials.KindSold, "anatase before rutile (common practice)"},
 		// Common practice: the green is the chlorinated blue and came after it.
@@ -309,19 +304,7 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 		{"cellulose-triacetate-film-base", "polyester-film-base", materials.KindMade, "triacetate before polyester (common practice)"},
 		// Common practice: the felt marker came before the fine fibre-tip pen.
 		{"felt-tip-marker-ink", "fibre-tip-pen-ink", materials.KindMade, "felt marker before fibre tip (common practice)"},
-	}
-	for _, r := range rows {
-		t.Run(r.earlier+"<"+r.later, func(t *testing.T) {
-			a, okA := earliestOf(mustLookup(t, d, r.earlier).Claims(r.kind, ""))
-			b, okB := earliestOf(mustLookup(t, d, r.later).Claims(r.kind, ""))
-			if !okA || !okB {
-				t.Fatalf("%s: missing %s claim (%v, %v)", r.why, r.kind, okA, okB)
-			}
-			if a >= b {
-				t.Errorf("%s: %s %s starts %v, not before %s at %v", r.why, r.earlier, r.kind, a, r.later, b)
-			}
-		})
-	}
+	})
 
 	// Common practice: ballpoint pens first went on sale in 1945, years after
 	// the first patents; no sold claim may be earlier than 1945.
@@ -344,33 +327,18 @@ func TestModernOrderOfTheTrade(t *testing.T) {
 	}
 }
 
-// TestModernFileShape checks what this family promises: every material has
-// a made milestone, each milestone names a source of the dataset, each
-// material resolves by all of its names, and the file lints clean.
+// TestModernFileShape checks what this family promises: what every family
+// file promises (see checkFamilyFile), at least 40 materials, enough binders,
+// fillers, brighteners and supports, arrivals over several places,
+// withdrawals, and materials with disagreeing claims.
 func TestModernFileShape(t *testing.T) {
-	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, modernFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	var n, arrivals, withdrawn, disputed int
+	var arrivals, withdrawn, disputed int
 	regions := map[string]bool{}
 	classes := map[string]int{}
-	for _, m := range d.Materials {
-		if !strings.HasSuffix(m.File, modernFile) {
-			continue
-		}
-		n++
+	for _, m := range checkFamilyFile(t, checkBuiltin(t), modernFile, 40) {
 		classes[m.Class]++
-		if len(m.Claims(materials.KindMade, "")) == 0 {
-			t.Errorf("%s has no made milestone", m.ID)
-		}
 		seen := map[string]int{}
 		for _, ms := range m.Milestones {
-			if _, ok := d.Source(ms.Source); !ok {
-				t.Errorf("%s: milestone %s %s cites unknown source %q", m.ID, ms.Kind, ms.Date.EDTF(), ms.Source)
-			}
 			switch ms.Kind {
 			case materials.KindArrived:
 				arrivals++
@@ -386,19 +354,6 @@ func TestModernFileShape(t *testing.T) {
 				break
 			}
 		}
-		for _, name := range m.Names {
-			got, err := d.Lookup(name)
-			if err != nil {
-				t.Errorf("Lookup(%q): %v", name, err)
-				continue
-			}
-			if got.ID != m.ID {
-				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
-			}
-		}
-	}
-	if n < 40 {
-		t.Errorf("only %d materials come from %s", n, modernFile)
 	}
 	other := classes["binder"] + classes["filler"] + classes["brightener"] + classes["support"]
 	if other < 20 {

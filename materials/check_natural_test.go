@@ -2,10 +2,8 @@ package materials_test
 
 import (
 	"errors"
-	"strings"
 	"testing"
 
-	"terminus/constraint/date"
 	"terminus/materials"
 )
 
@@ -253,7 +251,6 @@ func TestNaturalAgainstSources(t *testing.T) {
 // safety properties the family must carry.
 func TestNaturalTradeFacts(t *testing.T) {
 	d := checkBuiltin(t)
-	year := func(y int64) date.Day { return date.Gregorian(y, 1, 1) }
 
 	t.Run("a misspelt dayflower suggests dayflower", func(t *testing.T) {
 		// The dayflower blue of Japanese prints must not be hidden behind
@@ -278,19 +275,15 @@ func TestNaturalTradeFacts(t *testing.T) {
 	})
 	t.Run("East Asian names resolve", func(t *testing.T) {
 		// Common practice: the trade names in Japanese, Chinese and Korean.
-		for name, id := range map[string]string{
-			"aobana": "dayflower-blue", "露草": "dayflower-blue", "닭의장풀": "dayflower-blue",
-			"shikon": "gromwell", "紫草": "gromwell", "지치": "gromwell",
-			"kihada": "amur-cork-tree", "黄柏": "amur-cork-tree", "황벽나무": "amur-cork-tree",
-			"kuchinashi": "gardenia", "栀子": "gardenia", "치자": "gardenia",
-			"huaihua": "pagoda-tree-buds", "槐米": "pagoda-tree-buds",
-			"tade-ai": "japanese-indigo", "蓼藍": "japanese-indigo",
-			"wubeizi": "chinese-gallnut", "五倍子": "chinese-gallnut",
-		} {
-			if m := mustLookup(t, d, name); m.ID != id {
-				t.Errorf("Lookup(%q) = %s, want %s", name, m.ID, id)
-			}
-		}
+		checkNames(t, d, []nameRow{
+			{"aobana", "dayflower-blue"}, {"露草", "dayflower-blue"}, {"닭의장풀", "dayflower-blue"},
+			{"shikon", "gromwell"}, {"紫草", "gromwell"}, {"지치", "gromwell"},
+			{"kihada", "amur-cork-tree"}, {"黄柏", "amur-cork-tree"}, {"황벽나무", "amur-cork-tree"},
+			{"kuchinashi", "gardenia"}, {"栀子", "gardenia"}, {"치자", "gardenia"},
+			{"huaihua", "pagoda-tree-buds"}, {"槐米", "pagoda-tree-buds"},
+			{"tade-ai", "japanese-indigo"}, {"蓼藍", "japanese-indigo"},
+			{"wubeizi", "chinese-gallnut"}, {"五倍子", "chinese-gallnut"},
+		})
 	})
 	t.Run("alteration products give no hard lower bound", func(t *testing.T) {
 		// Pararealgar grows from realgar in light, and the copper chlorides
@@ -312,19 +305,7 @@ func TestNaturalTradeFacts(t *testing.T) {
 	t.Run("Turkey red is a family of the madder process", func(t *testing.T) {
 		// Common practice: Turkey red names a process on cotton, done with
 		// madder and, after 1869, with synthetic alizarin.
-		r, err := d.Resolve("Turkey red")
-		if err != nil {
-			t.Fatalf("Resolve(Turkey red): %v", err)
-		}
-		found := false
-		for _, m := range r.Materials {
-			if m.ID == "turkey-red-madder" {
-				found = true
-			}
-		}
-		if !found {
-			t.Errorf("Resolve(Turkey red) does not include turkey-red-madder")
-		}
+		checkGroups(t, d, []groupRow{{"Turkey red", []string{"turkey-red-madder"}}})
 		m := mustLookup(t, d, "turkey-red-madder")
 		for _, c := range m.Claims(materials.KindArrived, "GB") {
 			if lo, ok := c.Date.Earliest(); ok && lo < year(1700) {
@@ -343,37 +324,13 @@ func TestNaturalTradeFacts(t *testing.T) {
 	})
 }
 
-// TestNaturalFileLintsClean runs the dataset lint and reports the problems
-// that fall in this family's file, checks that each of its materials
-// resolves by every one of its names, and that every attestation of the
-// family is its own material's.
+// TestNaturalFileLintsClean checks what every family file promises (see
+// checkFamilyFile) for this family, and that the family holds enough
+// attestations.
 func TestNaturalFileLintsClean(t *testing.T) {
-	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, naturalFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	n, attested := 0, 0
-	for _, m := range d.Materials {
-		if !strings.HasSuffix(m.File, naturalFile) {
-			continue
-		}
-		n++
+	attested := 0
+	for _, m := range checkFamilyFile(t, checkBuiltin(t), naturalFile, 38) {
 		attested += len(m.Claims(materials.KindAttested, ""))
-		for _, name := range m.Names {
-			got, err := d.Lookup(name)
-			if err != nil {
-				t.Errorf("Lookup(%q): %v", name, err)
-				continue
-			}
-			if got.ID != m.ID {
-				t.Errorf("Lookup(%q) = %s, want %s", name, got.ID, m.ID)
-			}
-		}
-	}
-	if n < 38 {
-		t.Errorf("only %d materials come from %s", n, naturalFile)
 	}
 	if attested < 10 {
 		t.Errorf("only %d attestations in %s", attested, naturalFile)

@@ -1,7 +1,6 @@
 package materials_test
 
 import (
-	"strings"
 	"testing"
 
 	"terminus/materials"
@@ -120,10 +119,10 @@ func TestPigmentsAgainstSources(t *testing.T) {
 }
 
 // TestPigmentsNames checks that the pigments resolve by the names the trade
-// and the brief use: Colour Index short and long forms, the Colour Index short and long forms.
+// uses: Colour Index short and long forms, and trade names.
 func TestPigmentsNames(t *testing.T) {
 	d := checkBuiltin(t)
-	for _, r := range []struct{ name, id string }{
+	checkNames(t, d, []nameRow{
 		{"PY3", "hansa-yellow-10g"},
 		{"Pigment Yellow 3", "hansa-yellow-10g"},
 		{"lithol rubine", "lithol-rubine"},
@@ -139,53 +138,20 @@ func TestPigmentsNames(t *testing.T) {
 		{"PBr24", "chrome-titanate-yellow"},
 		{"PY53", "nickel-titanate-yellow"},
 		{"PG50", "cobalt-titanate-green"},
-	} {
-		t.Run(r.name, func(t *testing.T) {
-			if m := mustLookup(t, d, r.name); m.ID != r.id {
-				t.Errorf("Lookup(%q) = %s, want %s", r.name, m.ID, r.id)
-			}
-		})
-	}
+	})
 }
 
-// TestPigmentsFileShape checks what this family promises: every material is
-// a synthetic pigment with a Colour Index name (cerium sulphide excepted, see
-// its note) and a made milestone, every source has a type, and the file adds
-// no lint problem.
+// TestPigmentsFileShape checks what every family file promises (see
+// checkFamilyFile) for this family, with at least 42 materials, and that
+// every material is a synthetic pigment with a Colour Index name (cerium
+// sulphide excepted, see its note).
 func TestPigmentsFileShape(t *testing.T) {
-	d := checkBuiltin(t)
-	for _, p := range materials.Lint(d) {
-		if strings.HasSuffix(p.File, pigmentsFile) {
-			t.Errorf("lint: %s", p)
-		}
-	}
-	n := 0
-	for _, m := range d.Materials {
-		if !strings.HasSuffix(m.File, pigmentsFile) {
-			continue
-		}
-		n++
+	for _, m := range checkFamilyFile(t, checkBuiltin(t), pigmentsFile, 42) {
 		if m.Class != "pigment" || m.Origin != "synthetic" {
 			t.Errorf("%s: class %q origin %q, want a synthetic pigment", m.ID, m.Class, m.Origin)
 		}
 		if m.ColourIndex == nil && m.ID != "cerium-sulphide" {
 			t.Errorf("%s has no Colour Index name", m.ID)
 		}
-		if len(m.Claims(materials.KindMade, "")) == 0 {
-			t.Errorf("%s has no made milestone", m.ID)
-		}
-		for _, ms := range m.Milestones {
-			s, ok := d.Source(ms.Source)
-			if !ok {
-				t.Errorf("%s cites unknown source %q", m.ID, ms.Source)
-				continue
-			}
-			if s.Type == "" && strings.HasSuffix(s.File, pigmentsFile) {
-				t.Errorf("source %s has no type", s.Key)
-			}
-		}
-	}
-	if n < 42 {
-		t.Errorf("%s holds %d materials, want at least 42", pigmentsFile, n)
 	}
 }

@@ -7,6 +7,7 @@ import (
 	"strings"
 
 	"terminus/constraint/input"
+	"terminus/constraint/wording"
 )
 
 // Error is a problem in a materials file, at a position: the one shape of
@@ -25,7 +26,7 @@ func (l ErrorList) Error() string {
 	case 1:
 		return l[0].Error()
 	}
-	return fmt.Sprintf("%s (and %d more %s)", l[0].Error(), len(l)-1, plural(len(l)-1, "problem", "problems"))
+	return fmt.Sprintf("%s (and %d more %s)", l[0].Error(), len(l)-1, wording.Plural(len(l)-1, "problem", "problems"))
 }
 
 // Hint returns the first problem's hint, or how to see every problem.
@@ -73,7 +74,7 @@ func (e *NotFoundError) Hint() string {
 	if len(e.Suggestions) == 0 {
 		return "run 'terminus materials list' to see every material, or add your own with --materials FILE"
 	}
-	return "did you mean " + orList(e.Suggestions) + "?"
+	return "did you mean " + input.OrList(e.Suggestions) + "?"
 }
 
 // AmbiguousError is a lookup of one material by a name that stands for
@@ -103,24 +104,3 @@ func (e *AmbiguousError) Hint() string {
 }
 
 func quote(s string) string { return "'" + s + "'" }
-
-func orList(xs []string) string {
-	q := make([]string, len(xs))
-	for i, x := range xs {
-		q[i] = quote(x)
-	}
-	switch len(q) {
-	case 0:
-		return ""
-	case 1:
-		return q[0]
-	}
-	return strings.Join(q[:len(q)-1], ", ") + " or " + q[len(q)-1]
-}
-
-func plural(n int, one, many string) string {
-	if n == 1 {
-		return one
-	}
-	return many
-}

@@ -375,8 +375,8 @@ func crossCheck(d *Dataset, base *Dataset) (ErrorList, map[string]*Material) {
 				}
 				e := &Error{File: ms.File, Line: line, Column: col,
 					Msg: fmt.Sprintf("milestone of %q cites source %q, which is not in the bibliography", m.ID, ms.Source)}
-				if s := nearestWords(ms.Source, all, 3); len(s) > 0 {
-					e.Suggestion = "did you mean " + orList(s) + "? (or add the source under 'sources:')"
+				if s := spell.Nearest(ms.Source, all, 3); len(s) > 0 {
+					e.Suggestion = "did you mean " + input.OrList(s) + "? (or add the source under 'sources:')"
 				} else {
 					e.Suggestion = "add it under 'sources:' with its full citation"
 				}
@@ -444,38 +444,6 @@ func checkGroups(ms []*Material, names map[string]*Material, base *Dataset) Erro
 		}
 	}
 	return errs
-}
-
-// nearestWords returns up to n of words within a small edit distance of w,
-// nearest first.
-func nearestWords(w string, words []string, n int) []string {
-	type c struct {
-		s string
-		d int
-	}
-	var cs []c
-	limit := max(2, len(w)/3)
-	for _, x := range words {
-		if d := spell.Distance(w, x); d <= limit {
-			cs = append(cs, c{x, d})
-		}
-	}
-	slices.SortFunc(cs, func(a, b c) int {
-		if a.d != b.d {
-			return a.d - b.d
-		}
-		return strings.Compare(a.s, b.s)
-	})
-	var out []string
-	for _, x := range cs {
-		if len(out) == n {
-			break
-		}
-		if !slices.Contains(out, x.s) {
-			out = append(out, x.s)
-		}
-	}
-	return out
 }
 
 // errorsAsList returns err's problems as a list, whatever its shape.

@@ -105,6 +105,8 @@ func TestLoadErrors(t *testing.T) {
 		{"unknown-top.yaml", "1:1", `materials file: unknown key "source"`, "did you mean 'sources'"},
 		{"bad-date.yaml", "10:", `bad date "17x6"`, "EDTF"},
 		{"unknown-source.yaml", "10:44", `cites source "handbok-a", which is not in the bibliography`, "did you mean 'handbook-a'"},
+		// One suggestion rule (spell.Nearest) for every hint: a key that differs only in case is a slip too.
+		{"unknown-source-case.yaml", "10:44", `cites source "HANDBOOK-A", which is not in the bibliography`, "did you mean 'handbook-a'"},
 		{"unknown-place.yaml", "11:32", `unknown place "Japan"`, "did you mean 'JP'"},
 		{"place-number.yaml", "11:32", `unknown place "30"`, "did you mean '030'"},
 		{"bad-kind.yaml", "10:16", `unknown milestone kind "maked"`, "did you mean 'made'"},

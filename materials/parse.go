@@ -11,6 +11,7 @@ import (
 
 	"terminus/constraint/date"
 	"terminus/constraint/input"
+	"terminus/materials/spell"
 )
 
 // fileResult is what one file gave.
@@ -171,7 +172,7 @@ func (p *parser) source(n *input.Node) (Source, bool) {
 		s.Type = strings.TrimSpace(p.str(f, "a source type"))
 		if s.Type != "" && !slices.Contains(SourceTypes(), s.Type) {
 			hint := "type is one of " + strings.Join(SourceTypes(), ", ")
-			if n := nearestWords(strings.ToLower(s.Type), SourceTypes(), 1); len(n) == 1 {
+			if n := spell.Nearest(s.Type, SourceTypes(), 1); len(n) == 1 {
 				hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
 			}
 			p.errAt(f.Value, fmt.Sprintf("unknown type %q of source %q", s.Type, s.Key), hint)
@@ -282,7 +283,7 @@ func (p *parser) oneOf(fs *input.Fields, key, what string, at *input.Node, allow
 		return s
 	}
 	hint := key + " is one of " + strings.Join(allowed, ", ")
-	if n := nearestWords(strings.ToLower(s), allowed, 1); len(n) == 1 {
+	if n := spell.Nearest(s, allowed, 1); len(n) == 1 {
 		hint = "did you mean " + quote(n[0]) + "? (" + hint + ")"
 	}
 	p.errAt(fs.At(key).Value, fmt.Sprintf("unknown %s %q for %s", key, s, what), hint)
@@ -331,7 +332,7 @@ func (p *parser) milestone(n *input.Node, what string) (Milestone, bool) {
 		ok = false
 	default:
 		hint := "kind is one of made, sold, arrived, withdrawn, attested"
-		if s := nearestWords(strings.ToLower(kind), []string{"made", "sold", "arrived", "withdrawn", "attested"}, 1); len(s) == 1 {
+		if s := spell.Nearest(kind, []string{"made", "sold", "arrived", "withdrawn", "attested"}, 1); len(s) == 1 {
 			hint = "did you mean " + quote(s[0]) + "? (" + hint + ")"
 		}
 		p.errAt(fs.At("kind").Value, fmt.Sprintf("unknown milestone kind %q in %s", kind, what), hint)
@@ -373,7 +374,7 @@ func (p *parser) milestone(n *input.Node, what string) (Milestone, bool) {
 		if ms.Place != "" && !p.regions.Valid(ms.Place) {
 			hint := "a place is an ISO 3166-1 alpha-2 code (\"NL\") or a UN M49 area code (\"155\", quoted)"
 			if s := p.regions.Suggest(ms.Place); len(s) > 0 {
-				hint = "did you mean " + orList(s) + "? (" + hint + ")"
+				hint = "did you mean " + input.OrList(s) + "? (" + hint + ")"
 			}
 			msg := fmt.Sprintf("unknown place %q in %s", ms.Place, where())
 			if f.Value.Type == input.Int {

@@ -61,32 +61,11 @@ func centuryUnit(w string) int64 {
 	return 0
 }
 
-// words splits s[lo:hi] at spaces and at a hyphen between letters and
-// digits ("18th-century", "mid-18th"); it returns false beyond max words.
+// words splits s[lo:hi] at spaces and commas and at a hyphen before a
+// century word ("18th-century", "mid-18th"); it returns false beyond
+// cap(out) words.
 func (p *parser) words(lo, hi int, out [][2]int) ([][2]int, bool) {
-	s := p.in
-	out = out[:0]
-	for i := lo; i < hi; {
-		for i < hi && (isSpace(s[i]) || s[i] == ',') {
-			i++
-		}
-		if i == hi {
-			break
-		}
-		j := i
-		for j < hi && !isSpace(s[j]) && s[j] != ',' && !(s[j] == '-' && j > i && j+1 < hi && !isDigit(s[j+1]) && centuryUnit(p.wordAt(j+1, hi)) != 0) {
-			j++
-		}
-		if len(out) == cap(out) {
-			return out, false
-		}
-		out = append(out, [2]int{i, j})
-		if j < hi && s[j] == '-' {
-			j++
-		}
-		i = j
-	}
-	return out, true
+	return p.splitWords(lo, hi, out, true)
 }
 
 func (p *parser) wordAt(i, hi int) string {

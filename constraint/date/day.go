@@ -24,14 +24,9 @@ func floorDiv(a, b int64) int64 {
 func Gregorian(y int64, m, d int) Day {
 	// Days from civil after H. Hinnant, "chrono-Compatible Low-Level Date
 	// Algorithms", with era arithmetic that holds for every integer year.
-	yy := y
-	if m <= 2 {
-		yy--
-	}
+	yy, doy := toMarchYear(y, m, d)
 	era := floorDiv(yy, 400)
 	yoe := yy - era*400
-	mp := int64((m + 9) % 12)
-	doy := (153*mp+2)/5 + int64(d) - 1
 	doe := yoe*365 + yoe/4 - yoe/100 + doy
 	return Day(era*146097 + doe + 1721120)
 }
@@ -42,32 +37,15 @@ func (d Day) Civil() (y int64, m, dd int) {
 	era := floorDiv(z, 146097)
 	doe := z - era*146097
 	yoe := (doe - doe/1460 + doe/36524 - doe/146096) / 365
-	y = yoe + era*400
-	doy := doe - (365*yoe + yoe/4 - yoe/100)
-	mp := (5*doy + 2) / 153
-	dd = int(doy - (153*mp+2)/5 + 1)
-	if mp < 10 {
-		m = int(mp + 3)
-	} else {
-		m = int(mp - 9)
-	}
-	if m <= 2 {
-		y++
-	}
-	return y, m, dd
+	return fromMarchYear(yoe+era*400, doe-(365*yoe+yoe/4-yoe/100))
 }
 
 // Julian returns the day for year y, month m and day d of the Julian
 // calendar (astronomical year numbering).
 func Julian(y int64, m, d int) Day {
-	yy := y
-	if m <= 2 {
-		yy--
-	}
+	yy, doy := toMarchYear(y, m, d)
 	era := floorDiv(yy, 4)
 	yoe := yy - era*4
-	mp := int64((m + 9) % 12)
-	doy := (153*mp+2)/5 + int64(d) - 1
 	doe := yoe*365 + doy
 	return Day(era*1461 + doe + 1721118)
 }
@@ -78,19 +56,37 @@ func (d Day) JulianCivil() (y int64, m, dd int) {
 	era := floorDiv(z, 1461)
 	doe := z - era*1461
 	yoe := (doe - doe/1460) / 365
-	y = yoe + era*4
-	doy := doe - 365*yoe
+	return fromMarchYear(yoe+era*4, doe-365*yoe)
+}
+
+// toMarchYear moves a civil date into a year that starts on 1 March, so
+// that the leap day is the last day of the year: the year so counted and
+// the day of it (0 for 1 March). The Gregorian and Julian calendars share
+// it; they differ only in how many days their years of a cycle hold.
+func toMarchYear(y int64, m, d int) (yy, doy int64) {
+	yy = y
+	if m <= 2 {
+		yy--
+	}
+	mp := int64((m + 9) % 12)
+	return yy, (153*mp+2)/5 + int64(d) - 1
+}
+
+// fromMarchYear is the inverse of [toMarchYear]: the civil year, month and
+// day of day doy of the March-based year yy.
+func fromMarchYear(yy, doy int64) (y int64, m, d int) {
 	mp := (5*doy + 2) / 153
-	dd = int(doy - (153*mp+2)/5 + 1)
+	d = int(doy - (153*mp+2)/5 + 1)
 	if mp < 10 {
 		m = int(mp + 3)
 	} else {
 		m = int(mp - 9)
 	}
+	y = yy
 	if m <= 2 {
 		y++
 	}
-	return y, m, dd
+	return y, m, d
 }
 
 // IsLeap reports whether y is a leap year of the Gregorian calendar.

@@ -95,24 +95,7 @@ func (p *parser) eraForm(lo, hi int) (eraDate, []eraRef, bool, error) {
 func (p *parser) eraRoman(lo, hi int) (eraDate, []eraRef, bool, error) {
 	s := p.in
 	var buf [12][2]int
-	ws := buf[:0]
-	for i := lo; i < hi; {
-		for i < hi && (isSpace(s[i]) || s[i] == ',') {
-			i++
-		}
-		if i == hi {
-			break
-		}
-		j := i
-		for j < hi && !isSpace(s[j]) && s[j] != ',' {
-			j++
-		}
-		if len(ws) == cap(ws) {
-			return eraDate{}, nil, false, nil
-		}
-		ws = append(ws, [2]int{i, j})
-		i = j
-	}
+	ws := p.tokens(lo, hi, buf[:0])
 	if len(ws) == 0 {
 		return eraDate{}, nil, false, nil
 	}

@@ -18,9 +18,7 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 		return p.scatteredCore(i, hi, neg, pt)
 	}
 	j := i
-	for i < hi && (isDigit(s[i]) || s[i] == 'X') {
-		i++
-	}
+	i = digitsOrX(s, i, hi)
 	n := i - j
 	if n > 4 {
 		return i, p.failHint(j, "a year of more than four digits takes the Y prefix",
@@ -70,82 +68,43 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 	}
 	// Month or season.
 	if i < hi && s[i] == '-' {
-		i++
-		j = i
-		for i < hi && (isDigit(s[i]) || s[i] == 'X') {
-			i++
-		}
+		j = i + 1
+		i = digitsOrX(s, j, hi)
 		if i-j != 2 {
 			return i, p.failHint(j, "expected a month of two digits (01–12) or a season (21–24)", "write 1874-05")
 		}
 		if n > 4 {
 			return j, p.failHint(j, "a year of more than four digits has no month here", "write the long year alone: Y12000")
 		}
-		c0, c1 := s[j], s[j+1]
-		switch {
-		case c0 == 'X' && c1 == 'X':
-			pt.mx = 2
-		case c1 == 'X':
-			if seenX {
-				return j, p.xRun(j)
-			}
-			if c0 != '0' && c0 != '1' {
-				return j, p.fail(j, "month "+s[j:j+2]+": months are 01–12; unspecified months are 0X, 1X or XX")
-			}
-			pt.mx = 1
-			pt.month = (c0 - '0') * 10
-		case c0 == 'X':
-			return j + 1, p.xRun(j + 1)
-		default:
-			if seenX {
-				return j, p.xRun(j)
-			}
-			m := (c0-'0')*10 + c1 - '0'
-			if m == 0 || (m > 12 && m < 21) || m > 41 {
-				e := p.fail(j, "month "+s[j:j+2]+": months are 01–12, seasons 21–24 (and 25–41, ISO 8601-2 divisions of the year)")
-				if n == 4 && !neg && i == hi && int64(m) > v%100 {
-					// 1870-75: most likely a range of years written short.
-					e.hint = "for a range of years write " + s[j-5:j-1] + "/" + s[j-5:j-3] + s[j:j+2]
-				}
-				return j, e
-			}
-			pt.month = m
+		m, mx, at, err := p.xField(j, seenX, '1', "month", "months are 01–12; unspecified months are 0X, 1X or XX")
+		if err != nil {
+			return at, err
 		}
+		if mx == 0 && (m == 0 || (m > 12 && m < 21) || m > 41) {
+			e := p.fail(j, "month "+s[j:j+2]+": months are 01–12, seasons 21–24 (and 25–41, ISO 8601-2 divisions of the year)")
+			if n == 4 && !neg && i == hi && int64(m) > v%100 {
+				// 1870-75: most likely a range of years written short.
+				e.hint = "for a range of years write " + s[j-5:j-1] + "/" + s[j-5:j-3] + s[j:j+2]
+			}
+			return j, e
+		}
+		pt.month, pt.mx = m, mx
 		seenX = seenX || pt.mx > 0
 		// Day.
 		if i < hi && s[i] == '-' {
-			i++
-			j = i
-			for i < hi && (isDigit(s[i]) || s[i] == 'X') {
-				i++
-			}
+			j = i + 1
+			i = digitsOrX(s, j, hi)
 			if i-j != 2 {
 				return i, p.failHint(j, "expected a day of two digits (01–31)", "write 1874-05-21")
 			}
 			if pt.month > 12 {
 				return j, p.fail(j, "a season has no days")
 			}
-			c0, c1 := s[j], s[j+1]
-			switch {
-			case c0 == 'X' && c1 == 'X':
-				pt.dx = 2
-			case c1 == 'X':
-				if seenX {
-					return j, p.xRun(j)
-				}
-				if c0 > '3' {
-					return j, p.fail(j, "day "+s[j:j+2]+": days are 01–31; unspecified days are 0X, 1X, 2X, 3X or XX")
-				}
-				pt.dx = 1
-				pt.day = (c0 - '0') * 10
-			case c0 == 'X':
-				return j + 1, p.xRun(j + 1)
-			default:
-				if seenX {
-					return j, p.xRun(j)
-				}
-				pt.day = (c0-'0')*10 + c1 - '0'
+			d, dx, at, err := p.xField(j, seenX, '3', "day", "days are 01–31; unspecified days are 0X, 1X, 2X, 3X or XX")
+			if err != nil {
+				return at, err
 			}
+			pt.day, pt.dx = d, dx
 			if err := p.checkDay(j, pt); err != nil {
 				return j, err
 			}
@@ -164,6 +123,41 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 	}
 	pt.span()
 	return i, nil
+}
+
+// digitsOrX is where the run of digits and X that starts at s[i] ends
+// (at hi at the latest).
+func digitsOrX(s string, i, hi int) int {
+	for i < hi && (isDigit(s[i]) || s[i] == 'X') {
+		i++
+	}
+	return i
+}
+
+// xField reads the two characters at j of a month or a day, which may end
+// in unspecified digits: "XX" gives x = 2, "1X" the value 10 with x = 1,
+// "12" the value 12 (unchecked) with x = 0. A field with one X has tens of
+// at most maxTens, or the error names the field (what) and its rule. X
+// digits run to the end of the date: after an earlier X (seenX) only "XX"
+// may follow, and a digit never follows an X. On an error, at is where it
+// lies.
+func (p *parser) xField(j int, seenX bool, maxTens byte, what, rule string) (v, x uint8, at int, err *ParseError) {
+	s := p.in
+	c0, c1 := s[j], s[j+1]
+	switch {
+	case c0 == 'X' && c1 == 'X':
+		return 0, 2, j, nil
+	case c0 == 'X':
+		return 0, 0, j + 1, p.xRun(j + 1)
+	case seenX:
+		return 0, 0, j, p.xRun(j)
+	case c1 == 'X':
+		if c0 > maxTens {
+			return 0, 0, j, p.fail(j, what+" "+s[j:j+2]+": "+rule)
+		}
+		return (c0 - '0') * 10, 1, j, nil
+	}
+	return (c0-'0')*10 + c1 - '0', 0, j, nil
 }
 
 func (p *parser) xRun(k int) *ParseError {

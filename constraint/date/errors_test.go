@@ -2,6 +2,7 @@ package date
 
 import (
 	"errors"
+	"slices"
 	"strings"
 	"testing"
 )
@@ -116,7 +117,7 @@ func TestParseInCalendars(t *testing.T) {
 				t.Errorf("EDTF() = %q, want %q", d.EDTF(), tt.edtf)
 			}
 			again, err := Parse(d.EDTF())
-			if err != nil || !sameStrings(iso(again), iso(d)) {
+			if err != nil || !slices.Equal(iso(again), iso(d)) {
 				t.Errorf("Parse(%q) = %v, %v; want %v", d.EDTF(), iso(again), err, iso(d))
 			}
 		})

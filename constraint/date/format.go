@@ -140,28 +140,24 @@ func appendPlain(b []byte, pt point) []byte {
 		b = appendInt(b, int64(pt.sig))
 	}
 	if pt.month != 0 || pt.mx != 0 {
-		b = append(b, '-')
-		switch pt.mx {
-		case 2:
-			b = append(b, 'X', 'X')
-		case 1:
-			b = append(b, '0'+pt.month/10, 'X')
-		default:
-			b = append2(b, int(pt.month))
-		}
+		b = appendXField(append(b, '-'), pt.month, pt.mx)
 		if pt.day != 0 || pt.dx != 0 {
-			b = append(b, '-')
-			switch pt.dx {
-			case 2:
-				b = append(b, 'X', 'X')
-			case 1:
-				b = append(b, '0'+pt.day/10, 'X')
-			default:
-				b = append2(b, int(pt.day))
-			}
+			b = appendXField(append(b, '-'), pt.day, pt.dx)
 		}
 	}
 	return append(b, pt.time...)
+}
+
+// appendXField writes a month or a day with x unspecified trailing digits
+// (0, 1 or 2), as the parser's xField reads it: "05", "1X", "XX".
+func appendXField(b []byte, v, x uint8) []byte {
+	switch x {
+	case 2:
+		return append(b, 'X', 'X')
+	case 1:
+		return append(b, '0'+v/10, 'X')
+	}
+	return append2(b, int(v))
 }
 
 func appendMember(b []byte, m member, inSet bool) []byte {

@@ -333,47 +333,33 @@ func (p *parser) hasLetter(lo, hi int) bool {
 // ("Sept." too).
 func (p *parser) named(lo, hi int, pt *point) error {
 	s := p.in
-	type tok struct{ lo, hi int }
-	var toks [4]tok
-	n := 0
-	for i := lo; i < hi; {
-		for i < hi && (isSpace(s[i]) || s[i] == ',') {
-			i++
-		}
-		if i == hi {
-			break
-		}
-		j := i
-		for j < hi && !isSpace(s[j]) && s[j] != ',' {
-			j++
-		}
-		if n == len(toks) {
-			return p.failHint(j, "expected a date such as 21 May 1874", "write 21 May 1874, May 1874 or 1874-05-21")
-		}
-		toks[n] = tok{i, j}
-		n++
-		i = j
+	type tok = [2]int // a word's start and end
+	var buf [5]tok
+	toks, _ := p.splitWords(lo, hi, buf[:0], false)
+	if len(toks) == len(buf) { // a date with a month name has four words at most
+		return p.failHint(toks[4][1], "expected a date such as 21 May 1874", "write 21 May 1874, May 1874 or 1874-05-21")
 	}
+	n := len(toks)
 	month, mi := 0, -1
 	for k := 0; k < n; k++ {
-		if m := monthByName(s[toks[k].lo:toks[k].hi]); m > 0 {
+		if m := monthByName(s[toks[k][0]:toks[k][1]]); m > 0 {
 			month, mi = m, k
 			break
 		}
 	}
 	if month == 0 {
-		k := toks[0].lo
+		k := toks[0][0]
 		for _, tk := range toks[:n] {
-			if p.hasLetter(tk.lo, tk.hi) {
-				k = tk.lo
+			if p.hasLetter(tk[0], tk[1]) {
+				k = tk[0]
 				break
 			}
 		}
 		hint := "write 21 May 1874, May 1874, 1874-05-21, c. 1870, 1870s or 1200 BCE"
 		w := ""
 		for _, tk := range toks[:n] {
-			if tk.lo == k {
-				w = s[tk.lo:tk.hi]
+			if tk[0] == k {
+				w = s[tk[0]:tk[1]]
 			}
 		}
 		switch {
@@ -390,11 +376,11 @@ func (p *parser) named(lo, hi int, pt *point) error {
 		return p.failHint(k, "unexpected word in a date: expected a month name or an EDTF date", hint)
 	}
 	num := func(t tok, what string, digits int) (int64, error) {
-		if t.hi-t.lo > digits || t.hi == t.lo {
-			return 0, p.fail(t.lo, "expected "+what)
+		if t[1]-t[0] > digits || t[1] == t[0] {
+			return 0, p.fail(t[0], "expected "+what)
 		}
 		var v int64
-		for k := t.lo; k < t.hi; k++ {
+		for k := t[0]; k < t[1]; k++ {
 			if !isDigit(s[k]) {
 				return 0, p.fail(k, "expected "+what)
 			}
@@ -411,26 +397,26 @@ func (p *parser) named(lo, hi int, pt *point) error {
 	case n == 3 && mi == 0: // May 21, 1874
 		dayTok, yearTok = toks[1], toks[2]
 	default:
-		return p.failHint(toks[0].lo, "expected a date such as 21 May 1874", "write 21 May 1874, May 21, 1874 or May 1874")
+		return p.failHint(toks[0][0], "expected a date such as 21 May 1874", "write 21 May 1874, May 21, 1874 or May 1874")
 	}
 	dual := int64(-1) // the new-style year of a dual year "1712/13"
-	if k := strings.IndexByte(s[yearTok.lo:yearTok.hi], '/'); k > 0 {
-		y2, err := p.dualYear(yearTok.lo, yearTok.lo+k, yearTok.hi)
+	if k := strings.IndexByte(s[yearTok[0]:yearTok[1]], '/'); k > 0 {
+		y2, err := p.dualYear(yearTok[0], yearTok[0]+k, yearTok[1])
 		if err != nil {
 			return err
 		}
 		dual = y2
-		yearTok.hi = yearTok.lo + k
+		yearTok[1] = yearTok[0] + k
 	}
-	if yearTok.hi-yearTok.lo != 4 {
-		return p.failHint(yearTok.lo, "expected a year of four digits after the month", "write May 1874; for other years use EDTF: 0079-05")
+	if yearTok[1]-yearTok[0] != 4 {
+		return p.failHint(yearTok[0], "expected a year of four digits after the month", "write May 1874; for other years use EDTF: 0079-05")
 	}
 	y, err := num(yearTok, "a year of four digits", 4)
 	if err != nil {
 		return err
 	}
 	pt.year, pt.month = y, uint8(month)
-	if dayTok.hi > 0 {
+	if dayTok[1] > 0 {
 		d, err := num(dayTok, "a day of the month", 2)
 		if err != nil {
 			return err
@@ -438,13 +424,13 @@ func (p *parser) named(lo, hi int, pt *point) error {
 		pt.day = uint8(d)
 	}
 	if dual >= 0 {
-		return p.dualDate(lo, hi, dayTok.lo, dual, pt)
+		return p.dualDate(lo, hi, dayTok[0], dual, pt)
 	}
 	if pt.cal == CalendarJulian || p.ys != YearStartUnknown {
-		return p.documentary(lo, hi, dayTok.lo, pt)
+		return p.documentary(lo, hi, dayTok[0], pt)
 	}
 	if pt.day != 0 {
-		if err := p.checkDay(dayTok.lo, pt); err != nil {
+		if err := p.checkDay(dayTok[0], pt); err != nil {
 			return err
 		}
 	}

@@ -3,6 +3,7 @@ package date
 import (
 	"errors"
 	"math/rand/v2"
+	"slices"
 	"testing"
 )
 
@@ -29,7 +30,7 @@ func checkDate(t *testing.T, in string, d Date) {
 	if err != nil {
 		t.Fatalf("Parse(%q) gave EDTF %q, which does not parse: %v", in, d.EDTF(), err)
 	}
-	if !sameStrings(iso(again), iso(d)) {
+	if !slices.Equal(iso(again), iso(d)) {
 		t.Fatalf("Parse(%q): EDTF %q reads as %v, want %v", in, d.EDTF(), iso(again), iso(d))
 	}
 	if again.EDTF() != d.EDTF() {

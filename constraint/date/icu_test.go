@@ -130,28 +130,33 @@ func randomDays(r *rand.Rand, n int, from, to int64) []Day {
 	return out
 }
 
-func TestArithmeticCalendarsAgainstICU(t *testing.T) {
-	r := rand.New(rand.NewPCG(1300, 5600))
-	type q struct {
-		cal string
-		d   Day
-	}
-	var qs []q
-	for _, c := range []struct {
-		cal      string
-		from, to int64
-	}{{"islamic-civil", 1600, 2100}, {"persian", 1800, 2100}, {"hebrew", 1600, 2100}, {"buddhist", 1900, 2100}, {"roc", 1912, 2100}} {
-		for _, d := range randomDays(r, 1500, c.from, c.to) {
-			qs = append(qs, q{c.cal, d})
+// icuRange names a calendar to ask ICU about and the Gregorian years the
+// days asked about are drawn from.
+type icuRange struct {
+	cal      string
+	from, to int64
+}
+
+// askICU draws n random days from each range in turn and asks ICU about
+// them: row i of the answer is about days[i].
+func askICU(t *testing.T, r *rand.Rand, n int, ranges ...icuRange) (days []Day, rows []icuRow) {
+	t.Helper()
+	var lines []string
+	for _, c := range ranges {
+		for _, d := range randomDays(r, n, c.from, c.to) {
+			days = append(days, d)
+			lines = append(lines, c.cal+" "+d.ISO())
 		}
 	}
-	lines := make([]string, len(qs))
-	for i, x := range qs {
-		lines[i] = x.cal + " " + x.d.ISO()
-	}
-	rows := runICU(t, lines)
+	return days, runICU(t, lines)
+}
+
+func TestArithmeticCalendarsAgainstICU(t *testing.T) {
+	r := rand.New(rand.NewPCG(1300, 5600))
+	days, rows := askICU(t, r, 1500, icuRange{"islamic-civil", 1600, 2100}, icuRange{"persian", 1800, 2100},
+		icuRange{"hebrew", 1600, 2100}, icuRange{"buddhist", 1900, 2100}, icuRange{"roc", 1912, 2100})
 	for i, row := range rows {
-		d := qs[i].d
+		d := days[i]
 		switch row.cal {
 		case "islamic-civil":
 			y, m, dd := islamicFromDay(d)
@@ -169,7 +174,7 @@ func TestArithmeticCalendarsAgainstICU(t *testing.T) {
 			}
 			text := row.day + " " + persianMonths[atoiT(t, row.month)-1] + " " + row.year + " SH"
 			if got, err := Parse(text); err != nil || got.Alternatives[0].First != d || got.Alternatives[0].Last != d {
-				t.Errorf("%s: %q reads as %v, %v", row.iso, text, daysOf(got), err)
+				t.Errorf("%s: %q reads as %v, %v", row.iso, text, iso(got), err)
 			}
 		case "hebrew":
 			y, m, dd := hebrewFromDay(d)
@@ -178,7 +183,7 @@ func TestArithmeticCalendarsAgainstICU(t *testing.T) {
 			}
 			text := row.day + " " + row.month + " " + row.year
 			if got, err := Parse(text); err != nil || got.Alternatives[0].First != d || got.Alternatives[len(got.Alternatives)-1].Last != d {
-				t.Errorf("%s: %q reads as %v, %v", row.iso, text, daysOf(got), err)
+				t.Errorf("%s: %q reads as %v, %v", row.iso, text, iso(got), err)
 			}
 		case "buddhist":
 			text := "BE " + row.year
@@ -208,28 +213,11 @@ func icuLunar(t *testing.T, s string) (int, bool) {
 
 func TestLunisolarAgainstICU(t *testing.T) {
 	r := rand.New(rand.NewPCG(1645, 1912))
-	type q struct {
-		cal string
-		d   Day
-	}
-	var qs []q
-	for _, c := range []struct {
-		cal      string
-		from, to int64
-	}{{"chinese", 1645, 2100}, {"dangi", 1653, 2100}} {
-		for _, d := range randomDays(r, 1500, c.from, c.to) {
-			qs = append(qs, q{c.cal, d})
-		}
-	}
-	lines := make([]string, len(qs))
-	for i, x := range qs {
-		lines[i] = x.cal + " " + x.d.ISO()
-	}
-	rows := runICU(t, lines)
+	days, rows := askICU(t, r, 1500, icuRange{"chinese", 1645, 2100}, icuRange{"dangi", 1653, 2100})
 	calcs := map[string]*lsCalc{"chinese": newLSCalc(CalendarChinese), "dangi": newLSCalc(CalendarKorean)}
 	differ := map[string]int{}
 	for i, row := range rows {
-		d := qs[i].d
+		d := days[i]
 		c := calcs[row.cal]
 		num, leap := icuLunar(t, row.month)
 		y := int64(atoiT(t, row.year))
@@ -258,12 +246,7 @@ func TestLunisolarAgainstICU(t *testing.T) {
 
 func TestJapaneseAgainstICU(t *testing.T) {
 	r := rand.New(rand.NewPCG(1603, 1868))
-	days := randomDays(r, 3000, 1600, 2100)
-	lines := make([]string, len(days))
-	for i, d := range days {
-		lines[i] = "japanese " + d.ISO()
-	}
-	rows := runICU(t, lines)
+	days, rows := askICU(t, r, 3000, icuRange{"japanese", 1600, 2100})
 	compared := 0
 	for i, row := range rows {
 		d := days[i]
@@ -273,7 +256,7 @@ func TestJapaneseAgainstICU(t *testing.T) {
 		case y >= 1873:
 			text := era + " " + row.year + "." + row.month + "." + row.day
 			if got, err := Parse(text); err != nil || got.Alternatives[0].First != d || got.Alternatives[0].Last != d {
-				t.Errorf("%s: %q reads as %v, %v", row.iso, text, daysOf(got), err)
+				t.Errorf("%s: %q reads as %v, %v", row.iso, text, iso(got), err)
 			}
 			compared++
 		case m >= 3:

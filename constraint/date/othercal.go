@@ -35,8 +35,21 @@ func (p *parser) otherCalendar(lo, hi int) (member, bool, error) {
 	return member{}, false, nil
 }
 
-// tokens splits s[lo:hi] into words at spaces and commas.
+// tokens splits s[lo:hi] into words at spaces and commas; nil when there
+// are more than cap(out).
 func (p *parser) tokens(lo, hi int, out [][2]int) [][2]int {
+	ws, all := p.splitWords(lo, hi, out, false)
+	if !all {
+		return nil
+	}
+	return ws
+}
+
+// splitWords splits s[lo:hi] into at most cap(out) words at spaces and
+// commas; all is false when more words follow them. With centuryHyphens, a
+// hyphen before a century word also ends a word ("18th-century",
+// "mid-18th").
+func (p *parser) splitWords(lo, hi int, out [][2]int, centuryHyphens bool) (ws [][2]int, all bool) {
 	s := p.in
 	out = out[:0]
 	for i := lo; i < hi; {
@@ -47,16 +60,20 @@ func (p *parser) tokens(lo, hi int, out [][2]int) [][2]int {
 			break
 		}
 		j := i
-		for j < hi && !isSpace(s[j]) && s[j] != ',' {
+		for j < hi && !isSpace(s[j]) && s[j] != ',' &&
+			!(centuryHyphens && s[j] == '-' && j > i && j+1 < hi && !isDigit(s[j+1]) && centuryUnit(p.wordAt(j+1, hi)) != 0) {
 			j++
 		}
 		if len(out) == cap(out) {
-			return nil
+			return out, false
 		}
 		out = append(out, [2]int{i, j})
+		if j < hi && s[j] == '-' { // only after a century hyphen
+			j++
+		}
 		i = j
 	}
-	return out
+	return out, true
 }
 
 // calendarWords reads the Hijri, solar Hijri, Hebrew, French Republican,

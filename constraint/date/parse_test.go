@@ -1,6 +1,9 @@
 package date
 
-import "testing"
+import (
+	"slices"
+	"testing"
+)
 
 // iso writes the alternatives of d as "first→last" pairs, ".." for open.
 func iso(d Date) []string {
@@ -18,16 +21,21 @@ func iso(d Date) []string {
 	return out
 }
 
-func sameStrings(a, b []string) bool {
-	if len(a) != len(b) {
-		return false
+// parsedAs parses in and checks its EDTF form and its days (as iso writes
+// them); it returns the date for a table's other checks.
+func parsedAs(t *testing.T, in, edtf string, alts []string) Date {
+	t.Helper()
+	d, err := Parse(in)
+	if err != nil {
+		t.Fatalf("Parse(%q): %v", in, err)
 	}
-	for i := range a {
-		if a[i] != b[i] {
-			return false
-		}
+	if d.EDTF() != edtf {
+		t.Errorf("EDTF() = %q, want %q", d.EDTF(), edtf)
 	}
-	return true
+	if got := iso(d); !slices.Equal(got, alts) {
+		t.Errorf("days = %v, want %v", got, alts)
+	}
+	return d
 }
 
 func TestParseBasics(t *testing.T) {
@@ -50,16 +58,7 @@ func TestParseBasics(t *testing.T) {
 	}
 	for _, tt := range tests {
 		t.Run(tt.in, func(t *testing.T) {
-			d, err := Parse(tt.in)
-			if err != nil {
-				t.Fatalf("Parse(%q): %v", tt.in, err)
-			}
-			if d.EDTF() != tt.edtf {
-				t.Errorf("EDTF() = %q, want %q", d.EDTF(), tt.edtf)
-			}
-			if got := iso(d); !sameStrings(got, tt.alts) {
-				t.Errorf("alternatives = %v, want %v", got, tt.alts)
-			}
+			d := parsedAs(t, tt.in, tt.edtf, tt.alts)
 			if d.Precision != tt.prec {
 				t.Errorf("precision = %v, want %v", d.Precision, tt.prec)
 			}

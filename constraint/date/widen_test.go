@@ -2,6 +2,7 @@ package date
 
 import (
 	"errors"
+	"slices"
 	"testing"
 )
 
@@ -74,17 +75,17 @@ func TestWiden(t *testing.T) {
 				t.Fatal(err)
 			}
 			w := d.Widen(tt.circa)
-			if got := iso(w); !sameStrings(got, tt.widest) {
+			if got := iso(w); !slices.Equal(got, tt.widest) {
 				t.Errorf("Widen = %v, want %v", got, tt.widest)
 			}
 			if w.EDTF() != d.EDTF() {
 				t.Errorf("Widen changed EDTF() to %q", w.EDTF())
 			}
 			// Widening starts from the date as written: twice is once.
-			if got := iso(w.Widen(tt.circa)); !sameStrings(got, tt.widest) {
+			if got := iso(w.Widen(tt.circa)); !slices.Equal(got, tt.widest) {
 				t.Errorf("Widen twice = %v, want %v", got, tt.widest)
 			}
-			if !sameStrings(iso(d), iso(mustParse(t, tt.in))) {
+			if !slices.Equal(iso(d), iso(mustParse(t, tt.in))) {
 				t.Error("Widen changed the receiver")
 			}
 		})

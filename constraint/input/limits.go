@@ -216,15 +216,9 @@ func tomlTooDeep(data []byte, max int) (Pos, bool) {
 		return at, true
 	}
 	line := 0
-	for len(data) > 0 {
+	for l := range bytes.Lines(data) {
 		line++
-		eol := bytes.IndexByte(data, '\n')
-		l := data
-		if eol >= 0 {
-			l, data = data[:eol], data[eol+1:]
-		} else {
-			data = nil
-		}
+		l = bytes.TrimSuffix(l, []byte{'\n'})
 		l = bytes.TrimLeft(l, " \t")
 		end := len(l)
 		if l0 := bytes.IndexAny(l, "=#"); l0 >= 0 && (len(l) == 0 || l[0] != '[') {
@@ -268,15 +262,9 @@ func yamlTooDeep(data []byte, max int) (Pos, bool) {
 	}
 	var stack []int // the indentation of each open level
 	line := 0
-	for len(data) > 0 {
+	for l := range bytes.Lines(data) {
 		line++
-		eol := bytes.IndexByte(data, '\n')
-		l := data
-		if eol >= 0 {
-			l, data = data[:eol], data[eol+1:]
-		} else {
-			data = nil
-		}
+		l = bytes.TrimSuffix(l, []byte{'\n'})
 		indent := 0
 		for indent < len(l) && l[indent] == ' ' {
 			indent++

@@ -62,11 +62,7 @@ func Duration(d date.Duration) string {
 		if n == 0 {
 			return
 		}
-		if n == 1 {
-			parts = append(parts, "1 "+unit)
-		} else {
-			parts = append(parts, fmt.Sprintf("%d %ss", n, unit))
-		}
+		parts = append(parts, fmt.Sprintf("%d %s", n, Plural(int(n), unit, unit+"s")))
 	}
 	add(d.Years, "year")
 	add(d.Months, "month")

@@ -7,10 +7,10 @@ import (
 	"flag"
 	"os"
 	"path/filepath"
-	"regexp"
-	"strconv"
 	"strings"
 	"testing"
+
+	"terminus/cmd/terminus/internal/golden"
 )
 
 var update = flag.Bool("update", false, "rewrite the expected reports of the examples")
@@ -24,9 +24,47 @@ func execute(t *testing.T, args ...string) (stdout, stderr string, code int) {
 	return out.String(), errw.String(), code
 }
 
+// checkFails runs terminus with args and checks that it fails on its input
+// (exit 2), prints no report, and says each of want on stderr; it returns
+// stderr.
+func checkFails(t *testing.T, want []string, args ...string) string {
+	t.Helper()
+	out, errs, code := execute(t, args...)
+	if code != 2 {
+		t.Errorf("exit %d, want 2", code)
+	}
+	if out != "" {
+		t.Errorf("stdout not empty: %q", out)
+	}
+	for _, w := range want {
+		if !strings.Contains(errs, w) {
+			t.Errorf("stderr %q lacks %q", errs, w)
+		}
+	}
+	return errs
+}
+
+// checkPrints runs terminus with args and checks that it succeeds with
+// nothing on stderr and prints each of want; it returns stdout.
+func checkPrints(t *testing.T, want []string, args ...string) string {
+	t.Helper()
+	out, errs, code := execute(t, args...)
+	if code != 0 || errs != "" {
+		t.Fatalf("exit %d, stderr %q", code, errs)
+	}
+	for _, w := range want {
+		if !strings.Contains(out, w) {
+			t.Errorf("output lacks %q\ngot:\n%s", w, out)
+		}
+	}
+	return out
+}
+
 const fixture = "../../../../constraint/testdata/fixture-materials.yaml"
 
-func writeCase(t *testing.T, name, text string) string {
+// writeFile writes text to a file of that name in a folder of the test's own
+// and returns its path.
+func writeFile(t *testing.T, name, text string) string {
 	t.Helper()
 	p := filepath.Join(t.TempDir(), name)
 	if err := os.WriteFile(p, []byte(text), 0o644); err != nil {
@@ -58,7 +96,7 @@ func TestCheckExitStatus(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			p := writeCase(t, "case.yaml", "place: NL\nfindings:\n  - material: fixture yellow\nclaims:\n  - date: \""+tc.claim+"\"\n")
+			p := writeFile(t, "case.yaml", "place: NL\nfindings:\n  - material: fixture yellow\nclaims:\n  - date: \""+tc.claim+"\"\n")
 			out, errs, code := execute(t, "check", "--materials", fixture, "--fail-on", tc.failOn, p)
 			if code != tc.want {
 				t.Errorf("exit %d, want %d\nstdout: %s\nstderr: %s", code, tc.want, out, errs)
@@ -81,19 +119,7 @@ func TestCheckBadInput(t *testing.T) {
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
-			p := writeCase(t, "case.yaml", tc.text)
-			out, errs, code := execute(t, "check", "--materials", fixture, p)
-			if code != 2 {
-				t.Errorf("exit %d, want 2", code)
-			}
-			if out != "" {
-				t.Errorf("stdout not empty: %q", out)
-			}
-			for _, w := range tc.want {
-				if !strings.Contains(errs, w) {
-					t.Errorf("stderr %q lacks %q", errs, w)
-				}
-			}
+			errs := checkFails(t, tc.want, "check", "--materials", fixture, writeFile(t, "case.yaml", tc.text))
 			if !strings.HasPrefix(errs, "terminus: error: ") {
 				t.Errorf("stderr %q does not start with terminus: error:", errs)
 			}
@@ -103,7 +129,7 @@ func TestCheckBadInput(t *testing.T) {
 	if out, errs, code := execute(t, "check", "no-such-case.yaml"); code != 2 || out != "" || !strings.Contains(errs, "no-such-case.yaml") {
 		t.Errorf("missing file: %d %q %q", code, out, errs)
 	}
-	p := writeCase(t, "case.yaml", "findings: []\n")
+	p := writeFile(t, "case.yaml", "findings: []\n")
 	if _, errs, code := execute(t, "check", "--fail-on", "medium", p); code != 2 || !strings.Contains(errs, "--fail-on") {
 		t.Errorf("bad --fail-on: %d %q", code, errs)
 	}
@@ -116,7 +142,7 @@ func TestCheckBadInput(t *testing.T) {
 }
 
 func TestCheckJSON(t *testing.T) {
-	p := writeCase(t, "case.yaml", "title: J\nplace: NL\nfindings:\n  - {id: f-yellow, material: fixture yellow}\nclaims:\n  - {date: 1870/1879}\n")
+	p := writeFile(t, "case.yaml", "title: J\nplace: NL\nfindings:\n  - {id: f-yellow, material: fixture yellow}\nclaims:\n  - {date: 1870/1879}\n")
 	out, errs, code := execute(t, "check", "--materials", fixture, "--format", "json", p)
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, errs)
@@ -205,36 +231,9 @@ func TestExamples(t *testing.T) {
 			}
 			// The dataset's digest changes with every edit of the data; the
 			// reports are compared without it.
-			if normDigest(string(b)) != normDigest(out) {
-				t.Errorf("report differs from %s (go test -update rewrites it):\n%s", want, lineDiff(string(b), out))
+			if golden.Normalize(string(b)) != golden.Normalize(out) {
+				t.Errorf("report differs from %s (go test -update rewrites it):\n%s", want, golden.Diff(string(b), out))
 			}
 		})
 	}
-}
-
-var digestRe = regexp.MustCompile(`sha256 [0-9a-f]+…`)
-
-func normDigest(s string) string { return digestRe.ReplaceAllString(s, "sha256 …") }
-
-// lineDiff shows the first lines that differ.
-func lineDiff(want, got string) string {
-	w, g := strings.Split(want, "\n"), strings.Split(got, "\n")
-	var b strings.Builder
-	shown := 0
-	for i := 0; i < len(w) || i < len(g); i++ {
-		var wl, gl string
-		if i < len(w) {
-			wl = w[i]
-		}
-		if i < len(g) {
-			gl = g[i]
-		}
-		if wl != gl {
-			b.WriteString("line " + strconv.Itoa(i+1) + ":\n- " + wl + "\n+ " + gl + "\n")
-			if shown++; shown == 5 {
-				break
-			}
-		}
-	}
-	return b.String()
 }

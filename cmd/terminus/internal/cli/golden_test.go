@@ -3,9 +3,10 @@ package cli
 import (
 	"os"
 	"path/filepath"
-	"regexp"
 	"strings"
 	"testing"
+
+	"terminus/cmd/terminus/internal/golden"
 )
 
 // The golden files under testdata/golden hold the output of every format
@@ -19,31 +20,9 @@ import (
 
 const goldenDir = "../../../../testdata/golden"
 
-// digests finds the dataset's SHA-256 as each format writes it.
-var digests = regexp.MustCompile(`(sha256[":\s]+)[0-9a-f]{12,64}…?`)
-
-func normGolden(s string) string { return digests.ReplaceAllString(s, "${1}…") }
-
 func checkGolden(t *testing.T, name, got string) {
 	t.Helper()
-	path := filepath.Join(goldenDir, name)
-	got = normGolden(got)
-	if *update {
-		if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("no golden file: %v (run go test ./cmd/... -update)", err)
-	}
-	if string(want) != got {
-		t.Errorf("%s differs (go test ./cmd/... -update rewrites it):\n%s", path, lineDiff(string(want), got))
-	}
+	golden.Check(t, filepath.Join(goldenDir, name), got, *update)
 }
 
 func TestGoldenCheck(t *testing.T) {

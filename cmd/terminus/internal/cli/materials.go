@@ -12,6 +12,7 @@ import (
 	"github.com/spf13/cobra"
 
 	"terminus/constraint/date"
+	"terminus/constraint/wording"
 	"terminus/materials"
 )
 
@@ -522,7 +523,7 @@ func newMaterialsSourcesCmd(s IO, load datasetLoader) *cobra.Command {
 			case "text", "":
 				var b strings.Builder
 				for _, src := range srcs {
-					fmt.Fprintf(&b, "%s  (%d %s)\n    %s\n", src.Key, cited[src.Key], plural(cited[src.Key], "milestone", "milestones"), src.Cite)
+					fmt.Fprintf(&b, "%s  (%d %s)\n    %s\n", src.Key, cited[src.Key], wording.Plural(cited[src.Key], "milestone", "milestones"), src.Cite)
 					if src.URL != "" {
 						fmt.Fprintf(&b, "    %s\n", src.URL)
 					}
@@ -548,13 +549,6 @@ func newMaterialsSourcesCmd(s IO, load datasetLoader) *cobra.Command {
 	}
 	cmd.Flags().StringVarP(&format, "format", "f", "text", "output format: text or json")
 	return cmd
-}
-
-func plural(n int, one, many string) string {
-	if n == 1 {
-		return one
-	}
-	return many
 }
 
 func newMaterialsLintCmd(s IO, overlays *[]string) *cobra.Command {
@@ -589,13 +583,13 @@ from-memory milestones. Exit status 1 when there are problems.`,
 			if d != nil {
 				st := d.Stats()
 				fmt.Fprintf(&b, "%d %s, %d %s, %d %s: %d documented, %d from memory\n",
-					len(args), plural(len(args), "file", "files"),
-					st.Materials, plural(st.Materials, "material", "materials"),
-					st.Milestones, plural(st.Milestones, "milestone", "milestones"),
+					len(args), wording.Plural(len(args), "file", "files"),
+					st.Materials, wording.Plural(st.Materials, "material", "materials"),
+					st.Milestones, wording.Plural(st.Milestones, "milestone", "milestones"),
 					st.Documented, st.FromMemory)
 			}
 			if len(problems) > 0 {
-				fmt.Fprintf(&b, "%d %s\n", len(problems), plural(len(problems), "problem", "problems"))
+				fmt.Fprintf(&b, "%d %s\n", len(problems), wording.Plural(len(problems), "problem", "problems"))
 			} else {
 				b.WriteString("no problems\n")
 			}

@@ -1,11 +1,8 @@
 package cli
 
 import (
-	"bytes"
-	"context"
 	"encoding/csv"
 	"encoding/json"
-	"os"
 	"path/filepath"
 	"strconv"
 	"strings"
@@ -14,15 +11,6 @@ import (
 	"terminus/constraint/date"
 	"terminus/materials"
 )
-
-// runTerminus runs the whole command tree as main does and captures what
-// it writes.
-func runTerminus(t *testing.T, args ...string) (code int, stdout, stderr string) {
-	t.Helper()
-	var out, errw bytes.Buffer
-	code = Main(context.Background(), args, strings.NewReader(""), &out, &errw)
-	return code, out.String(), errw.String()
-}
 
 func builtinForCLI(t *testing.T) *materials.Dataset {
 	t.Helper()
@@ -33,18 +21,9 @@ func builtinForCLI(t *testing.T) *materials.Dataset {
 	return d
 }
 
-func writeFile(t *testing.T, name, text string) string {
-	t.Helper()
-	p := filepath.Join(t.TempDir(), name)
-	if err := os.WriteFile(p, []byte(text), 0o644); err != nil {
-		t.Fatal(err)
-	}
-	return p
-}
-
 func TestMaterialsListText(t *testing.T) {
 	d := builtinForCLI(t)
-	code, out, errw := runTerminus(t, "materials", "list")
+	out, errw, code := execute(t, "materials", "list")
 	if code != 0 || errw != "" {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -62,7 +41,7 @@ func TestMaterialsListText(t *testing.T) {
 }
 
 func TestMaterialsListJSON(t *testing.T) {
-	code, out, errw := runTerminus(t, "materials", "list", "--class", "pigment", "--made-before", "1800", "--format", "json")
+	out, errw, code := execute(t, "materials", "list", "--class", "pigment", "--made-before", "1800", "--format", "json")
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -116,7 +95,7 @@ func TestMaterialsListJSON(t *testing.T) {
 }
 
 func TestMaterialsListCSVAndPlace(t *testing.T) {
-	code, out, errw := runTerminus(t, "materials", "list", "--place", "JP", "--format", "csv")
+	out, errw, code := execute(t, "materials", "list", "--place", "JP", "--format", "csv")
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -159,7 +138,7 @@ func TestMaterialsUsageErrors(t *testing.T) {
 		{[]string{"materials", "list", "--materials", "absent.yaml"}, "absent.yaml", ""},
 	} {
 		t.Run(strings.Join(tc.args, " "), func(t *testing.T) {
-			code, out, errw := runTerminus(t, tc.args...)
+			out, errw, code := execute(t, tc.args...)
 			if code != 2 {
 				t.Errorf("exit: got %d, want 2", code)
 			}
@@ -182,7 +161,7 @@ func TestMaterialsShow(t *testing.T) {
 	if err != nil {
 		t.Fatal(err)
 	}
-	code, out, errw := runTerminus(t, "materials", "show", "PB 27", "--place", "JP")
+	out, errw, code := execute(t, "materials", "show", "PB 27", "--place", "JP")
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -204,7 +183,7 @@ func TestMaterialsShow(t *testing.T) {
 	if !strings.Contains(out, "for JP the arrival of") {
 		t.Errorf("no arrival line for --place JP:\n%s", out)
 	}
-	code, out, _ = runTerminus(t, "materials", "show", "--format", "json", "Berlin", "blue")
+	out, _, code = execute(t, "materials", "show", "--format", "json", "Berlin", "blue")
 	var j map[string]any
 	if code != 0 || json.Unmarshal([]byte(out), &j) != nil || j["id"] != m.ID {
 		t.Errorf("show --format json: exit %d, %q", code, out)
@@ -213,7 +192,7 @@ func TestMaterialsShow(t *testing.T) {
 
 func TestMaterialsSources(t *testing.T) {
 	d := builtinForCLI(t)
-	code, out, errw := runTerminus(t, "materials", "sources")
+	out, errw, code := execute(t, "materials", "sources")
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -242,7 +221,7 @@ materials:
 
 func TestMaterialsLint(t *testing.T) {
 	good := writeFile(t, "good.yaml", cliGood)
-	code, out, errw := runTerminus(t, "materials", "lint", good)
+	out, errw, code := execute(t, "materials", "lint", good)
 	if code != 0 {
 		t.Fatalf("lint good: exit %d, stdout %q, stderr %q", code, out, errw)
 	}
@@ -253,7 +232,7 @@ func TestMaterialsLint(t *testing.T) {
 
 	bad := writeFile(t, "bad.yaml", strings.Replace(cliGood, `date: "16XX"`, `date: "15XX", note: "too early"`, 1)+
 		"  - id: smalt-test-2\n    names: [smalt for the test]\n    class: pigment\n    origin: synthetic\n    milestones:\n      - {kind: made, date: \"1540\", source: nowhere, basis: documented}\n")
-	code, out, _ = runTerminus(t, "materials", "lint", bad)
+	out, _, code = execute(t, "materials", "lint", bad)
 	if code != 2 && code != 1 {
 		t.Fatalf("lint bad: exit %d", code)
 	}
@@ -267,7 +246,7 @@ func TestMaterialsLint(t *testing.T) {
 	}
 
 	order := writeFile(t, "order.yaml", strings.Replace(cliGood, `date: "16XX"`, `date: "14XX"`, 1))
-	code, out, _ = runTerminus(t, "materials", "lint", order)
+	out, _, code = execute(t, "materials", "lint", order)
 	if code != 1 || !strings.Contains(out, order+":11:9: sold milestone of \"smalt-test\" (14XX) starts before its earliest made claim") {
 		t.Errorf("lint order: exit %d, got %q", code, out)
 	}
@@ -284,14 +263,14 @@ materials:
       - {kind: made, date: "1271", source: my-own-notes, basis: documented}
 `)
 	cites := writeFile(t, "cites.yaml", strings.Replace(cliGood, "source: artists-pigments-2", "source: my-own-notes", 1))
-	if code, out, _ = runTerminus(t, "materials", "lint", cites); code != 1 || !strings.Contains(out, `"my-own-notes"`) {
+	if out, _, code = execute(t, "materials", "lint", cites); code != 1 || !strings.Contains(out, `"my-own-notes"`) {
 		t.Errorf("lint without the library: exit %d, %q", code, out)
 	}
-	if code, out, _ = runTerminus(t, "materials", "lint", "--materials", lib, cites); code != 0 {
+	if out, _, code = execute(t, "materials", "lint", "--materials", lib, cites); code != 0 {
 		t.Errorf("lint with the library: exit %d, %q", code, out)
 	}
 
-	code, _, errw = runTerminus(t, "materials", "lint", filepath.Join(t.TempDir(), "absent.yaml"))
+	_, errw, code = execute(t, "materials", "lint", filepath.Join(t.TempDir(), "absent.yaml"))
 	if code != 2 || !strings.Contains(errw, "terminus: error: ") {
 		t.Errorf("lint absent: exit %d, stderr %q", code, errw)
 	}
@@ -299,20 +278,12 @@ materials:
 
 func TestMaterialsStats(t *testing.T) {
 	d := builtinForCLI(t)
-	code, out, errw := runTerminus(t, "materials", "stats")
-	if code != 0 {
-		t.Fatalf("exit %d, stderr %q", code, errw)
-	}
 	st := d.Stats()
-	for _, want := range []string{
+	checkPrints(t, []string{
 		"materials  ", strconv.Itoa(st.Materials),
 		"documented with page or section", "disagreeing claims", d.SHA256,
-	} {
-		if !strings.Contains(out, want) {
-			t.Errorf("stats text lacks %q", want)
-		}
-	}
-	code, out, _ = runTerminus(t, "materials", "stats", "--format", "json")
+	}, "materials", "stats")
+	out, _, code := execute(t, "materials", "stats", "--format", "json")
 	var j map[string]any
 	if code != 0 || json.Unmarshal([]byte(out), &j) != nil {
 		t.Fatalf("stats json: exit %d, %q", code, out)
@@ -331,7 +302,7 @@ func TestMaterialsOverlay(t *testing.T) {
     milestones:
       - {kind: made, date: "1706", source: artists-pigments-1, basis: from-memory}
 `)
-	code, out, errw := runTerminus(t, "materials", "show", "--materials", user, "my own prussian blue")
+	out, errw, code := execute(t, "materials", "show", "--materials", user, "my own prussian blue")
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -341,7 +312,7 @@ func TestMaterialsOverlay(t *testing.T) {
 	if !strings.Contains(out, "milestones (1)") {
 		t.Errorf("the user's entry is not the one shown:\n%s", out)
 	}
-	code, out, _ = runTerminus(t, "materials", "stats", "--format", "json", "--materials", user)
+	out, _, code = execute(t, "materials", "stats", "--format", "json", "--materials", user)
 	var j map[string]any
 	if code != 0 || json.Unmarshal([]byte(out), &j) != nil {
 		t.Fatalf("stats with overlay: exit %d", code)
@@ -354,7 +325,7 @@ func TestMaterialsOverlay(t *testing.T) {
 
 func TestMaterialsShowText(t *testing.T) {
 	user := writeFile(t, "mine.yaml", cliGood)
-	code, out, errw := runTerminus(t, "materials", "show", "--materials", user, "smalt for the test")
+	out, errw, code := execute(t, "materials", "show", "--materials", user, "smalt for the test")
 	if code != 0 {
 		t.Fatalf("exit %d, stderr %q", code, errw)
 	}
@@ -400,7 +371,7 @@ materials:
       - {kind: sold, date: "1840", source: lab, basis: documented}
 `)
 	c := writeFile(t, "case.yaml", "findings:\n  - material: house-blue\n")
-	code, out, errw := runTerminus(t, "check", "--materials", mats, c)
+	out, errw, code := execute(t, "check", "--materials", mats, c)
 	if code != 2 || out != "" || !strings.Contains(errw, mats+":9:9: sold milestone of \"house-blue\" (1840) starts before its earliest made claim") {
 		t.Errorf("exit %d, stdout %q, stderr %q", code, out, errw)
 	}

@@ -15,6 +15,7 @@ import (
 	"testing"
 	"time"
 
+	"terminus/cmd/terminus/internal/golden"
 	"terminus/cmd/terminus/internal/nodetest"
 	"terminus/cmd/terminus/internal/serve"
 )
@@ -176,7 +177,7 @@ func TestServePageInBrowser(t *testing.T) {
 		t.Fatalf("check on the downloaded case: %s", errs)
 	}
 	if string(md) != want {
-		t.Errorf("the page's Markdown differs from 'terminus check --format md' on the downloaded case:\n%s", lineDiff(want, string(md)))
+		t.Errorf("the page's Markdown differs from 'terminus check --format md' on the downloaded case:\n%s", golden.Diff(want, string(md)))
 	}
 	t.Logf("screenshots: %v", got.Shots)
 }

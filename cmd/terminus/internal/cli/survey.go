@@ -12,6 +12,7 @@ import (
 
 	"terminus/cmd/terminus/internal/survey"
 	"terminus/constraint"
+	"terminus/constraint/wording"
 )
 
 // surveyWriter returns the writer for a survey --format value, and a
@@ -194,7 +195,7 @@ errors count toward exit 1); 2 for bad usage or an input that cannot be read.`,
 				fmt.Fprintf(s.Err, "terminus: survey: %s\n", counts)
 				fmt.Fprintf(s.Err, "terminus: survey: %s\n", counts.Accounting())
 				if n := counts.Errors(); n > 0 {
-					fmt.Fprintf(s.Err, "terminus: survey: %d %s could not be checked; the output gives each with its line and the error\n", n, plural(n, "record", "records"))
+					fmt.Fprintf(s.Err, "terminus: survey: %d %s could not be checked; the output gives each with its line and the error\n", n, wording.Plural(n, "record", "records"))
 				}
 			}
 			if counts.Failing > 0 {

@@ -12,6 +12,8 @@ import (
 	"strconv"
 	"strings"
 	"testing"
+
+	"terminus/cmd/terminus/internal/golden"
 )
 
 // The collections of testdata/survey use the invented fixture materials
@@ -292,7 +294,7 @@ func TestSurveyOrderIsDeterministic(t *testing.T) {
 			if first[format] == "" {
 				first[format] = out
 			} else if out != first[format] {
-				t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, lineDiff(first[format], out))
+				t.Fatalf("--jobs %s: the %s output differs from --jobs 1:\n%s", jobs, format, golden.Diff(first[format], out))
 			}
 			if format != "jsonl" {
 				continue
@@ -341,18 +343,18 @@ func TestSurveyStdinCSV(t *testing.T) {
 }
 
 func TestSurveyExitStatus(t *testing.T) {
-	good := writeCase(t, "good.jsonl", `{"place": "NL", "findings": [{"material": "fixture yellow"}], "claims": [{"date": "1840"}]}`+"\n")
+	good := writeFile(t, "good.jsonl", `{"place": "NL", "findings": [{"material": "fixture yellow"}], "claims": [{"date": "1840"}]}`+"\n")
 	if out, errs, code := execute(t, "survey", "--materials", fixture, good); code != 0 || out == "" {
 		t.Errorf("all consistent: exit %d, %s", code, errs)
 	}
-	doubtful := writeCase(t, "d.jsonl", `{"place": "NL", "findings": [{"material": "fixture yellow"}], "claims": [{"date": "1820"}]}`+"\n")
+	doubtful := writeFile(t, "d.jsonl", `{"place": "NL", "findings": [{"material": "fixture yellow"}], "claims": [{"date": "1820"}]}`+"\n")
 	if _, _, code := execute(t, "survey", "--materials", fixture, doubtful); code != 1 {
 		t.Errorf("doubtful at --fail-on soft: exit %d, want 1", code)
 	}
 	if _, _, code := execute(t, "survey", "--materials", fixture, "--fail-on", "firm", doubtful); code != 0 {
 		t.Errorf("doubtful at --fail-on firm: exit %d, want 0", code)
 	}
-	bad := writeCase(t, "bad.jsonl", `{"place": "NL", "findings": [{"material": "fixture yellow"}], "claims": [{"date": "1840"}]}`+"\n{\n")
+	bad := writeFile(t, "bad.jsonl", `{"place": "NL", "findings": [{"material": "fixture yellow"}], "claims": [{"date": "1840"}]}`+"\n{\n")
 	if _, _, code := execute(t, "survey", "--materials", fixture, "--fail-on", "hard", bad); code != 1 {
 		t.Errorf("a record error: exit %d, want 1", code)
 	}
@@ -365,8 +367,8 @@ func TestSurveyExitStatus(t *testing.T) {
 		{"bad format", []string{"--format", "pdf", good}, "--format"},
 		{"bad input format", []string{"--input", "xml", good}, "--input"},
 		{"stdin twice", []string{"-", "-"}, "only once"},
-		{"no header", []string{writeCase(t, "h.csv", "1,Portrait,NL\n")}, "h.csv:1: the first row names none of the survey's columns"},
-		{"misspelt header", []string{writeCase(t, "m.csv", "id,matrials\n")}, `header column "matrials": did you mean "materials"?`},
+		{"no header", []string{writeFile(t, "h.csv", "1,Portrait,NL\n")}, "h.csv:1: the first row names none of the survey's columns"},
+		{"misspelt header", []string{writeFile(t, "m.csv", "id,matrials\n")}, `header column "matrials": did you mean "materials"?`},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
@@ -417,8 +419,8 @@ func TestSurveyParseOnly(t *testing.T) {
 }
 
 func TestSurveyFreeColumnsOfSeveralFiles(t *testing.T) {
-	a := writeCase(t, "a.csv", "id,materials,claim,place,shelf\na-1,fixture yellow,1840,NL,S1\n")
-	b := writeCase(t, "b.csv", "box,id,materials,claim,place\nB9,b-1,fixture yellow,1840,NL\n")
+	a := writeFile(t, "a.csv", "id,materials,claim,place,shelf\na-1,fixture yellow,1840,NL,S1\n")
+	b := writeFile(t, "b.csv", "box,id,materials,claim,place\nB9,b-1,fixture yellow,1840,NL\n")
 	out, errs, code := execute(t, "survey", "--materials", fixture, "--format", "csv", a, b)
 	if code != 0 {
 		t.Fatalf("exit %d: %s", code, errs)
@@ -436,7 +438,7 @@ func TestSurveyFreeColumnsOfSeveralFiles(t *testing.T) {
 }
 
 func TestSurveyEmptyInput(t *testing.T) {
-	p := writeCase(t, "empty.jsonl", "\n\n")
+	p := writeFile(t, "empty.jsonl", "\n\n")
 	out, errs, code := execute(t, "survey", "--format", "csv", p)
 	if code != 0 || !strings.HasPrefix(out, "id,file,line,status,") || strings.Count(out, "\n") != 1 || !strings.Contains(errs, "survey: 0 records") {
 		t.Errorf("exit %d, stdout %q, stderr %q", code, out, errs)
@@ -469,7 +471,7 @@ func TestSurveyResultIsCheckJSON(t *testing.T) {
 	// the sensitivity re-solves check makes) gives the same document, but
 	// for the file it names and the id the survey record carries.
 	caseJSON := `{"title": "Blue box", "place": "NL", "findings": [{"id": "f-blue", "material": "fixture blue"}, {"material": "fixture yellow", "confidence": "probable"}], "claims": [{"date": "1700/1720"}]}`
-	c := writeCase(t, "case.yaml", caseJSON+"\n")
+	c := writeFile(t, "case.yaml", caseJSON+"\n")
 	want, errs, code := execute(t, "check", "--materials", fixture, "--format", "json", c)
 	if code == 2 {
 		t.Fatalf("check: %s", errs)

@@ -87,11 +87,6 @@ type windowRow struct {
 	EarliestSteps, LatestSteps []string
 }
 
-// evidenceRow is one bound of one piece of evidence.
-type evidenceRow struct {
-	ID, Event, What, Method, Confidence, Bound, Tier, Source string
-}
-
 // conflictView is a minimal conflict and its steps.
 type conflictView struct {
 	Tier, Evidence string
@@ -143,41 +138,11 @@ func newHTMLView(r *constraint.Result) *htmlView {
 		cv := claimView{ID: c.ID, Event: c.Event, Date: c.DateText, By: c.By, Verdict: string(c.Verdict),
 			Sentence: claimText(c, r.Events), Deciding: strings.Join(c.Deciding, ", ")}
 		for t := range cv.Surviving {
-			if c.Verdict == constraint.Undetermined || network.Tier(t) > c.JudgedAt {
-				cv.Surviving[t] = "not judged"
-			} else {
-				cv.Surviving[t] = spansText(c.Surviving[t])
-			}
+			cv.Surviving[t] = survivingText(c, network.Tier(t))
 		}
 		v.Claims = append(v.Claims, cv)
 	}
-	for _, e := range r.Evidence {
-		method := e.Method
-		if e.Sample != "" {
-			method += " (" + e.Sample + ")"
-		}
-		if len(e.Bounds) == 0 {
-			none := "none"
-			if e.Unlisted {
-				none = "none: not in the dataset"
-			}
-			v.Evidence = append(v.Evidence, evidenceRow{ID: e.ID, Event: e.Event, What: e.What, Method: method, Confidence: e.Confidence, Bound: none, Source: e.Source})
-			continue
-		}
-		for _, b := range e.Bounds {
-			row := evidenceRow{ID: e.ID, Event: e.Event, What: e.What, Method: method, Confidence: e.Confidence,
-				Bound: b.Side + " " + wording.Bound(b.Day, b.Side == "not after"), Tier: wording.Tier(b.Tier), Source: e.Source}
-			if b.Milestone != "" {
-				row.What = b.MaterialName
-				row.Bound = fmt.Sprintf("%s %s (%s)", b.Side, wording.Bound(b.Day, b.Side == "not after"), b.Milestone)
-				row.Source = b.Source
-			}
-			if e.Kind == "order" {
-				row.Bound = "after " + b.Date
-			}
-			v.Evidence = append(v.Evidence, row)
-		}
-	}
+	v.Evidence = evidenceRows(r, false)
 	for _, c := range r.Conflicts {
 		v.Conflicts = append(v.Conflicts, conflictView{Tier: wording.Tier(c.Tier), Evidence: strings.Join(c.Evidence, ", "), Steps: stepTexts(c.Steps)})
 	}

@@ -76,11 +76,7 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 		for _, c := range r.Claims {
 			var surv [3]string
 			for t := range surv {
-				if c.Verdict == constraint.Undetermined || network.Tier(t) > c.JudgedAt {
-					surv[t] = "not judged"
-				} else {
-					surv[t] = spansText(c.Surviving[t])
-				}
+				surv[t] = survivingText(c, network.Tier(t))
 			}
 			fmt.Fprintf(ew, "| %s | %s | %s | **%s** | %s | %s | %s | %s |\n", mdEscape(c.ID), mdEscape(c.Event), mdEscape(c.DateText),
 				c.Verdict, surv[0], surv[1], surv[2], mdEscape(strings.Join(c.Deciding, ", ")))
@@ -92,35 +88,14 @@ func Markdown(w io.Writer, r *constraint.Result) error {
 	fmt.Fprintln(ew)
 	fmt.Fprintln(ew, "| Evidence | Event | Material or record | Method (sample) | Confidence | Bound | Tier | Source |")
 	fmt.Fprintln(ew, "|---|---|---|---|---|---|---|---|")
-	for _, e := range r.Evidence {
-		method := e.Method
-		if e.Sample != "" {
-			method += " (" + e.Sample + ")"
-		}
-		if len(e.Bounds) == 0 {
-			none := "none"
-			if e.Unlisted {
-				none = "none: not in the dataset"
-			}
-			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(e.What),
-				mdEscape(method), e.Confidence, none, mdEscape(e.Source))
+	for _, row := range evidenceRows(r, true) {
+		if row.Tier == "" { // evidence that bounds nothing
+			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | | %s |\n", mdEscape(row.ID), mdEscape(row.Event), mdEscape(row.What),
+				mdEscape(row.Method), row.Confidence, row.Bound, mdEscape(row.Source))
 			continue
 		}
-		for _, b := range e.Bounds {
-			what := e.What
-			bnd := b.Side + " " + wording.BoundAt(b.Day, b.Side == "not after", b.Precision)
-			src := e.Source
-			if b.Milestone != "" {
-				what = b.MaterialName
-				bnd = fmt.Sprintf("%s %s (%s)", b.Side, wording.BoundAt(b.Day, b.Side == "not after", b.Precision), b.Milestone)
-				src = b.Source
-			}
-			if e.Kind == "order" {
-				bnd = "after " + b.Date
-			}
-			fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", mdEscape(e.ID), mdEscape(e.Event), mdEscape(what),
-				mdEscape(method), e.Confidence, mdEscape(bnd), wording.Tier(b.Tier), mdEscape(src))
-		}
+		fmt.Fprintf(ew, "| %s | %s | %s | %s | %s | %s | %s | %s |\n", mdEscape(row.ID), mdEscape(row.Event), mdEscape(row.What),
+			mdEscape(row.Method), row.Confidence, mdEscape(row.Bound), row.Tier, mdEscape(row.Source))
 	}
 	fmt.Fprintln(ew)
 

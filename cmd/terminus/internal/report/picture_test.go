@@ -2,7 +2,6 @@ package report
 
 import (
 	"bytes"
-	"context"
 	"encoding/json"
 	"flag"
 	"math"
@@ -13,9 +12,9 @@ import (
 	"strings"
 	"testing"
 
+	"terminus/cmd/terminus/internal/golden"
 	"terminus/cmd/terminus/internal/nodetest"
 	"terminus/constraint"
-	"terminus/constraint/casefile"
 	"terminus/constraint/input"
 	"terminus/materials"
 )
@@ -44,50 +43,17 @@ func builtinResult(t testing.TB, path string) *constraint.Result {
 	if err != nil {
 		t.Fatal(err)
 	}
-	rel, _ := filepath.Rel(repoRoot, path)
-	c, err := casefile.Parse(filepath.ToSlash(rel), data, input.FormatOf(path), input.Limits{})
-	if err != nil {
-		t.Fatal(err)
-	}
 	ds, err := materials.Builtin()
 	if err != nil {
 		t.Fatal(err)
 	}
-	r, err := constraint.Analyze(context.Background(), c, ds, constraint.Options{})
-	if err != nil {
-		t.Fatal(err)
-	}
-	return r
+	rel, _ := filepath.Rel(repoRoot, path)
+	return analyze(t, filepath.ToSlash(rel), data, input.FormatOf(path), ds)
 }
-
-var digests = regexp.MustCompile(`(sha256[":\s]+)[0-9a-f]{12,64}…?`)
 
 func checkPictureGolden(t *testing.T, name, got string) {
 	t.Helper()
-	path := filepath.Join(repoRoot, "testdata", "golden", "picture", name)
-	got = digests.ReplaceAllString(got, "${1}…")
-	if *update {
-		if err := os.MkdirAll(filepath.Dir(path), 0o755); err != nil {
-			t.Fatal(err)
-		}
-		if err := os.WriteFile(path, []byte(got), 0o644); err != nil {
-			t.Fatal(err)
-		}
-		return
-	}
-	want, err := os.ReadFile(path)
-	if err != nil {
-		t.Fatalf("no golden file: %v (go test ./cmd/terminus/internal/report -update writes it)", err)
-	}
-	if string(want) != got {
-		wl, gl := strings.Split(string(want), "\n"), strings.Split(got, "\n")
-		for i := 0; i < len(wl) && i < len(gl); i++ {
-			if wl[i] != gl[i] {
-				t.Fatalf("%s differs (-update rewrites it) first at line %d:\nwant %s\ngot  %s", path, i+1, wl[i], gl[i])
-			}
-		}
-		t.Fatalf("%s differs in length: %d lines, want %d (-update rewrites it)", path, len(gl), len(wl))
-	}
+	golden.Check(t, filepath.Join(repoRoot, "testdata", "golden", "picture", name), got, *update)
 }
 
 func TestPictureGolden(t *testing.T) {

@@ -22,7 +22,13 @@ func result(t *testing.T, text string) *constraint.Result {
 	if err != nil {
 		t.Fatal(err)
 	}
-	c, err := casefile.Parse("case.yaml", []byte(text), input.YAML, input.Limits{})
+	return analyze(t, "case.yaml", []byte(text), input.YAML, ds)
+}
+
+// analyze reads a case file's text and analyzes it against ds.
+func analyze(t testing.TB, name string, data []byte, f input.Format, ds *materials.Dataset) *constraint.Result {
+	t.Helper()
+	c, err := casefile.Parse(name, data, f, input.Limits{})
 	if err != nil {
 		t.Fatal(err)
 	}

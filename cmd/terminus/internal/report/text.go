@@ -89,14 +89,7 @@ func consistencyLine(r *constraint.Result) string {
 	if len(bad) == 0 {
 		return "The evidence agrees at every tier (hard, firm, soft)."
 	}
-	return fmt.Sprintf("The evidence conflicts at the %s tier%s: see Conflicts.", strings.Join(bad, " and "), plural(len(bad)))
-}
-
-func plural(n int) string {
-	if n == 1 {
-		return ""
-	}
-	return "s"
+	return fmt.Sprintf("The evidence conflicts at the %s %s: see Conflicts.", strings.Join(bad, " and "), wording.Plural(len(bad), "tier", "tiers"))
 }
 
 func datasetLine(r *constraint.Result) string {

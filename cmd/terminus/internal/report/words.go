@@ -103,3 +103,61 @@ func claimText(c constraint.ClaimResult, events []constraint.EventResult) string
 	lead, rest := claimSentences(c, events)
 	return lead + " " + string(c.Verdict) + ". " + rest
 }
+
+// survivingText says what survives of a claim at tier t: its spans, or
+// "not judged" above the tier that judged it and for an undetermined claim.
+func survivingText(c constraint.ClaimResult, t network.Tier) string {
+	if c.Verdict == constraint.Undetermined || t > c.JudgedAt {
+		return "not judged"
+	}
+	return spansText(c.Surviving[t])
+}
+
+// evidenceRow is one bound of one piece of evidence, in words; Tier is ""
+// in the one row of evidence that bounds nothing.
+type evidenceRow struct {
+	ID, Event, What, Method, Confidence, Bound, Tier, Source string
+}
+
+// evidenceRows lays out the evidence table of the Markdown and HTML
+// reports: a row for each bound of each piece of evidence (a material's
+// bound names the material, its milestone and its source; an order's names
+// what it comes after), or one row "none" for evidence that bounds
+// nothing. atPrecision writes each bound at the precision of its evidence
+// (the Markdown report); otherwise it reads as its day does.
+func evidenceRows(r *constraint.Result, atPrecision bool) []evidenceRow {
+	var rows []evidenceRow
+	for _, e := range r.Evidence {
+		method := e.Method
+		if e.Sample != "" {
+			method += " (" + e.Sample + ")"
+		}
+		if len(e.Bounds) == 0 {
+			none := "none"
+			if e.Unlisted {
+				none = "none: not in the dataset"
+			}
+			rows = append(rows, evidenceRow{ID: e.ID, Event: e.Event, What: e.What, Method: method, Confidence: e.Confidence, Bound: none, Source: e.Source})
+			continue
+		}
+		for _, b := range e.Bounds {
+			upper := b.Side == "not after"
+			bound := wording.Bound(b.Day, upper)
+			if atPrecision {
+				bound = wording.BoundAt(b.Day, upper, b.Precision)
+			}
+			row := evidenceRow{ID: e.ID, Event: e.Event, What: e.What, Method: method, Confidence: e.Confidence,
+				Bound: b.Side + " " + bound, Tier: wording.Tier(b.Tier), Source: e.Source}
+			if b.Milestone != "" {
+				row.What = b.MaterialName
+				row.Bound = fmt.Sprintf("%s %s (%s)", b.Side, bound, b.Milestone)
+				row.Source = b.Source
+			}
+			if e.Kind == "order" {
+				row.Bound = "after " + b.Date
+			}
+			rows = append(rows, row)
+		}
+	}
+	return rows
+}

@@ -5,6 +5,7 @@ import (
 	"encoding/json"
 	"errors"
 	"fmt"
+	"iter"
 	"strconv"
 	"strings"
 
@@ -182,11 +183,7 @@ func parseCSV(r rawRecord, p parsed) (parsed, error) {
 	}
 	if f, ok := get(colMaterials); ok {
 		n := 0
-		for _, entry := range strings.Split(f.Text, ";") {
-			entry = strings.TrimSpace(entry)
-			if entry == "" {
-				continue
-			}
+		for entry := range listEntries(f.Text) {
 			n++
 			pos := constraint.Pos{Line: f.Line, Column: f.Column}
 			fi := constraint.Finding{ID: fmt.Sprintf("finding-%d", n), Confidence: constraint.Certain, Pos: pos}
@@ -208,11 +205,7 @@ func parseCSV(r rawRecord, p parsed) (parsed, error) {
 	}
 	if f, ok := get(colClaim); ok {
 		n := 0
-		for _, s := range strings.Split(f.Text, ";") {
-			s = strings.TrimSpace(s)
-			if s == "" {
-				continue
-			}
+		for s := range listEntries(f.Text) {
 			n++
 			d, err := csvDate(name, f, "claim", s)
 			if err != nil {
@@ -240,6 +233,18 @@ func parseCSV(r rawRecord, p parsed) (parsed, error) {
 	}
 	p.c = c
 	return p, nil
+}
+
+// listEntries yields the entries of a column that holds a list: split at
+// ';', trimmed, the empty ones left out.
+func listEntries(text string) iter.Seq[string] {
+	return func(yield func(string) bool) {
+		for e := range strings.SplitSeq(text, ";") {
+			if e = strings.TrimSpace(e); e != "" && !yield(e) {
+				return
+			}
+		}
+	}
 }
 
 func csvDate(name string, f csvField, col, s string) (date.Date, error) {

@@ -10,6 +10,7 @@ import (
 	"strings"
 
 	"terminus/constraint"
+	"terminus/constraint/wording"
 )
 
 // spill holds the rows of one section: in memory up to a limit, then in a
@@ -236,7 +237,7 @@ func (r *ReportWriter) Close(c Counts) error {
 }
 
 func (r *ReportWriter) closeMarkdown(w *bufio.Writer, c Counts) error {
-	fmt.Fprintf(w, "# Survey of %d %s\n\n", c.Records, plural(c.Records, "record", "records"))
+	fmt.Fprintf(w, "# Survey of %d %s\n\n", c.Records, wording.Plural(c.Records, "record", "records"))
 	if len(r.info.Inputs) > 0 {
 		fmt.Fprintf(w, "Read from %s. ", mdCell(strings.Join(r.info.Inputs, ", ")))
 	}
@@ -252,16 +253,16 @@ func (r *ReportWriter) closeMarkdown(w *bufio.Writer, c Counts) error {
 	fmt.Fprintf(w, "| **total** | %d |\n\n", c.Records)
 	fmt.Fprintf(w, "%s\n\n", c.AccountingSentence())
 	if c.Conflicting > 0 {
-		fmt.Fprintf(w, "The evidence of %d %s conflicts at some tier; see the deciding column.\n\n", c.Conflicting, plural(c.Conflicting, "record", "records"))
+		fmt.Fprintf(w, "The evidence of %d %s conflicts at some tier; see the deciding column.\n\n", c.Conflicting, wording.Plural(c.Conflicting, "record", "records"))
 	}
 	if c.Unbounded > 0 {
-		fmt.Fprintf(w, "No finding or record bounds the date of %d %s: a verdict of consistent there only says that nothing speaks against the claim.\n\n", c.Unbounded, plural(c.Unbounded, "record", "records"))
+		fmt.Fprintf(w, "No finding or record bounds the date of %d %s: a verdict of consistent there only says that nothing speaks against the claim.\n\n", c.Unbounded, wording.Plural(c.Unbounded, "record", "records"))
 	}
 	if c.Unlisted > 0 {
-		fmt.Fprintf(w, "%d %s of %d %s name materials not in the dataset, which bound nothing.\n\n", c.Unlisted, plural(c.Unlisted, "finding", "findings"), c.UnlistedRecords, plural(c.UnlistedRecords, "record", "records"))
+		fmt.Fprintf(w, "%d %s of %d %s name materials not in the dataset, which bound nothing.\n\n", c.Unlisted, wording.Plural(c.Unlisted, "finding", "findings"), c.UnlistedRecords, wording.Plural(c.UnlistedRecords, "record", "records"))
 	}
 	if r.info.FailOn != "" {
-		fmt.Fprintf(w, "%d %s fail at the %s tier or a stronger one, or could not be checked.\n\n", c.Failing, plural(c.Failing, "record", "records"), r.info.FailOn)
+		fmt.Fprintf(w, "%d %s fail at the %s tier or a stronger one, or could not be checked.\n\n", c.Failing, wording.Plural(c.Failing, "record", "records"), r.info.FailOn)
 	}
 	for _, s := range Statuses() {
 		sec := r.sections[s]

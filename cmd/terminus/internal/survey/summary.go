@@ -252,15 +252,15 @@ func (c Counts) Accounting() string {
 	if n := c.ByStatus[StatusParsed]; n > 0 && n == c.Judged() {
 		judged = "read"
 	}
-	out := fmt.Sprintf("%d %s = ", c.Lines, plural(c.Lines, "line", "lines"))
+	out := fmt.Sprintf("%d %s = ", c.Lines, wording.Plural(c.Lines, "line", "lines"))
 	if c.HeaderLines > 0 {
-		out += fmt.Sprintf("%d %s + ", c.HeaderLines, plural(c.HeaderLines, "header", "headers"))
+		out += fmt.Sprintf("%d %s + ", c.HeaderLines, wording.Plural(c.HeaderLines, "header", "headers"))
 	}
 	if c.BlankLines > 0 {
 		out += fmt.Sprintf("%d blank + ", c.BlankLines)
 	}
-	return out + fmt.Sprintf("%d in records; %d %s = %d %s + %d %s", c.RecordLines, c.Records, plural(c.Records, "record", "records"),
-		c.Judged(), judged, c.Errors(), plural(c.Errors(), "error", "errors"))
+	return out + fmt.Sprintf("%d in records; %d %s = %d %s + %d %s", c.RecordLines, c.Records, wording.Plural(c.Records, "record", "records"),
+		c.Judged(), judged, c.Errors(), wording.Plural(c.Errors(), "error", "errors"))
 }
 
 // String gives the counts in one line for people: "120 records: 100
@@ -271,12 +271,12 @@ func (c Counts) String() string {
 		if n := c.ByStatus[s]; n > 0 {
 			name := string(s)
 			if s == StatusError {
-				name = plural(n, "error", "errors")
+				name = wording.Plural(n, "error", "errors")
 			}
 			parts = append(parts, fmt.Sprintf("%d %s", n, name))
 		}
 	}
-	out := fmt.Sprintf("%d %s", c.Records, plural(c.Records, "record", "records"))
+	out := fmt.Sprintf("%d %s", c.Records, wording.Plural(c.Records, "record", "records"))
 	if len(parts) > 0 {
 		out += ": " + strings.Join(parts, ", ")
 	}
@@ -284,11 +284,4 @@ func (c Counts) String() string {
 		out += fmt.Sprintf("; the evidence conflicts in %d", c.Conflicting)
 	}
 	return out
-}
-
-func plural(n int, one, many string) string {
-	if n == 1 {
-		return one
-	}
-	return many
 }

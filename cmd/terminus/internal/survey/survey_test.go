@@ -328,22 +328,32 @@ func TestProgress(t *testing.T) {
 // the summary reports say what its "consistent" means.
 func TestUnboundedRecordsAreCounted(t *testing.T) {
 	const text = "id,claim,materials,not_after\nu-1,1850,,\nb-1,1850,smalt,\nb-2,1850,,1900\n"
+	summaries(t, "c.csv", text, func(format string, c Counts, out string) {
+		if c.Records != 3 || c.Unbounded != 1 {
+			t.Errorf("%s: %d records, %d unbounded; want 3 and 1 (u-1 only)", format, c.Records, c.Unbounded)
+		}
+		if !strings.Contains(out, "No finding or record bounds the date of 1 record") {
+			t.Errorf("%s: the report does not say which records nothing bounds:\n%s", format, out)
+		}
+	})
+}
+
+// summaries surveys text (as a file of that name) against the built-in
+// dataset once with the Markdown and once with the HTML summary writer,
+// and gives check each format's counts and output.
+func summaries(t *testing.T, name, text string, check func(format string, c Counts, out string)) {
+	t.Helper()
 	for _, format := range []string{"md", "html"} {
 		var out bytes.Buffer
 		var w Writer = NewMarkdownWriter(&out, ReportInfo{})
 		if format == "html" {
 			w = NewHTMLWriter(&out, ReportInfo{})
 		}
-		c, err := Run(context.Background(), []*Input{openText(t, "c.csv", text)}, w, Options{Dataset: builtin(t)})
+		c, err := Run(context.Background(), []*Input{openText(t, name, text)}, w, Options{Dataset: builtin(t)})
 		if err != nil {
 			t.Fatal(err)
 		}
-		if c.Records != 3 || c.Unbounded != 1 {
-			t.Errorf("%s: %d records, %d unbounded; want 3 and 1 (u-1 only)", format, c.Records, c.Unbounded)
-		}
-		if !strings.Contains(out.String(), "No finding or record bounds the date of 1 record") {
-			t.Errorf("%s: the report does not say which records nothing bounds:\n%s", format, out.String())
-		}
+		check(format, c, out.String())
 	}
 }
 
@@ -354,21 +364,12 @@ func TestUnlistedFindingsAreCounted(t *testing.T) {
 {"id":"b","claims":[{"date":"1850"}],"findings":[{"material":"x","unlisted":true},{"material":"y","unlisted":true}]}
 {"id":"c","claims":[{"date":"1850"}],"findings":[{"material":"smalt"}]}
 `
-	for _, format := range []string{"md", "html"} {
-		var out bytes.Buffer
-		var w Writer = NewMarkdownWriter(&out, ReportInfo{})
-		if format == "html" {
-			w = NewHTMLWriter(&out, ReportInfo{})
-		}
-		c, err := Run(context.Background(), []*Input{openText(t, "c.jsonl", text)}, w, Options{Dataset: builtin(t)})
-		if err != nil {
-			t.Fatal(err)
-		}
+	summaries(t, "c.jsonl", text, func(format string, c Counts, out string) {
 		if c.Unlisted != 3 || c.UnlistedRecords != 2 {
 			t.Errorf("%s: %d unlisted findings in %d records; want 3 in 2", format, c.Unlisted, c.UnlistedRecords)
 		}
-		if !strings.Contains(out.String(), "3 findings of 2 records name materials not in the dataset, which bound nothing.") {
-			t.Errorf("%s: the report does not count the unlisted findings:\n%s", format, out.String())
+		if !strings.Contains(out, "3 findings of 2 records name materials not in the dataset, which bound nothing.") {
+			t.Errorf("%s: the report does not count the unlisted findings:\n%s", format, out)
 		}
-	}
+	})
 }
