@@ -168,7 +168,7 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		if b != nil && len(cands) > 1 && cands[0].day != cands[len(cands)-1].day {
 			cl := make([]string, len(cands))
 			for i, c := range cands {
-				cl[i] = claimLabel(c.ms)
+				cl[i] = claimLabel(c.ms, c.day, upper)
 			}
 			b.disagreements = append(b.disagreements, Disagreement{
 				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl, Used: cl[pick],
@@ -263,11 +263,17 @@ func (a *analysis) claimRank(ms *materials.Milestone) int {
 
 // claimLabel names a claim in a list of disagreeing ones: its date and
 // source, and for an attestation what it is.
-func claimLabel(ms *materials.Milestone) string {
-	if ms.Kind == materials.KindAttested {
-		return ms.Date.String() + " (attested in " + ms.Object + "; " + ms.Source + ")"
+func claimLabel(ms *materials.Milestone, day date.Day, upper bool) string {
+	text := ms.Date.String()
+	if ms.Date.Approximate {
+		// An approximate date counts from its widened end, which may
+		// come before (or after) a plainer claim beside it: say so.
+		text += ", read as " + wording.YearText(day.Year()) + map[bool]string{false: " at the earliest", true: " at the latest"}[upper]
 	}
-	return ms.Date.String() + " (" + ms.Source + ")"
+	if ms.Kind == materials.KindAttested {
+		return text + " (attested in " + ms.Object + "; " + ms.Source + ")"
+	}
+	return text + " (" + ms.Source + ")"
 }
 
 // openEndNote says that a kind gives no bound because a claim is open on

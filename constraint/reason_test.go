@@ -4,6 +4,7 @@ import (
 	"context"
 	"errors"
 	"slices"
+	"strconv"
 	"strings"
 	"terminus/constraint"
 	"terminus/constraint/casefile"
@@ -547,5 +548,23 @@ claims:
 	}
 	if strings.Contains(c.Sentence, "all the evidence") || !strings.Contains(c.Sentence, "judged at the firm tier") {
 		t.Errorf("sentence %q", c.Sentence)
+	}
+}
+
+// TestDisagreementCirca: an approximate claim counts from its widened end,
+// which can come before a plainer claim written with an earlier year; the
+// list of claims says how each one was read, so that "the most
+// conservative" can be checked by eye. fixture red: made c. 1868 (fx-a) or
+// 1866 (fx-b).
+func TestDisagreementCirca(t *testing.T) {
+	r := analyze(t, "findings:\n  - {id: f, material: fixture red}\nclaims:\n  - {date: \"1900\"}\n")
+	if len(r.Disagreements) != 1 {
+		t.Fatalf("disagreements = %+v, want one", r.Disagreements)
+	}
+	d := r.Disagreements[0]
+	lo := r.Events[0].Windows[network.Hard].Earliest.Day
+	want := "c. 1868, read as " + strconv.FormatInt(lo.Year(), 10) + " at the earliest (fx-a)"
+	if lo.Year() >= 1866 || d.Used != want || !strings.Contains(d.Text, want+", 1866 (fx-b)") {
+		t.Errorf("hard lower bound %s; disagreement %+v, want it to use %q before 1866", lo.ISO(), d, want)
 	}
 }
