@@ -134,7 +134,7 @@ func TestMaterialsUsageErrors(t *testing.T) {
 		{[]string{"materials", "list", "--made-before", "soon"}, "--made-before", ""},
 		{[]string{"materials", "list", "--format", "xml"}, `unknown --format "xml"`, ""},
 		{[]string{"materials", "show", "prusian blue"}, `no material named "prusian blue"`, "did you mean 'Prussian blue'"},
-		{[]string{"materials", "show"}, "requires at least 1 arg", ""},
+		{[]string{"materials", "show"}, "terminus materials show needs a NAME", ""},
 		{[]string{"materials", "list", "--materials", "absent.yaml"}, "absent.yaml", ""},
 	} {
 		t.Run(strings.Join(tc.args, " "), func(t *testing.T) {

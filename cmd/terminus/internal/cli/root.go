@@ -99,5 +99,6 @@ func NewRootCmd(s IO) *cobra.Command {
 		NewSurveyCmd(s),
 		NewServeCmd(s),
 	)
+	ourArgs(root)
 	return root
 }

@@ -46,7 +46,7 @@ func TestServeUsage(t *testing.T) {
 	}{
 		{[]string{"serve", "--port", "70000"}, "--port 70000", "a port out of range"},
 		{[]string{"serve", "--listen", "my laptop"}, "--listen", "an address that is not one"},
-		{[]string{"serve", "extra"}, "unknown command", "serve takes no arguments"},
+		{[]string{"serve", "extra"}, "terminus serve takes no arguments", "serve takes no arguments"},
 	} {
 		_, errs, code := execute(t, tc.args...)
 		if code != 2 || !strings.Contains(errs, tc.want) {
