@@ -33,3 +33,27 @@ func TestArgsInOurWords(t *testing.T) {
 		})
 	}
 }
+
+// TestHelpFitsTerminal: every help page reads in an 80-column terminal;
+// only an example command line may run longer, as it must be copied whole.
+func TestHelpFitsTerminal(t *testing.T) {
+	root := NewRootCmd(IO{})
+	pages := [][]string{{"--help"}}
+	for _, c := range root.Commands() {
+		pages = append(pages, []string{c.Name(), "--help"})
+		for _, sub := range c.Commands() {
+			pages = append(pages, []string{c.Name(), sub.Name(), "--help"})
+		}
+	}
+	for _, args := range pages {
+		out, _, code := execute(t, args...)
+		if code != 0 || out == "" {
+			t.Errorf("%v: exit %d, %d bytes", args, code, len(out))
+		}
+		for i, line := range strings.Split(out, "\n") {
+			if n := len([]rune(line)); n > 80 && !strings.HasPrefix(line, "  terminus ") {
+				t.Errorf("terminus %s: line %d has %d columns: %q", strings.Join(args, " "), i+1, n, line)
+			}
+		}
+	}
+}

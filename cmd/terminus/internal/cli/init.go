@@ -71,7 +71,7 @@ func NewInitCmd(s IO) *cobra.Command {
 	cmd := &cobra.Command{
 		Use:   "init [FILE]",
 		Short: "Write a commented starter case file",
-		Long:  "Init writes a commented starter case file to FILE, or to standard output without one.\nIt does not overwrite a file unless --force is given.",
+		Long:  "Init writes a commented starter case file to FILE, or to standard output\nwithout one. It does not overwrite a file unless --force is given.",
 		Args:  cobra.MaximumNArgs(1),
 		RunE: func(cmd *cobra.Command, args []string) error {
 			if len(args) == 0 {

@@ -157,7 +157,7 @@ func newMaterialsListCmd(s IO, load datasetLoader) *cobra.Command {
 	var format string
 	cmd := &cobra.Command{
 		Use:   "list",
-		Short: "List the materials, filtered by class, origin, date of making or place",
+		Short: "List the materials, by class, origin, date of making or place",
 		Long: `List the materials of the dataset.
 
 --made-before Y keeps materials whose earliest made claim begins before Y;
@@ -504,7 +504,7 @@ func newMaterialsSourcesCmd(s IO, load datasetLoader) *cobra.Command {
 	var format string
 	cmd := &cobra.Command{
 		Use:   "sources",
-		Short: "List the bibliography: every source with how many milestones cite it",
+		Short: "List the bibliography: each source and how many milestones cite it",
 		Args:  cobra.NoArgs,
 		RunE: func(c *cobra.Command, _ []string) error {
 			ds, err := load()
@@ -554,14 +554,15 @@ func newMaterialsSourcesCmd(s IO, load datasetLoader) *cobra.Command {
 func newMaterialsLintCmd(s IO, overlays *[]string) *cobra.Command {
 	return &cobra.Command{
 		Use:   "lint FILE...",
-		Short: "Check materials files: schema, dates, sources and the order of milestones",
+		Short: "Check materials files: schema, dates, sources, order of milestones",
 		Long: `Check materials files as one set: the schema (unknown keys, bad dates,
 unknown places, kinds and bases), every milestone citing a source that
 exists (in the files, the built-in bibliography or a --materials file),
-every source of the files cited, no name shared by two materials, and milestones in a possible
-order (sold not before made, withdrawn not before sold). Prints each
-problem with its file and line, then the counts of documented and
-from-memory milestones. Exit status 1 when there are problems.`,
+every source of the files cited, no name shared by two materials, and
+milestones in a possible order (sold not before made, withdrawn not
+before sold). Prints each problem with its file and line, then the counts
+of documented and from-memory milestones. Exit status 1 when there are
+problems.`,
 		Example: `  terminus materials lint examples/own-materials.yaml
   terminus materials lint materials/data/*.yaml`,
 		Args: cobra.MinimumNArgs(1),
@@ -608,7 +609,7 @@ func newMaterialsStatsCmd(s IO, load datasetLoader) *cobra.Command {
 	var format string
 	cmd := &cobra.Command{
 		Use:   "stats",
-		Short: "Count materials, milestones, sources and how well they are documented",
+		Short: "Count materials, milestones, sources and how well documented",
 		Args:  cobra.NoArgs,
 		RunE: func(c *cobra.Command, _ []string) error {
 			ds, err := load()

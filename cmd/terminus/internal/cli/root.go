@@ -7,6 +7,7 @@ import (
 	"errors"
 	"fmt"
 	"io"
+	"strings"
 
 	"github.com/spf13/cobra"
 )
@@ -100,5 +101,7 @@ func NewRootCmd(s IO) *cobra.Command {
 		NewServeCmd(s),
 	)
 	ourArgs(root)
+	// Flag descriptions wrap to a terminal's 80 columns.
+	root.SetUsageTemplate(strings.ReplaceAll(root.UsageTemplate(), "FlagUsages", "FlagUsagesWrapped 80"))
 	return root
 }

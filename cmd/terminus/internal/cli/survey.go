@@ -81,7 +81,7 @@ func NewSurveyCmd(s IO) *cobra.Command {
 	)
 	cmd := &cobra.Command{
 		Use:   "survey FILE...",
-		Short: "Check a whole collection in one pass: JSON Lines or CSV records in, one result per record out",
+		Short: "Date a whole collection: one result for each record of a CSV or JSON Lines",
 		Long: `Survey checks every record of one or more collection files, as check does
 for one case, on every core, and writes one output record per input record in
 input order. "-" reads standard input.
