@@ -81,7 +81,7 @@ func NewSurveyCmd(s IO) *cobra.Command {
 	)
 	cmd := &cobra.Command{
 		Use:   "survey FILE...",
-		Short: "Date a whole collection: one result for each record of a CSV or JSON Lines",
+		Short: "Date a collection: one result for each CSV or JSON Lines record",
 		Long: `Survey checks every record of one or more collection files, as check does
 for one case, on every core, and writes one output record per input record in
 input order. "-" reads standard input.
