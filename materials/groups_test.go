@@ -75,6 +75,7 @@ var groupRows = []struct {
 	{"naphthol AS pigments", []string{"naphthol-red-f3rk", "naphthol-as-red"}, "as naphthol red"},
 	{"fustic", []string{"young-fustic", "old-fustic"}, "the name passed from the European smoke tree to the American mulberry wood"},
 	{"rhodamine", []string{"rhodamine-b", "rhodamine-6g"}, "both rhodamines"},
+	{"藤黄", []string{"gamboge"}, "gamboge in Chinese (téng huáng); not 雌黄, which is orpiment in Chinese and gamboge in Japanese, so no one name for it"},
 	{"Novoperm", []string{"arylide-yellow-fgl", "diarylide-yellow-hr", "naphthol-red-f3rk", "benzimidazolone-pigments"}, "a maker's range name across several pigment classes"},
 }
 
