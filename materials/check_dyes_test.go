@@ -190,7 +190,7 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"fuchsine", materials.KindSold, "", "1859-04-08", "SCF, À propos de la fuchsine"},
 		// German Wikipedia, "François-Emmanuel Verguin": Basel fuchsine from 1859, German firms from 1860.
 		{"fuchsine", materials.KindArrived, "CH", "1859", "de.wikipedia, Verguin"},
-		{"fuchsine", materials.KindArrived, "DE", "1860", "de.wikipedia, Verguin"},
+		{"fuchsine", materials.KindArrived, "DE", "../1860", "de.wikipedia, Verguin"},
 		// Tamburini et al., Heritage Science 8 (2020), abstract: four dyes in 19th-century Central Asian ikats.
 		{"fuchsine", materials.KindArrived, "143", "../1900", "Tamburini et al. 2020, abstract"},
 		{"methyl-violet", materials.KindArrived, "143", "../1900", "Tamburini et al. 2020, abstract"},
@@ -231,14 +231,14 @@ func TestDyesAgainstSources(t *testing.T) {
 		{"crystal-violet", materials.KindArrived, "MM", "../1910", "Tamburini et al. 2023, Karen garments"},
 		// Qingdao City Gazetteer, vol. 33, dyes: Weixin Chemical Works, sulphur dye from September 1919, methyl violet after 1922.
 		{"sulphur-black-t", materials.KindArrived, "CN", "1919-09", "Qingdao City Gazetteer, vol. 33"},
-		{"methyl-violet", materials.KindArrived, "CN", "1922", "Qingdao City Gazetteer, vol. 33"},
+		{"methyl-violet", materials.KindArrived, "CN", "../1922", "Qingdao City Gazetteer, vol. 33"},
 		// Shanghai Dyestuffs 2013 (1), abstract: the 80th anniversary of China's first dye, Sulphur Black 1.
 		{"sulphur-black-t", materials.KindArrived, "CN", "../1933", "Shanghai Dyestuffs 2013, abstract"},
 		// Heibonsha World Encyclopedia, 染料: sulphur black in Okayama from 1914; alizarin red at Miike about then.
-		{"sulphur-black-t", materials.KindArrived, "JP", "1914", "Heibonsha, 染料"},
-		{"synthetic-alizarin", materials.KindArrived, "JP", "1914~", "Heibonsha, 染料"},
+		{"sulphur-black-t", materials.KindArrived, "JP", "../1914", "Heibonsha, 染料"},
+		{"synthetic-alizarin", materials.KindArrived, "JP", "../1914~", "Heibonsha, 染料"},
 		// National Museum of Nature and Science, record 904990630001: Miike indigo in full production from 1933.
-		{"synthetic-indigo", materials.KindArrived, "JP", "1933", "Kahaku 904990630001"},
+		{"synthetic-indigo", materials.KindArrived, "JP", "../1933", "Kahaku 904990630001"},
 		// Tariff Commission, Report on the Dyestuff Industry (1954): sulphur black made in India by then.
 		{"sulphur-black-t", materials.KindArrived, "IN", "../1954", "Tariff Commission 1954"},
 		// Routledge chapter abstract on Uşak: anilines in use before the early 1870s.

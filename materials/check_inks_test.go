@@ -133,7 +133,7 @@ func TestInksAgainstSources(t *testing.T) {
 		// Wikipedia, Thermal paper: Texas Instruments' Silent 700 terminal, on the market in 1969, was the first thermal print system on thermal paper.
 		{"thermal-paper", materials.KindSold, "", "1969", "Wikipedia, Thermal paper"},
 		// Wikipedia, Thermal paper: local manufacture: Ricoh, Jujo and Kanzaki made dye-based thermal paper in the 1970s and early 1980s.
-		{"thermal-paper", materials.KindArrived, "JP", "197X", "Wikipedia, Thermal paper"},
+		{"thermal-paper", materials.KindArrived, "JP", "../197X", "Wikipedia, Thermal paper"},
 		// From memory, not read here: Wikipedia, Thermal paper: phenolic developers such as bisphenol A belong to the dye chemistry of the first thermal papers (recalled, not read in the history section).
 		{"bpa-thermal-paper", materials.KindMade, "", "196X", "Wikipedia, Thermal paper (from memory)"},
 		// INERIS 2020: thermal paper with 0.02 % or more bisphenol A by weight may not be placed on the European market from 2 January 2020.
@@ -183,7 +183,7 @@ func TestInksAgainstSources(t *testing.T) {
 		// HNOC, Collodion printing-out paper: limited commercial success until the Obernetter family manufactured it in the mid-1880s.
 		{"collodion-printing-out-paper", materials.KindSold, "", "188X", "HNOC, Collodion printing-out paper"},
 		// The History of Photography, ch. 29: local manufacture: Obernetter, Munich.
-		{"collodion-printing-out-paper", materials.KindArrived, "DE", "1868", "The History of Photography, ch. 29"},
+		{"collodion-printing-out-paper", materials.KindArrived, "DE", "../1868", "The History of Photography, ch. 29"},
 		// HNOC, Collodion printing-out paper: dated print catalogued as collodion printing-out paper by the collection.
 		{"collodion-printing-out-paper", materials.KindAttested, "US", "1895", "HNOC, Collodion printing-out paper"},
 		// Graphics Atlas, Gelatin POP: invented by Sir William Abney in 1882.
@@ -195,7 +195,7 @@ func TestInksAgainstSources(t *testing.T) {
 		// Graphics Atlas, Gelatin POP: commercialised by several companies from 1884; in common use 1885-1910.
 		{"gelatin-printing-out-paper", materials.KindSold, "", "1884", "Graphics Atlas, Gelatin POP"},
 		// ARCP 2015, aristotype: local manufacture: the Lumière brothers' Aristo paper from 1892.
-		{"gelatin-printing-out-paper", materials.KindArrived, "FR", "1892", "ARCP 2015, aristotype"},
+		{"gelatin-printing-out-paper", materials.KindArrived, "FR", "../1892", "ARCP 2015, aristotype"},
 		// HNOC, Gelatin printing-out paper: catalogued as gelatin printing-out paper by the collection.
 		{"gelatin-printing-out-paper", materials.KindAttested, "US", "1888/1895", "HNOC, Gelatin printing-out paper"},
 		// The History of Photography, ch. 29: invented and first produced in 1873 by Peter Mawdsley of the Liverpool Dry Plate and Photographic Printing Company.
@@ -207,7 +207,7 @@ func TestInksAgainstSources(t *testing.T) {
 		// The History of Photography, ch. 29: local manufacture: Liverpool.
 		{"gelatin-silver-developing-out-paper", materials.KindArrived, "GB", "1873", "The History of Photography, ch. 29"},
 		// Hannavy 2008, p. 1053: local manufacture: gelatine silver chloride paper, described by Eder and Pizzighelli in 1881, made on a large scale by Dr Just in Vienna from late 1882.
-		{"gelatin-silver-developing-out-paper", materials.KindArrived, "AT", "1882", "Hannavy 2008, p. 1053"},
+		{"gelatin-silver-developing-out-paper", materials.KindArrived, "AT", "../1882", "Hannavy 2008, p. 1053"},
 		// Wikipedia, James Ambrose Cutting: black-backed collodion positives reported made by Frederick Scott Archer at least as early as 1852.
 		{"ambrotype", materials.KindMade, "", "1852", "Wikipedia, James Ambrose Cutting"},
 		// Wikipedia, James Ambrose Cutting: Cutting's three US patents of 1854 (11,213, 11,266 and 11,267) on collodion positives on glass.

@@ -24,7 +24,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Degussa, Iron Blue Pigments: Woodward's account of its manufacture, 1726.
 		{"prussian-blue", materials.KindArrived, "GB", "1726", "Degussa, Iron Blue Pigments"},
 		// Wikipedia, "Prussian blue", older revision (liquisearch), History: the recipe published by John Woodward in 1724.
-		{"prussian-blue", materials.KindArrived, "GB", "1724", "Wikipedia, Prussian blue, History (older revision)"},
+		{"prussian-blue", materials.KindArrived, "GB", "../1724", "Wikipedia, Prussian blue, History (older revision)"},
 		// Tokyo National Research Institute for Cultural Properties, Gungyo-zu page: among the earliest uses in Japanese painting (Jakuchū, 1716-1800).
 		{"prussian-blue", materials.KindArrived, "JP", "1716/1800", "Tobunken, Dōshoku sai-e, Gungyo-zu"},
 		// AMICO catalogue record, Hokusai, The Kirifuri Waterfall: Prussian blue introduced into Japan in 1825.
@@ -139,7 +139,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Grace's Guide, "John Bryson Orr": experiments 1861, bulk 1868, Glasgow factory 1872.
 		{"lithopone", materials.KindMade, "", "1861", "Grace's Guide, John Bryson Orr"},
 		{"lithopone", materials.KindSold, "", "1868", "Grace's Guide, John Bryson Orr"},
-		{"lithopone", materials.KindArrived, "GB", "1872", "Grace's Guide, John Bryson Orr"},
+		{"lithopone", materials.KindArrived, "GB", "../1872", "Grace's Guide, John Bryson Orr"},
 		// Li et al., Heritage Science 2014, abstract: lithopone, chrome yellow and Mars red on the Jokhang wall paintings, after the 1850s.
 		{"lithopone", materials.KindArrived, "CN", "1850/1910", "Li et al. 2014, abstract"},
 		{"chrome-yellow", materials.KindArrived, "CN", "1850/1910", "Li et al. 2014, abstract"},
@@ -149,7 +149,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 		{"scheeles-green", materials.KindArrived, "SE", "1778/1786", "Andreas 1996, p. 23"},
 		{"emerald-green", materials.KindSold, "", "1805", "Andreas 1996, p. 23"},
 		{"emerald-green", materials.KindArrived, "AT", "1805", "Andreas 1996, p. 23"},
-		{"emerald-green", materials.KindArrived, "DE", "1814", "Andreas 1996, p. 23"},
+		{"emerald-green", materials.KindArrived, "DE", "../1814", "Andreas 1996, p. 23"},
 		{"emerald-green", materials.KindArrived, "FR", "1822", "Andreas 1996, p. 23"},
 		// Zhang et al., Heritage Science 9 (2021), abstract: imported synthetic ultramarine and emerald green on a Guangzhou Tongcao painting, 1840-1912.
 		{"emerald-green", materials.KindArrived, "CN", "1840/1912", "Zhang et al. 2021, abstract"},
@@ -162,7 +162,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Shimadzu, Bulletin of the National Museum of Japanese History, abstract: synthetic ultramarine imported by the later 19th century.
 		{"synthetic-ultramarine", materials.KindArrived, "JP", "1850/1899", "Shimadzu, Rekihaku bulletin, abstract"},
 		// de.wikipedia, "Ultramarinfabriken Carl Leverkus": first factory at Wermelskirchen, 1834.
-		{"synthetic-ultramarine", materials.KindArrived, "DE", "1834", "de.wikipedia, Ultramarinfabriken Carl Leverkus"},
+		{"synthetic-ultramarine", materials.KindArrived, "DE", "../1834", "de.wikipedia, Ultramarinfabriken Carl Leverkus"},
 		// Prückner, Dingler's Polytechnisches Journal 94 (1844), p. 388: Nuremberg green ultramarine seen about ten years after 1828.
 		{"ultramarine-green", materials.KindSold, "", "1838~", "Prückner 1844, p. 388"},
 		{"ultramarine-green", materials.KindArrived, "DE", "1838~", "Prückner 1844, p. 388"},

@@ -49,22 +49,22 @@ func TestModernAgainstSources(t *testing.T) {
 		// Messier, Baas, Tafilowski and Varga, JAIC 44 (2005), abstract: first brightener in samples of 1950-54.
 		{"optical-brightener-photographic-paper", materials.KindMade, "", "1950/1954", "Messier et al. 2005, abstract"},
 		// Wikipedia, "Acrylic paint", History: Rowney's Cryla of 1963, the first artists' acrylic in Europe.
-		{"acrylic-emulsion-paint", materials.KindArrived, "150", "1963", "Wikipedia, Acrylic paint, History"},
+		{"acrylic-emulsion-paint", materials.KindArrived, "150", "../1963", "Wikipedia, Acrylic paint, History"},
 		// Wikipedia, "Acrylic paint", History: Politec colours made in Mexico in 1953.
 		{"acrylic-emulsion-paint", materials.KindArrived, "MX", "1953", "Wikipedia, Acrylic paint, History"},
 		// Biographical dictionary of Hungarians (English), entry Bíró: the pen on the market in Argentina in 1945.
 		{"ballpoint-paste-ink", materials.KindSold, "", "1945", "Biographical dictionary of Hungarians, Bíró"},
 		{"ballpoint-paste-ink", materials.KindArrived, "AR", "1945", "Biographical dictionary of Hungarians, Bíró"},
 		// Wikipedia, "Reynolds International Pen Company", lead: first ballpoints sold on the US market, October 1945.
-		{"ballpoint-paste-ink", materials.KindArrived, "US", "1945-10", "Wikipedia, Reynolds International Pen Company"},
+		{"ballpoint-paste-ink", materials.KindArrived, "US", "../1945-10", "Wikipedia, Reynolds International Pen Company"},
 		// Wikipedia, "Sulfite process", History: first kraft mill, Sweden, 1890.
 		{"kraft-pulp-paper", materials.KindSold, "", "1890", "Wikipedia, Sulfite process, History"},
 		// Encyclopaedia Britannica, "papermaking": Dahl's sulphate (kraft) pulp of 1884.
 		{"kraft-pulp-paper", materials.KindMade, "", "1884", "Britannica, papermaking"},
 		// Paper Discovery Center, Hall of Fame, Keller: first commercial groundwood pulp in the US, 1867.
-		{"groundwood-paper", materials.KindArrived, "US", "1867", "Paper Discovery Center, Keller"},
+		{"groundwood-paper", materials.KindArrived, "US", "../1867", "Paper Discovery Center, Keller"},
 		// Smithsonian HistoryWired, Robert's paper machine: first two Fourdrinier machines in the US, 1827.
-		{"fourdrinier-machine-paper", materials.KindArrived, "US", "1827", "Smithsonian HistoryWired"},
+		{"fourdrinier-machine-paper", materials.KindArrived, "US", "../1827", "Smithsonian HistoryWired"},
 		// Hazen, Studies in Bibliography 5 (1952-53), p. 187: Baskerville's Vergil of 1757.
 		{"wove-paper", materials.KindMade, "", "1757", "Hazen 1952-53, p. 187"},
 		// Lauren Rogers Museum of Art, Masonite and American Art (2007): invented at Laurel in 1924.
@@ -77,7 +77,7 @@ func TestModernAgainstSources(t *testing.T) {
 		{"alizarine-ink", materials.KindMade, "", "1855", "Wikipedia, Alizarine ink"},
 		// Encyclopaedia Britannica, biography "Hugh Burgess": the soda process of 1851; US patent 1854.
 		{"soda-pulp-paper", materials.KindMade, "", "1851", "Britannica, Hugh Burgess"},
-		{"soda-pulp-paper", materials.KindArrived, "US", "1854", "Britannica, Hugh Burgess"},
+		{"soda-pulp-paper", materials.KindArrived, "US", "../1854", "Britannica, Hugh Burgess"},
 		// The Apsley Paper Trail, "The cylinder mould machine": Dickinson's machine patented at Apsley in 1809.
 		{"cylinder-mould-machine-paper", materials.KindMade, "", "1809", "Apsley Paper Trail, cylinder mould machine"},
 		// Same page: the type first used by the US paper industry in 1819 (the Smithsonian gives 1817).
@@ -89,7 +89,7 @@ func TestModernAgainstSources(t *testing.T) {
 		{"cellulose-nitrate-film-base", materials.KindMade, "", "1889", "Hazards in Collections, Nitrate film"},
 		// NIOSH Hazard Review: Carbonless Copy Paper, section 1.2: introduced by NCR in 1954; Japanese licence 1962.
 		{"carbonless-copy-paper", materials.KindMade, "", "1954", "NIOSH, Carbonless Copy Paper, 1.2"},
-		{"carbonless-copy-paper", materials.KindArrived, "JP", "1962", "NIOSH, Carbonless Copy Paper, 1.2"},
+		{"carbonless-copy-paper", materials.KindArrived, "JP", "../1962", "NIOSH, Carbonless Copy Paper, 1.2"},
 		// Birmingham Archives of Soho, "Copying press": the first presses sold in 1780.
 		{"copying-ink", materials.KindSold, "", "1780", "Birmingham Archives of Soho, Copying press"},
 		// Encyclopaedia Britannica, "Bakelite": invented in 1907.
@@ -125,23 +125,23 @@ func TestModernAgainstSources(t *testing.T) {
 		// chinaadvent.com, Tianzhang Recording Paper Factory, Origins: Shanghai Machine Paper Mill approved in 1882.
 		{"fourdrinier-machine-paper", materials.KindArrived, "CN", "1882", "chinaadvent.com, Tianzhang paper factory, Origins"},
 		// Damlıbağ, OTAM 37 (2015), abstract: the Hamidiye paper factory in production in 1893.
-		{"fourdrinier-machine-paper", materials.KindArrived, "TR", "1893", "Damlıbağ 2015, abstract"},
+		{"fourdrinier-machine-paper", materials.KindArrived, "TR", "../1893", "Damlıbağ 2015, abstract"},
 		// Technology in Australia 1788-1988, ch. 4 VIII Pulp and Paper, p. 245: machine mills at Liverpool and South Melbourne, 1868.
-		{"fourdrinier-machine-paper", materials.KindArrived, "AU", "1868", "Technology in Australia 1988, p. 245"},
+		{"fourdrinier-machine-paper", materials.KindArrived, "AU", "../1868", "Technology in Australia 1988, p. 245"},
 		// Same, p. 247: APPM's Burnie pulp mill made bleached eucalypt soda pulp from early 1939.
-		{"soda-pulp-paper", materials.KindArrived, "AU", "1939", "Technology in Australia 1988, p. 247"},
+		{"soda-pulp-paper", materials.KindArrived, "AU", "../1939", "Technology in Australia 1988, p. 247"},
 		// The Hindu, 15 February 2021: Travancore Titanium Products began sulphate-route production in 1951.
 		{"titanium-white-anatase", materials.KindArrived, "IN", "1951", "The Hindu, 15 February 2021"},
 		// Nandini Consultancy Centre at chemarc.com, History of titanium dioxide units in India: anatase from 1950.
 		{"titanium-white-anatase", materials.KindArrived, "IN", "1950", "chemarc.com, Titanium dioxide industry in India"},
 		// Encyclopedia of Australian Science and Innovation, Masonite Corporation (Australia): first hardboard plant, 1938.
-		{"hardboard-masonite", materials.KindArrived, "AU", "1938", "EOAS, Masonite Corporation (Australia)"},
+		{"hardboard-masonite", materials.KindArrived, "AU", "../1938", "EOAS, Masonite Corporation (Australia)"},
 		// Museums Victoria Collections, article 2648, Paint Preparation: alkyd enamels on sale from the late 1940s.
 		{"alkyd-paint", materials.KindArrived, "AU", "1946/1949", "Museums Victoria, Paint Preparation"},
 		// chromatopia.org, "Arylide" (2017), opening: the Hansa pigments discovered in 1909 (beside the from-memory row above).
 		{"hansa-yellow-g", materials.KindMade, "", "1909", "chromatopia.org, Arylide"},
 		// Korean Society of Wood Science and Technology, 50-year history, p. 140: the first paper mill at work in 1901.
-		{"fourdrinier-machine-paper", materials.KindArrived, "KR", "1901", "KSWST 50-year history, p. 140"},
+		{"fourdrinier-machine-paper", materials.KindArrived, "KR", "../1901", "KSWST 50-year history, p. 140"},
 		// The Guardian (Nigeria), 9 August 2020: the first paper factory established in 1969.
 		{"fourdrinier-machine-paper", materials.KindArrived, "NG", "1969", "The Guardian (Nigeria), 9 August 2020"},
 
@@ -206,7 +206,7 @@ func TestModernAgainstSources(t *testing.T) {
 		{"ballpoint-paste-ink", materials.KindMade, "", "1938", "Wikipedia, László Bíró"},
 		{"ballpoint-paste-ink", materials.KindMade, "", "1943-06-17", "Wikipedia, László Bíró"},
 		// Wikipedia, "Ballpoint pen", Postwar proliferation: Vila Sivill Hermanos' Regia Continua, 1946.
-		{"ballpoint-paste-ink", materials.KindArrived, "ES", "1946", "Wikipedia, Ballpoint pen"},
+		{"ballpoint-paste-ink", materials.KindArrived, "ES", "../1946", "Wikipedia, Ballpoint pen"},
 		// Portuguese Wikipedia, "Bic": the Bic Cristal launched on 27 December 1950.
 		{"ballpoint-paste-ink", materials.KindArrived, "FR", "1950-12-27", "pt.wikipedia, Bic"},
 		// Wikipedia, "Ohto": ballpoints brought by the US Army; the first Japanese ballpoint in 1949; water-based ballpoint in the 1960s.
@@ -233,7 +233,7 @@ func TestModernAgainstSources(t *testing.T) {
 		{"hardboard-masonite", materials.KindMade, "", "1898", "Wikipedia, Masonite"},
 		{"hardboard-masonite", materials.KindSold, "", "1926", "Wikipedia, William H. Mason"},
 		// Egbewole and Rotowa, Am. J. Agric. For. 5 (2017), abstract: Nigeria's pulp and paper mills set up in the 1960s-70s.
-		{"fourdrinier-machine-paper", materials.KindArrived, "NG", "1960/1979", "Egbewole and Rotowa 2017, abstract"},
+		{"fourdrinier-machine-paper", materials.KindArrived, "NG", "../1979", "Egbewole and Rotowa 2017, abstract"},
 		// Bagchi 1972, ch. 13, with the first machine sale in England (1803): first import span for India.
 		{"fourdrinier-machine-paper", materials.KindArrived, "IN", "1803/1870", "Bagchi 1972, ch. 13"},
 		// Wikipedia, "Liquid Paper" (older copy) and World of Invention, "Typing correction fluid": Mistake Out of 1951.
@@ -254,10 +254,10 @@ func TestModernAgainstSources(t *testing.T) {
 		{"cellulose-nitrate-film-base", materials.KindWithdrawn, "", "1955", "Wikipedia, Film stock"},
 		// Second round, arrivals:
 		// Verla Mill Museum, groundwood industry in Finland (timeline): first groundwood mills.
-		{"groundwood-paper", materials.KindArrived, "FI", "1859", "Verla Mill Museum, timeline"},
-		{"groundwood-paper", materials.KindArrived, "SE", "1857", "Verla Mill Museum, timeline"},
-		{"groundwood-paper", materials.KindArrived, "DK", "1857", "Verla Mill Museum, timeline"},
-		{"groundwood-paper", materials.KindArrived, "RU", "1858", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "FI", "../1859", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "SE", "../1857", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "DK", "../1857", "Verla Mill Museum, timeline"},
+		{"groundwood-paper", materials.KindArrived, "RU", "../1858", "Verla Mill Museum, timeline"},
 		// Finnish Heritage Agency wiki, Paperitehdas: first paper machine in Finland, Frenckell's mill, 1842.
 		{"fourdrinier-machine-paper", materials.KindArrived, "FI", "../1842", "Finnish Heritage Agency, Paperitehdas"},
 		// Te Ara, Pulp and paper, page 1: first commercial paper mills, Dunedin and Mataura, 1876.
