@@ -71,7 +71,11 @@ type groupJSON struct {
 // with its earliest made and sold dates.
 func showGroupText(w io.Writer, g *materials.Group) error {
 	var b strings.Builder
-	fmt.Fprintf(&b, "%s is a %s: a finding that names it is read as any of these %d materials, bounded by the earliest\n\n", g.Name, g.Kind, len(g.Members))
+	if len(g.Members) == 1 {
+		fmt.Fprintf(&b, "%s is a %s: a finding that names it is read as this one material (the only one in the dataset that carries it)\n\n", g.Name, g.Kind)
+	} else {
+		fmt.Fprintf(&b, "%s is a %s: a finding that names it is read as any of these %d materials, bounded by the earliest\n\n", g.Name, g.Kind, len(g.Members))
+	}
 	tw := tabwriter.NewWriter(&b, 0, 4, 2, ' ', 0)
 	fmt.Fprintln(tw, "  id\tname\tmade\tsold")
 	for _, m := range g.Members {

@@ -376,3 +376,13 @@ materials:
 		t.Errorf("exit %d, stdout %q, stderr %q", code, out, errw)
 	}
 }
+
+// A marker or family says how many materials it stands for in words that
+// fit the count: "any of these 4 materials", or "this one material".
+func TestMaterialsShowGroupCount(t *testing.T) {
+	checkPrints(t, []string{"luteolin is a marker: a finding that names it is read as any of these 4 materials, bounded by the earliest"}, "materials", "show", "luteolin")
+	out := checkPrints(t, []string{"laccaic acid is a marker: a finding that names it is read as this one material"}, "materials", "show", "laccaic acid")
+	if strings.Contains(out, "1 materials") {
+		t.Errorf("show laccaic acid:\n%s", out)
+	}
+}
