@@ -26,7 +26,7 @@ func TestInorganicAgainstSources(t *testing.T) {
 		// Wikipedia, "Prussian blue", older revision (liquisearch), History: the recipe published by John Woodward in 1724.
 		{"prussian-blue", materials.KindArrived, "GB", "../1724", "Wikipedia, Prussian blue, History (older revision)"},
 		// Tokyo National Research Institute for Cultural Properties, Gungyo-zu page: among the earliest uses in Japanese painting (Jakuchū, 1716-1800).
-		{"prussian-blue", materials.KindArrived, "JP", "1716/1800", "Tobunken, Dōshoku sai-e, Gungyo-zu"},
+		{"prussian-blue", materials.KindArrived, "JP", "../1800", "Tobunken, Dōshoku sai-e, Gungyo-zu"},
 		// AMICO catalogue record, Hokusai, The Kirifuri Waterfall: Prussian blue introduced into Japan in 1825.
 		{"prussian-blue", materials.KindArrived, "JP", "1825", "AMICO, Hokusai, Kirifuri Waterfall"},
 		// Bailey, Studies in Conservation 57 (2012), abstract: on Canton watercolours sent 1817-1830.
