@@ -155,7 +155,7 @@ func TestAntiquityAgainstSources(t *testing.T) {
 		{"malachite", materials.KindMade, "", "-4399/-3100", "UCL Digital Egypt, Cosmetic materials"},
 		{"manganese-black", materials.KindArrived, "EG", "-4399/-3100", "UCL Digital Egypt, Cosmetic materials"},
 		// National Gallery of Art, Japan: The Shaping of Daimyo Culture (1988), cat. 266, p. 345: cochineal jinbaori.
-		{"american-cochineal", materials.KindArrived, "JP", "1568/1602", "NGA 1988, cat. 266"},
+		{"american-cochineal", materials.KindArrived, "JP", "../1602", "NGA 1988, cat. 266"},
 		// Phipps 2010, p. 40: cochineal traded at Manila for Chinese goods by the 1580s.
 		{"american-cochineal", materials.KindArrived, "CN", "158X", "Phipps 2010, p. 40"},
 		// Splitstoser et al., Science Advances 2 (2016), abstract: indigo at Huaca Prieta, and Fifth Dynasty Egypt.
