@@ -244,7 +244,7 @@ func (p *parser) century(lo, hi, frac int, approx, uncert bool) (member, bool, e
 	if frac != 0 {
 		whole = [...]string{"", "early ", "mid ", "late "}[frac] + name
 	}
-	start.x = &pointExtra{cal: CalendarGregorian, whole: whole + " (" + yearText(a) + " to " + yearText(b) + ")"}
+	start.x = &pointExtra{cal: CalendarGregorian, whole: whole + " (" + YearForPeople(a) + " to " + YearForPeople(b) + ")"}
 	p.note(centuryNote(unit))
 	return member{start: start, end: end, kind: ranged | friendly}, true, nil
 }
@@ -254,12 +254,6 @@ func unitName(unit int64) string {
 		return "millennium"
 	}
 	return "century"
-}
-
-func yearText(y int64) string {
-	var b strings.Builder
-	yearPeople(&b, y)
-	return b.String()
 }
 
 func centuryNote(unit int64) string {

@@ -33,7 +33,7 @@ func (p *parser) core(i, hi int, pt *point) (int, error) {
 				"write the second year in full: "+s[j-5:j]+s[j-5:j-1-n]+s[j:i])
 		}
 		return i, p.failHint(j, "expected a year of four digits",
-			"EDTF years have four digits: write "+strings.Repeat("0", 4-n)+s[j:i]+" or AD "+s[j:i]+" (and 1200 BCE for years before the era)")
+			"EDTF years have four digits: write "+strings.Repeat("0", 4-n)+s[j:i]+" or "+s[j:i]+" CE (and 1200 BCE for years before the era)")
 	}
 	seenX := false
 	var v int64

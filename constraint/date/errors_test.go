@@ -25,7 +25,7 @@ func TestParseErrors(t *testing.T) {
 		{"1900-02-29", 8, "February 1900 has 28 days", ""},
 		{"1985-02-3X", 8, "days 30–39: February 1985 has 28 days", ""},
 		{"1985-5", 5, "expected a month of two digits", "1874-05"},
-		{"874", 0, "expected a year of four digits", "0874 or AD 874"},
+		{"874", 0, "expected a year of four digits", "0874 or 874 CE"},
 		{"18740521", 0, "more than four digits takes the Y prefix", "1874-05-21"},
 		{"XXXX-12-XX", 0, "name 10000 scattered runs of days; at most 1000", "1000/1999"},
 		{"1985-XX-12T10:00:00", 10, "a time of day needs a whole date", ""},

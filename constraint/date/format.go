@@ -226,18 +226,22 @@ const setSep = ","
 // edtfString is the EDTF of one point, for messages.
 func (pt point) edtfString() string { return string(appendPoint(nil, pt, roleSingle, "/")) }
 
-// yearPeople writes a year for people: 1874, AD 79, 1200 BCE.
+// yearPeople writes a year for people: 1874, 79 CE, 1200 BCE.
 func yearPeople(b *strings.Builder, y int64) {
+	b.WriteString(YearForPeople(y))
+}
+
+// YearForPeople is the one way a year is written for people in every
+// report: 1874; 79 CE and 1 CE below 1000, where a bare number could be
+// misread; 1200 BCE before the era (astronomical year 0 is 1 BCE).
+func YearForPeople(y int64) string {
 	switch {
 	case y >= 1000:
-		b.Write(appendInt(nil, y))
+		return string(appendInt(nil, y))
 	case y >= 1:
-		b.WriteString("AD ")
-		b.Write(appendInt(nil, y))
-	default:
-		b.Write(appendInt(nil, 1-y))
-		b.WriteString(" BCE")
+		return string(appendInt(nil, y)) + " CE"
 	}
+	return string(appendInt(nil, 1-y)) + " BCE"
 }
 
 func (pt point) people(b *strings.Builder) {
@@ -290,15 +294,19 @@ func (pt point) people(b *strings.Builder) {
 	}
 	if pt.yx > 0 || pt.sig > 0 {
 		switch {
-		case pt.year >= 1000 && pt.yx > 0 && pt.yx <= 2:
+		// A decade reads as "1870s"; a century is written out ("1700 to
+		// 1799"), as is the first decade of one, since "1700s" is read as
+		// the century.
+		case pt.year >= 1000 && pt.yx == 1 && pt.year%100 != 0:
 			b.Write(appendInt(nil, pt.year))
 			b.WriteByte('s')
+		case pt.year >= 100 && !pt.neg && pt.yx == 1 && pt.year%100 != 0:
+			b.Write(appendInt(nil, pt.year))
+			b.WriteString("s CE")
 		default:
 			lo, _, _ := civilIn(pt.first, pt.cal)
 			hi, _, _ := civilIn(pt.last, pt.cal)
-			yearPeople(b, lo)
-			b.WriteString(" to ")
-			yearPeople(b, hi)
+			spanPeople(b, YearForPeople(lo), YearForPeople(hi))
 			if pt.sig > 0 {
 				b.WriteString(" (estimated ")
 				yearPeople(b, pt.year)
@@ -363,8 +371,13 @@ func (m member) people(b *strings.Builder, inSet bool) {
 	}
 	switch {
 	case m.kind&openStart != 0:
+		var end strings.Builder
+		m.end.people(&end)
 		b.WriteString("up to ")
-		m.end.people(b)
+		if strings.Contains(end.String(), " to ") {
+			b.WriteString("the years ") // up to the years 800 to 899 CE
+		}
+		b.WriteString(end.String())
 	case m.kind&unknownStart != 0:
 		b.WriteString("from an unknown date to ")
 		m.end.people(b)
@@ -375,10 +388,25 @@ func (m member) people(b *strings.Builder, inSet bool) {
 		m.start.people(b)
 		b.WriteString(" to an unknown date")
 	default:
-		m.start.people(b)
-		b.WriteString(" to ")
-		m.end.people(b)
+		var start, end strings.Builder
+		m.start.people(&start)
+		m.end.people(&end)
+		spanPeople(b, start.String(), end.String())
 	}
+}
+
+// spanPeople writes "a to z", naming an era both ends share once, at the
+// end: "800 to 899 CE", "3300 to 3101 BCE", but "1200 BCE to 50 CE".
+func spanPeople(b *strings.Builder, a, z string) {
+	for _, era := range []string{" BCE", " CE"} {
+		if strings.HasSuffix(a, era) && strings.HasSuffix(z, era) {
+			a = strings.TrimSuffix(a, era)
+			break
+		}
+	}
+	b.WriteString(a)
+	b.WriteString(" to ")
+	b.WriteString(z)
 }
 
 // appendScattered writes a point with scattered X digits.

@@ -262,7 +262,7 @@ func (p *parser) eraYear(lo, hi int, era int, pt *point) error {
 	for i := lo; i < hi; i++ {
 		if !isDigit(s[i]) {
 			return p.failHint(i, "expected the digits of a year with the era",
-				"write a whole year, such as 1200 BCE or AD 79; for months and days use EDTF with astronomical years (-1199-05)")
+				"write a whole year, such as 1200 BCE or 79 CE; for months and days use EDTF with astronomical years (-1199-05)")
 		}
 		if i-lo >= 12 {
 			return p.fail(lo, "year out of range: this package reads years up to 999999999999")

@@ -22,11 +22,8 @@ func MonthAbbr(m int) string { return monthAbbr[m] }
 // YearText writes an astronomical year as people do: "1200 BCE" for -1199,
 // "1 CE" and "79 CE" below 1000, "1870" from 1000 on.
 func YearText(y int64) string {
-	switch {
-	case y < 1:
-		return fmt.Sprintf("%d BCE", 1-y)
-	case y < 1000:
-		return fmt.Sprintf("%d CE", y)
+	if y < 1000 {
+		return date.YearForPeople(y)
 	}
 	return date.FormatYear(y)
 }
