@@ -65,3 +65,44 @@ func TestGoldenSurvey(t *testing.T) {
 		}
 	}
 }
+
+// TestGoldenWords holds the wording of reports in the cases that once
+// misled a reader (testdata/words, each file says which): a claim judged
+// at the firm tier because the soft evidence conflicts; a verdict resting
+// on several independent findings; a set of years and year-level gaps
+// shown as years; years across the era; places written as names; two
+// orders between the same events; and, for a file named bad-*, the error
+// (which names the lines of an id written twice).
+func TestGoldenWords(t *testing.T) {
+	cases, _ := filepath.Glob("../../../../testdata/words/*.yaml")
+	if len(cases) < 7 {
+		t.Fatalf("%d cases in testdata/words, want the seven", len(cases))
+	}
+	for _, c := range cases {
+		name := strings.TrimSuffix(filepath.Base(c), ".yaml")
+		rel, _ := filepath.Rel("../../../..", c)
+		formats := []string{"text", "md", "json"}
+		if strings.HasPrefix(name, "bad-") {
+			formats = []string{"text"}
+		}
+		for _, format := range formats {
+			t.Run(name+"/"+format, func(t *testing.T) {
+				wd, _ := os.Getwd()
+				t.Chdir("../../../..")
+				out, errs, code := execute(t, "check", "--format", format, rel)
+				t.Chdir(wd)
+				if strings.HasPrefix(name, "bad-") {
+					if code != 2 || out != "" {
+						t.Fatalf("exit %d, stdout %q: want exit 2 and no report", code, out)
+					}
+					checkGolden(t, filepath.Join("words", name+".err"), errs)
+					return
+				}
+				if code == 2 {
+					t.Fatalf("exit 2: %s", errs)
+				}
+				checkGolden(t, filepath.Join("words", name+"."+format), out)
+			})
+		}
+	}
+}
