@@ -35,7 +35,7 @@ func chainCase(t testing.TB, n int) string {
 // times (hundreds of megabytes for two thousand events).
 func TestLongOrdersGrowLinearly(t *testing.T) {
 	small, large := chainCase(t, 500), chainCase(t, 1000)
-	for _, format := range []string{"text", "md", "json", "html", "svg"} {
+	for _, format := range []string{"text", "md", "json", "html", "svg", "jsonld"} {
 		t.Run(format, func(t *testing.T) {
 			a, errA, codeA := execute(t, "check", "--format", format, small)
 			b, errB, codeB := execute(t, "check", "--format", format, large)
@@ -52,8 +52,17 @@ func TestLongOrdersGrowLinearly(t *testing.T) {
 // BenchmarkLongOrder checks a case of 10,000 ordered events in each
 // format: seconds, not hours.
 func BenchmarkLongOrder(b *testing.B) {
-	p := chainCase(b, 10000)
-	for _, format := range []string{"text", "md", "json", "html", "svg"} {
+	benchOrder(b, chainCase(b, 10000))
+}
+
+// BenchmarkHostileOrder checks the hostile chain of 2,000 events in each
+// format: each under a second and 256 MiB.
+func BenchmarkHostileOrder(b *testing.B) {
+	benchOrder(b, "../../../../constraint/testdata/hostile/chain-2000-events.yaml")
+}
+
+func benchOrder(b *testing.B, p string) {
+	for _, format := range []string{"text", "md", "json", "html", "svg", "jsonld"} {
 		b.Run(format, func(b *testing.B) {
 			b.ReportAllocs()
 			for b.Loop() {

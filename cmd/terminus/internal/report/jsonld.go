@@ -191,7 +191,16 @@ func activity(r *constraint.Result, e constraint.EventResult, typ string, t netw
 		Label: fmt.Sprintf("dating from materials by terminus, at the %s tier", wording.Tier(t))}
 	seen := map[string]bool{}
 	for _, b := range []constraint.Bound{w.Earliest, w.Latest} {
-		for _, s := range b.Chain {
+		for i, s := range b.Chain {
+			// A long chain gives its first and last two steps and counts
+			// the others, as the other formats do: an export that grows
+			// with the case, not with its square.
+			if n := len(b.Chain); n > chainStepsShown && i >= 2 && i < n-2 {
+				if i == 2 {
+					dating.UsedSpecificObject = append(dating.UsedSpecificObject, statement("order of events", fmt.Sprintf("… %d more steps …", n-4)))
+				}
+				continue
+			}
 			if seen[s.Evidence] {
 				continue
 			}
