@@ -3,6 +3,7 @@ package report
 import (
 	"fmt"
 	"io"
+	"slices"
 	"strings"
 
 	"terminus/constraint"
@@ -235,7 +236,7 @@ func sameWindow(a, b *constraint.Window) bool {
 }
 
 func sameBound(a, b constraint.Bound) bool {
-	return a.Bounded && b.Bounded && a.Day == b.Day && strings.Join(a.Because, ",") == strings.Join(b.Because, ",")
+	return a.Bounded && b.Bounded && a.Day == b.Day && slices.Equal(a.Because, b.Because)
 }
 
 func writeChain(w io.Writer, which string, b constraint.Bound) {
