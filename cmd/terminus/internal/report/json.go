@@ -6,8 +6,7 @@
 package report
 
 import (
-	"bytes"
-	"encoding/json"
+	"bufio"
 	"io"
 
 	"terminus/constraint"
@@ -23,14 +22,101 @@ const SchemaVersion = 2
 // [AppendJSONLine] writes, indented by two spaces (one writer, one schema).
 func JSON(w io.Writer, r *constraint.Result) error {
 	line := AppendJSONLine(make([]byte, 0, 16<<10), r)
-	var buf bytes.Buffer
-	buf.Grow(2 * len(line))
-	if err := json.Indent(&buf, line, "", "  "); err != nil {
-		return err
+	return writeIndented(w, line)
+}
+
+// writeIndented writes a compact JSON document indented by two spaces
+// and a newline.
+func writeIndented(w io.Writer, compact []byte) error {
+	in := newIndenter(w)
+	in.Write(compact)
+	in.Write([]byte{'\n'})
+	return in.Flush()
+}
+
+// indenter indents compact JSON as it passes through, to the bytes that
+// json.Indent writes with no prefix and two spaces, but without holding
+// the document twice more: a report of tens of megabytes is indented
+// through a buffer of 64 KiB. Space outside strings is dropped, except at
+// the top level (the newline after a document). Its input is valid JSON
+// that this package wrote; it does not check it.
+type indenter struct {
+	w        *bufio.Writer
+	depth    int
+	inString bool
+	escaped  bool
+	opened   bool // the last byte opened an object or an array
+}
+
+func newIndenter(w io.Writer) *indenter {
+	return &indenter{w: bufio.NewWriterSize(w, 64<<10)}
+}
+
+// Write indents p; errors of the writer below wait for Flush.
+func (d *indenter) Write(p []byte) (int, error) {
+	for _, c := range p {
+		if d.inString {
+			d.w.WriteByte(c)
+			switch {
+			case d.escaped:
+				d.escaped = false
+			case c == '\\':
+				d.escaped = true
+			case c == '"':
+				d.inString = false
+			}
+			continue
+		}
+		if c == ' ' || c == '\t' || c == '\n' || c == '\r' {
+			if d.depth == 0 {
+				d.w.WriteByte(c)
+			}
+			continue
+		}
+		if d.opened {
+			d.opened = false
+			if c == '}' || c == ']' { // empty: {} and [] stay on one line
+				d.depth--
+				d.w.WriteByte(c)
+				continue
+			}
+			d.newline()
+		}
+		switch c {
+		case '"':
+			d.inString = true
+			d.w.WriteByte(c)
+		case '{', '[':
+			d.w.WriteByte(c)
+			d.depth++
+			d.opened = true
+		case ',':
+			d.w.WriteByte(c)
+			d.newline()
+		case ':':
+			d.w.WriteString(": ")
+		case '}', ']':
+			d.depth--
+			d.newline()
+			d.w.WriteByte(c)
+		default:
+			d.w.WriteByte(c)
+		}
 	}
-	buf.WriteByte('\n')
-	_, err := w.Write(buf.Bytes())
-	return err
+	return len(p), nil
+}
+
+func (d *indenter) newline() {
+	d.w.WriteByte('\n')
+	for range d.depth {
+		d.w.WriteString("  ")
+	}
+}
+
+// Flush writes what is buffered and returns the first error of the writer
+// below.
+func (d *indenter) Flush() error {
+	return d.w.Flush()
 }
 
 // JSONLine writes r as one line of JSON, for JSON Lines output: the

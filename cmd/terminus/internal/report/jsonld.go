@@ -71,10 +71,15 @@ func LinkedArt(opts LinkedArtOptions) func(io.Writer, *constraint.Result) error 
 		if err != nil {
 			return err
 		}
-		enc := json.NewEncoder(w)
+		// Encoded compact, the document is indented as it passes to w
+		// (encoding/json would hold it twice more to indent it).
+		in := newIndenter(w)
+		enc := json.NewEncoder(in)
 		enc.SetEscapeHTML(false)
-		enc.SetIndent("", "  ")
-		return enc.Encode(doc)
+		if err := enc.Encode(doc); err != nil {
+			return err
+		}
+		return in.Flush()
 	}
 }
 

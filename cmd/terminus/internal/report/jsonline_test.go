@@ -156,10 +156,43 @@ func FuzzJSONLine(f *testing.F) {
 	f.Fuzz(func(t *testing.T, s string, full bool) {
 		r := oddResult(s, full)
 		want := reference(t, r)
-		if got := AppendJSONLine(nil, r); !bytes.Equal(got, want) {
+		got := AppendJSONLine(nil, r)
+		if !bytes.Equal(got, want) {
 			t.Fatalf("AppendJSONLine(%q) =\n%s\nwant\n%s", s, got, want)
 		}
+		checkIndentedAsEncodingJSON(t, got)
 	})
+}
+
+// checkIndentedAsEncodingJSON holds the streaming indenter to the bytes of
+// encoding/json's Indent, the reference.
+func checkIndentedAsEncodingJSON(t *testing.T, compact []byte) {
+	t.Helper()
+	var want bytes.Buffer
+	if err := json.Indent(&want, compact, "", "  "); err != nil {
+		t.Fatalf("%s: %v", compact, err)
+	}
+	want.WriteByte('\n')
+	var got bytes.Buffer
+	if err := writeIndented(&got, compact); err != nil {
+		t.Fatal(err)
+	}
+	if !bytes.Equal(got.Bytes(), want.Bytes()) {
+		t.Fatalf("indenting %s:\n%s\nwant (encoding/json)\n%s", compact, got.Bytes(), want.Bytes())
+	}
+}
+
+// The report's indenter writes what encoding/json's Indent writes, on the
+// shapes that are easy to get wrong: empty objects and arrays, nesting,
+// brackets, colons, commas and escaped quotes inside strings.
+func TestIndenterMatchesEncodingJSON(t *testing.T) {
+	for _, doc := range []string{
+		`{}`, `[]`, `{"a":{}}`, `{"a":[],"b":[[],{}]}`, `[1,2,[3,{"x":null}]]`,
+		`{"s":"a,b:{c}[d]"}`, `{"q":"say \"hi\", then {go}"}`, `{"b":"\\"}`, `{"b":"\\\"]"}`,
+		`{"u":"\u2028 é 藤黄"}`, `"alone"`, `12.5e3`, `true`,
+	} {
+		checkIndentedAsEncodingJSON(t, []byte(doc))
+	}
 }
 
 func BenchmarkJSONLine(b *testing.B) {
