@@ -5,7 +5,6 @@ import (
 	"fmt"
 	"io"
 	"os"
-	"runtime/debug"
 	"strconv"
 
 	"github.com/spf13/cobra"
@@ -41,33 +40,6 @@ func isTerminal(w io.Writer) bool {
 	}
 	st, err := f.Stat()
 	return err == nil && st.Mode()&os.ModeCharDevice != 0
-}
-
-// The garbage collector's settings for a survey (see tuneGC); the help
-// text quotes them.
-const (
-	surveyGCPercent      = 1000
-	surveyMemoryLimitMiB = 64
-)
-
-// tuneGC raises the garbage collector's target for a survey, unless the
-// user set GOGC or GOMEMLIMIT, and returns the function that puts the old
-// settings back. A survey's live heap is small and bounded (the reorder
-// window), so the default target of 100 % makes the collector run every
-// few hundred records: at 1000 % it takes about a third less CPU time.
-// A soft memory limit of 64 MiB keeps the peak flat however long the
-// input: the live heap stays near 10 MiB, so the limit is never tight
-// enough to make the collector thrash.
-func tuneGC() func() {
-	if os.Getenv("GOGC") != "" || os.Getenv("GOMEMLIMIT") != "" {
-		return func() {}
-	}
-	oldPercent := debug.SetGCPercent(surveyGCPercent)
-	oldLimit := debug.SetMemoryLimit(surveyMemoryLimitMiB << 20)
-	return func() {
-		debug.SetGCPercent(oldPercent)
-		debug.SetMemoryLimit(oldLimit)
-	}
 }
 
 // NewSurveyCmd builds "terminus survey".
@@ -182,7 +154,7 @@ errors count toward exit 1); 2 for bad usage or an input that cannot be read.`,
 			if isTerminal(s.Err) {
 				opt.Progress = s.Err
 			}
-			defer tuneGC()()
+			defer tuneGC(surveyGCPercent, surveyMemoryLimitMiB)()
 			counts, err := survey.Run(cmd.Context(), inputs, w, opt)
 			if err != nil {
 				var ie *survey.InputError

@@ -514,7 +514,7 @@ func TestSurveyResultIsCheckJSON(t *testing.T) {
 func TestSurveyHelpStatesTheGCTarget(t *testing.T) {
 	t.Setenv("GOGC", "")
 	t.Setenv("GOMEMLIMIT", "")
-	restore := tuneGC()
+	restore := tuneGC(surveyGCPercent, surveyMemoryLimitMiB)
 	percent := debug.SetGCPercent(100)
 	limit := debug.SetMemoryLimit(-1)
 	debug.SetGCPercent(percent)
