@@ -156,7 +156,7 @@ func (a *analysis) build(ov override, memo *Memo) (*built, error) {
 			}
 			row := Evidence{ID: o.ID, Kind: "order", Event: e.ID, What: text}
 			side := "after"
-			row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Date: o.Event + gap, Tier: o.Strength})
+			row.Bounds = append(row.Bounds, EvidenceBound{Side: side, Date: o.Event + gap, Earlier: o.Event, Tier: o.Strength})
 			b.evidence = append(b.evidence, row)
 		}
 	}

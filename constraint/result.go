@@ -168,6 +168,7 @@ type EvidenceBound struct {
 	Side         string   // "not before", "not after", "within", "after"
 	Day          date.Day // the bound, for findings and records
 	Date         string   // the day, ISO 8601, or a gap for an order
+	Earlier      string   // for an order, the event it comes after
 	Tier         network.Tier
 	Milestone    string // made, sold, arrived, withdrawn; empty for records and orders
 	Material     string // the material's id

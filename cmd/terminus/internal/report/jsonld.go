@@ -135,7 +135,7 @@ func linkedArt(r *constraint.Result, opts LinkedArtOptions) (*laNode, error) {
 
 // after finds the events that come after prod, directly or through
 // others, by the orders of the case (evidence of kind "order", whose
-// bound names the earlier event first).
+// bound names the earlier event).
 func after(r *constraint.Result, prod string) map[string]bool {
 	known := map[string]bool{}
 	for _, e := range r.Events {
@@ -147,9 +147,8 @@ func after(r *constraint.Result, prod string) map[string]bool {
 			continue
 		}
 		for _, b := range ev.Bounds {
-			earlier, _, _ := strings.Cut(b.Date, " ")
-			if known[earlier] {
-				next[earlier] = append(next[earlier], ev.Event)
+			if known[b.Earlier] {
+				next[b.Earlier] = append(next[b.Earlier], ev.Event)
 			}
 		}
 	}
