@@ -402,8 +402,7 @@ func (d *decoder) dateOptions(f *input.Fields) (date.Options, error) {
 			return opt, err
 		}
 		if opt.Calendar, err = date.ParseCalendar(s); err != nil {
-			return opt, d.errAt(v.Value, input.DidYouMean(s, []string{"gregorian", "julian", "japanese", "chinese", "korean"}),
-				"calendar %s: expected gregorian, julian, japanese, chinese or korean", input.Quote(s))
+			return opt, d.errAt(v.Value, input.DidYouMean(s, date.CalendarNames()), "calendar %s: %s", input.Quote(s), parseMsg(err))
 		}
 	}
 	if v, ok := f.Given("year_start"); ok {

@@ -68,6 +68,18 @@ func ParseYearStart(s string) (YearStart, error) {
 		hint: "English documents before 1752 began the year on 25 March: year_start: 25 March"}
 }
 
+// CalendarNames are the names a case file gives its calendars, as
+// [ParseCalendar] reads them (each also has other spellings).
+func CalendarNames() []string {
+	return []string{"gregorian", "julian", "japanese", "chinese", "korean", "islamic", "persian", "hebrew", "french republican", "buddhist", "roc"}
+}
+
+// calendarList writes the names for a message: "gregorian, julian … or roc".
+func calendarList() string {
+	n := CalendarNames()
+	return strings.Join(n[:len(n)-1], ", ") + " or " + n[len(n)-1]
+}
+
 // ParseCalendar reads a calendar's name as a case file writes it:
 // gregorian, julian, japanese, chinese, korean, islamic (or hijri),
 // persian (or solar hijri), hebrew, french republican, buddhist, roc (or
@@ -98,7 +110,7 @@ func ParseCalendar(s string) (Calendar, error) {
 	case "roc", "minguo", "republic of china":
 		return CalendarROC, nil
 	}
-	return CalendarGregorian, &ParseError{Input: s, Msg: "unknown calendar: expected gregorian, julian, japanese, chinese, korean, islamic, persian, hebrew, french republican, buddhist or roc",
+	return CalendarGregorian, &ParseError{Input: s, Msg: "unknown calendar: expected " + calendarList(),
 		hint: "write calendar: julian for documents dated before the Gregorian reform"}
 }
 

@@ -116,6 +116,10 @@ func TestCheckBadInput(t *testing.T) {
 		{"unknown material", "findings:\n  - material: fixture yelow\n", []string{"case.yaml:2:15: finding finding-1: unknown material", "terminus: hint: did you mean"}},
 		{"misspelt key", "title: x\nclaimz: []\n", []string{"case.yaml:2:1: case file: unknown key \"claimz\"", "did you mean 'claims'?"}},
 		{"bad yaml", "title: [x\n", []string{"case.yaml:", "not valid YAML"}},
+		// The message lists every calendar the dates are read in (it once
+		// named five of the eleven), and suggests the nearest.
+		{"unknown calendar", "records:\n  - {not_after: \"1300\", calendar: persain}\n",
+			[]string{"case.yaml:2:35: calendar \"persain\"", "islamic, persian, hebrew, french republican, buddhist or roc", "did you mean 'persian'?"}},
 	}
 	for _, tc := range tests {
 		t.Run(tc.name, func(t *testing.T) {
