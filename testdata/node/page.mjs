@@ -1,7 +1,8 @@
 // page.mjs URL OUTDIR uses the local page as a person would, with the
 // keyboard where a person could: opens an example, adds a finding by
 // typing part of a name and choosing it, sees the verdict change, makes an
-// error and reads it beside its field, downloads the case file and the
+// error and reads it beside its field, gives a record its calendar, year
+// start and note, downloads the case file and the
 // Markdown section, browses the materials, and checks that the page fits
 // a laptop's width. It saves screenshots in OUTDIR and prints what it saw
 // as JSON.
@@ -78,6 +79,15 @@ try {
   await shot(page, 'page-error.png');
   await page.fill(claimDate, oldDate);
   await page.waitForFunction(() => !document.querySelector('#editor .error') && document.querySelector('#status').textContent.startsWith('Verdicts:'));
+
+  // A record's calendar, year start and note.
+  await page.selectOption('select[data-path="records.0.calendar"]', 'julian');
+  await page.selectOption('select[data-path="records.0.year_start"]', '25 March');
+  await page.fill('input[data-path="records.0.note"]', 'the ledger counts its years from Lady Day');
+  await page.waitForFunction(() => document.querySelector('#status').textContent.startsWith('Verdicts:'));
+  const recordShot = join(outDir, 'page-record.png');
+  await page.locator('div.card[data-path="records.0"]').screenshot({ path: recordShot });
+  out.shots.push(recordShot);
 
   // Downloads.
   for (const [fmt, name] of [['yaml', 'case.yaml'], ['md', 'dating-section.md'], ['html', 'dating-report.html']]) {

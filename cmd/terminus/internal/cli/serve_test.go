@@ -165,6 +165,15 @@ func TestServePageInBrowser(t *testing.T) {
 	if len(got.Failed) > 0 || len(got.Outside) > 0 {
 		t.Errorf("requests failed %v or left the server %v", got.Failed, got.Outside)
 	}
+	caseFile, err := os.ReadFile(filepath.Join(dir, "case.yaml"))
+	if err != nil {
+		t.Fatal(err)
+	}
+	for _, want := range []string{"calendar: julian", "year_start: 25 March", "note: the ledger counts its years from Lady Day"} {
+		if !strings.Contains(string(caseFile), want) {
+			t.Errorf("the downloaded case lacks %q (set in the record's fields):\n%s", want, caseFile)
+		}
+	}
 	md, err := os.ReadFile(filepath.Join(dir, "dating-section.md"))
 	if err != nil {
 		t.Fatal(err)

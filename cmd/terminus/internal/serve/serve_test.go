@@ -10,12 +10,15 @@ import (
 	"net/http/httptest"
 	"os"
 	"path/filepath"
+	"regexp"
+	"slices"
 	"strings"
 	"testing"
 
 	"terminus/cmd/terminus/internal/report"
 	"terminus/constraint"
 	"terminus/constraint/casefile"
+	"terminus/constraint/date"
 	"terminus/constraint/input"
 	"terminus/materials"
 )
@@ -284,5 +287,43 @@ func BenchmarkCheckHandler(b *testing.B) {
 				}
 			}
 		})
+	}
+}
+
+// The page's lists of calendars and year starts are those the case reader
+// takes: every calendar of date.CalendarNames, each year start read by
+// date.ParseYearStart (the page keeps its own copy, in app.js).
+func TestPageCalendarsMatchTheReader(t *testing.T) {
+	js, err := staticFiles.ReadFile("static/app.js")
+	if err != nil {
+		t.Fatal(err)
+	}
+	line := func(prefix string) string {
+		for l := range strings.Lines(string(js)) {
+			if strings.HasPrefix(l, prefix) {
+				return l
+			}
+		}
+		t.Fatalf("app.js has no line starting %q", prefix)
+		return ""
+	}
+	quoted := regexp.MustCompile(`'([^']*)'`)
+	var cals []string
+	for _, m := range quoted.FindAllStringSubmatch(line("const CALENDARS = "), -1) {
+		cals = append(cals, m[1])
+	}
+	if want := date.CalendarNames(); !slices.Equal(cals, want) {
+		t.Errorf("the page's calendars %q, the reader's %q", cals, want)
+	}
+	starts := quoted.FindAllStringSubmatch(line("const YEAR_START_OPTIONS = "), -1)
+	var values []string
+	for i := 2; i < len(starts); i += 2 { // value, label pairs after the empty one
+		values = append(values, starts[i][1])
+		if _, err := date.ParseYearStart(starts[i][1]); err != nil {
+			t.Errorf("the page's year start %q: %v", starts[i][1], err)
+		}
+	}
+	if len(values) != 4 {
+		t.Errorf("the page offers the year starts %q, want the four the reader knows", values)
 	}
 }

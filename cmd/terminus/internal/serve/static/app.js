@@ -23,6 +23,11 @@ const nextID = (p) => `${p}-${++uid}`;
 
 const TIERS = ['hard', 'firm', 'soft'];
 const RECORD_KINDS = [['not_before', 'not before'], ['not_after', 'not after'], ['on', 'on'], ['between', 'between']];
+// The calendars and year starts a record's or a claim's date may be read in
+// (date.CalendarNames and date.ParseYearStart; a test keeps them in step).
+const CALENDARS = ['gregorian', 'julian', 'japanese', 'chinese', 'korean', 'islamic', 'persian', 'hebrew', 'french republican', 'buddhist', 'roc'];
+const CALENDAR_OPTIONS = [['', 'not said (Gregorian)'], ...CALENDARS.map((c) => [c, c])];
+const YEAR_START_OPTIONS = [['', 'not said'], ['1 January', '1 January'], ['25 March', '25 March (England before 1752)'], ['1 March', '1 March (Venice)'], ['25 December', '25 December']];
 
 function blank() {
   return { id: '', title: '', place: '', extra: {}, events: [], findings: [], records: [], claims: [] };
@@ -59,10 +64,12 @@ function fromCase(c) {
   for (const r of c.records || []) {
     const kind = (RECORD_KINDS.find(([k]) => r[k] !== undefined) || ['not_after'])[0];
     m.records.push({ id: str(r.id), event: str(r.event), kind, date: str(r[kind]), strength: str(r.strength), source: str(r.source),
-      extra: take(r, ['id', 'event', 'on', 'not_before', 'not_after', 'between', 'strength', 'source']) });
+      note: str(r.note), calendar: str(r.calendar), year_start: str(r.year_start),
+      extra: take(r, ['id', 'event', 'on', 'not_before', 'not_after', 'between', 'strength', 'source', 'note', 'calendar', 'year_start']) });
   }
   for (const c2 of c.claims || []) {
-    m.claims.push({ id: str(c2.id), event: str(c2.event), date: str(c2.date), by: str(c2.by), extra: take(c2, ['id', 'event', 'date', 'by']) });
+    m.claims.push({ id: str(c2.id), event: str(c2.event), date: str(c2.date), by: str(c2.by), calendar: str(c2.calendar), year_start: str(c2.year_start),
+      extra: take(c2, ['id', 'event', 'date', 'by', 'calendar', 'year_start']) });
   }
   return m;
 }
@@ -93,10 +100,11 @@ function toCase(m) {
     });
   }
   if (m.records.length) {
-    c.records = m.records.map((r) => Object.assign(put(put(put(put(put({}, 'id', r.id), 'event', r.event), r.kind, r.date), 'strength', r.strength), 'source', r.source), r.extra));
+    c.records = m.records.map((r) => Object.assign(put(put(put(put(put(put(put(put({}, 'id', r.id), 'event', r.event), r.kind, r.date), 'strength', r.strength), 'source', r.source),
+      'note', r.note), 'calendar', r.calendar), 'year_start', r.year_start), r.extra));
   }
   if (m.claims.length) {
-    c.claims = m.claims.map((x) => Object.assign(put(put(put(put({}, 'id', x.id), 'event', x.event), 'date', x.date), 'by', x.by), x.extra));
+    c.claims = m.claims.map((x) => Object.assign(put(put(put(put(put(put({}, 'id', x.id), 'event', x.event), 'date', x.date), 'by', x.by), 'calendar', x.calendar), 'year_start', x.year_start), x.extra));
   }
   return c;
 }
@@ -441,10 +449,13 @@ function recordsSection() {
         select('The event is', r, 'kind', `records.${i}.kind`, RECORD_KINDS, { onchange: () => rerenderSection('records', `[data-path="records.${i}.${r.kind}"]`) }),
         field('Date (e.g. 1902, c. 1870, 1850/1860)', r, 'date', `records.${i}.${r.kind}`),
         select('Strength', r, 'strength', `records.${i}.strength`, [['', 'firm (default)'], ['hard', 'hard'], ['soft', 'soft']]),
-        field('Source', r, 'source', `records.${i}.source`, { wide: true }))));
+        select('Calendar', r, 'calendar', `records.${i}.calendar`, CALENDAR_OPTIONS),
+        select('Year starts on', r, 'year_start', `records.${i}.year_start`, YEAR_START_OPTIONS),
+        field('Source', r, 'source', `records.${i}.source`, { wide: true }),
+        field('Note', r, 'note', `records.${i}.note`, { wide: true }))));
   });
   fs.append(el('button', { type: 'button', class: 'add', onclick: () => {
-    model.records.push({ id: `r-${model.records.length + 1}`, event: '', kind: 'not_after', date: '', strength: '', source: '', extra: {} });
+    model.records.push({ id: `r-${model.records.length + 1}`, event: '', kind: 'not_after', date: '', strength: '', source: '', note: '', calendar: '', year_start: '', extra: {} });
     rerenderSection('records', `[data-path="records.${model.records.length - 1}.not_after"]`); changed();
   } }, 'Add a record'));
   return fs;
@@ -459,10 +470,12 @@ function claimsSection() {
         field('Id', c, 'id', `claims.${i}.id`),
         select('Event', c, 'event', `claims.${i}.event`, eventOptions()),
         field('Date (e.g. 1847, c. 1870, 1200 BCE)', c, 'date', `claims.${i}.date`),
-        field('By', c, 'by', `claims.${i}.by`, { placeholder: 'e.g. the inscription' }))));
+        field('By', c, 'by', `claims.${i}.by`, { placeholder: 'e.g. the inscription' }),
+        select('Calendar', c, 'calendar', `claims.${i}.calendar`, CALENDAR_OPTIONS),
+        select('Year starts on', c, 'year_start', `claims.${i}.year_start`, YEAR_START_OPTIONS))));
   });
   fs.append(el('button', { type: 'button', class: 'add', onclick: () => {
-    model.claims.push({ id: `c-${model.claims.length + 1}`, event: '', date: '', by: '', extra: {} });
+    model.claims.push({ id: `c-${model.claims.length + 1}`, event: '', date: '', by: '', calendar: '', year_start: '', extra: {} });
     rerenderSection('claims', `[data-path="claims.${model.claims.length - 1}.date"]`); changed();
   } }, 'Add a claim'));
   return fs;
