@@ -159,3 +159,72 @@ func TestLinkedArtExpandsToRDF(t *testing.T) {
 		}
 	}
 }
+
+// TestShippedContextMatchesLinkedArt holds every term of the shipped
+// context to the property or class the published Linked Art context
+// (https://linked.art/ns/v1/linked-art.json) gives it. The pairs were
+// checked against that context as the OpenAtlas project (craws/OpenAtlas,
+// openatlas/api/resources/resolve_endpoints.py, parse_loud_context) lists
+// it, IRI to term; they had been written from memory of the model.
+func TestShippedContextMatchesLinkedArt(t *testing.T) {
+	linkedArt := map[string]string{
+		"_label":               "rdfs:label",
+		"HumanMadeObject":      "crm:E22_Human-Made_Object",
+		"Production":           "crm:E12_Production",
+		"Modification":         "crm:E11_Modification",
+		"Activity":             "crm:E7_Activity",
+		"TimeSpan":             "crm:E52_Time-Span",
+		"Place":                "crm:E53_Place",
+		"Name":                 "crm:E33_E41_Linguistic_Appellation",
+		"Identifier":           "crm:E42_Identifier",
+		"LinguisticObject":     "crm:E33_Linguistic_Object",
+		"AttributeAssignment":  "crm:E13_Attribute_Assignment",
+		"identified_by":        "crm:P1_is_identified_by",
+		"content":              "crm:P190_has_symbolic_content",
+		"referred_to_by":       "crm:P67i_is_referred_to_by",
+		"produced_by":          "crm:P108i_was_produced_by",
+		"modified_by":          "crm:P31i_was_modified_by",
+		"part":                 "crm:P9_consists_of",
+		"took_place_at":        "crm:P7_took_place_at",
+		"timespan":             "crm:P4_has_time-span",
+		"begin_of_the_begin":   "crm:P82a_begin_of_the_begin",
+		"end_of_the_end":       "crm:P82b_end_of_the_end",
+		"assigned_by":          "crm:P141i_was_assigned_by",
+		"used_specific_object": "crm:P16_used_specific_object",
+	}
+	data, err := os.ReadFile(contextFile)
+	if err != nil {
+		t.Fatal(err)
+	}
+	var ctx struct {
+		Context map[string]json.RawMessage `json:"@context"`
+	}
+	if err := json.Unmarshal(data, &ctx); err != nil {
+		t.Fatal(err)
+	}
+	prefixes := map[string]bool{"@version": true, "crm": true, "rdfs": true, "xsd": true, "id": true, "type": true}
+	for term, raw := range ctx.Context {
+		if prefixes[term] {
+			continue
+		}
+		var def struct {
+			ID string `json:"@id"`
+		}
+		if err := json.Unmarshal(raw, &def); err != nil {
+			t.Errorf("term %q: %v", term, err)
+			continue
+		}
+		want, ok := linkedArt[term]
+		switch {
+		case !ok:
+			t.Errorf("term %q (%s) is not one this test has checked against Linked Art", term, def.ID)
+		case def.ID != want:
+			t.Errorf("term %q is %s in the shipped context, %s in Linked Art's", term, def.ID, want)
+		}
+	}
+	for term := range linkedArt {
+		if _, ok := ctx.Context[term]; !ok {
+			t.Errorf("the shipped context lacks %q", term)
+		}
+	}
+}
