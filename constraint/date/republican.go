@@ -1,5 +1,7 @@
 package date
 
+import "strings"
+
 // The French Republican calendar: twelve months of 30 days and five or six
 // complementary days (sansculottides) at the end of the year, which began
 // on the day of the autumn equinox at the Paris Observatory. It was in use
@@ -97,4 +99,100 @@ func toRoman(v int64) string {
 		}
 	}
 	return string(b)
+}
+
+// republican reads a French Republican date whose "an" is rest[k]: "18
+// Brumaire an VIII", "Brumaire an VIII", "an VIII", "3e jour complémentaire
+// an VII", "1er vendémiaire an I".
+func (p *parser) republican(lo int, rest [][2]int, k int) (point, bool, error) {
+	s := p.in
+	if k+1 >= len(rest) {
+		return point{}, true, p.failHint(lo, "expected the year after \"an\"", "write 18 Brumaire an VIII")
+	}
+	yw := s[rest[k+1][0]:rest[k+1][1]]
+	y := romanNumeral(yw)
+	if y == 0 {
+		if v, ok := smallNumber(yw); ok {
+			y = int64(v)
+		}
+	}
+	if y < 1 {
+		return point{}, true, p.failHint(rest[k+1][0], "expected the year of the Republic in Roman or Arabic numerals", "write an VIII or an 8")
+	}
+	for _, t := range rest[k+2:] {
+		w := foldLatin(s[t[0]:t[1]])
+		if w != "de" && w != "la" && w != "republique" && w != "delarepublique" && w != "francaise" {
+			return point{}, true, p.fail(t[0], "unexpected words after the year")
+		}
+	}
+	ny, exact := republicanNewYear(y)
+	nextNY, _ := republicanNewYear(y + 1)
+	label := "an " + toRoman(y)
+	first, last := ny, nextNY-1
+	prec := PrecisionYear
+	words := rest[:k]
+	if len(words) > 0 {
+		day := 0
+		dw := strings.ToLower(s[words[0][0]:words[0][1]])
+		for _, suf := range []string{"er", "e", "re", "ème", "eme"} {
+			if v, ok := smallNumber(strings.TrimSuffix(dw, suf)); ok && strings.HasSuffix(dw, suf) {
+				day = v
+				break
+			}
+		}
+		if v, ok := smallNumber(dw); ok {
+			day = v
+		}
+		if day != 0 {
+			words = words[1:]
+		}
+		if len(words) == 0 {
+			return point{}, true, p.failHint(rest[0][0], "a day needs its month", "write 18 Brumaire an VIII")
+		}
+		mkey := ""
+		for _, t := range words {
+			mkey += s[t[0]:t[1]]
+		}
+		mkey = foldLatin(mkey)
+		month := 0
+		for i, name := range republicanMonths {
+			if mkey == foldLatin(name) {
+				month = i + 1
+			}
+		}
+		switch mkey {
+		case "jourcomplementaire", "jourscomplementaires", "sansculottides", "sansculottide", "complementaire":
+			month = 13
+		case "fervidor":
+			month = 11
+		}
+		if month == 0 {
+			return point{}, true, p.failHint(words[0][0], "unknown month of the Republican calendar",
+				"the months are Vendémiaire, Brumaire, Frimaire, Nivôse, Pluviôse, Ventôse, Germinal, Floréal, Prairial, Messidor, Thermidor, Fructidor, and the jours complémentaires")
+		}
+		mfirst := ny + Day(30*(month-1))
+		mlen := 30
+		if month == 13 {
+			mlen = int(nextNY - mfirst)
+		}
+		first, last = mfirst, mfirst+Day(mlen)-1
+		label = republicanMonths[month-1] + " " + label
+		prec = PrecisionMonth
+		if day != 0 {
+			if day > mlen {
+				return point{}, true, p.fail(words[0][0], "day "+itoa(day)+": "+republicanMonths[month-1]+" an "+toRoman(y)+" has "+itoa(mlen)+" days")
+			}
+			first = mfirst + Day(day-1)
+			last = first
+			label = itoa(day) + " " + label
+			prec = PrecisionDay
+		}
+	}
+	if !exact {
+		p.note("the Republican calendar was used for the years I to XIV (and in 1871); an " + toRoman(y) +
+			" is read from the autumn equinox at Paris as computed here, widened by a day at each side")
+		first--
+		last++
+	}
+	return fixedPoint(CalendarFrenchRepublican, label, first, last, prec), true, nil
 }
