@@ -167,11 +167,13 @@ func (a *analysis) materialBounds(m *materials.Material, place string, cap netwo
 		}
 		if b != nil && len(cands) > 1 && cands[0].day != cands[len(cands)-1].day {
 			cl := make([]string, len(cands))
+			one := true
 			for i, c := range cands {
 				cl[i] = claimLabel(c.ms, c.day, upper)
+				one = one && c.ms.Source == cands[0].ms.Source
 			}
 			b.disagreements = append(b.disagreements, Disagreement{
-				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl, Used: cl[pick],
+				Material: m.ID, Name: name, Kind: string(kind), Place: area, Claims: cl, Used: cl[pick], OneSource: one,
 			})
 		}
 		c := cands[pick]

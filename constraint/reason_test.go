@@ -326,6 +326,38 @@ func TestDisagreementSensitivity(t *testing.T) {
 	}
 }
 
+// Two dates from one source are no disagreement between sources, and the
+// text says so: Splitstoser et al. 2016 give both the Huaca Prieta find
+// (4250 to 4000 BCE) and the earlier record it displaced (Fifth Dynasty
+// Egypt) for natural indigo in the built-in dataset; two sources for
+// fixture blue still disagree.
+func TestDisagreementOfOneSource(t *testing.T) {
+	c, err := casefile.Parse("case.yaml", []byte("findings:\n  - {material: natural indigo}\nclaims:\n  - {date: \"1500\"}\n"), input.YAML, input.Limits{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	r, err := constraint.Analyze(context.Background(), c, builtin(t), constraint.Options{})
+	if err != nil {
+		t.Fatal(err)
+	}
+	var found bool
+	for _, d := range r.Disagreements {
+		if d.Material == "natural-indigo" && d.Kind == "made" {
+			found = true
+			if !d.OneSource || !strings.HasPrefix(d.Text, "One source gives two dates for when natural indigo was made: 4250 to 4000 BCE (splitstoser-2016-indigo)") {
+				t.Errorf("one source's two dates: %+v", d)
+			}
+		}
+	}
+	if !found {
+		t.Errorf("no disagreement on natural indigo's making: %+v", r.Disagreements)
+	}
+	r = analyze(t, "findings:\n  - {id: f, material: fixture blue}\nclaims:\n  - {date: \"1750\"}\n")
+	if d := r.Disagreements[0]; d.OneSource || !strings.HasPrefix(d.Text, "Sources disagree on when fixture blue was made") {
+		t.Errorf("two sources: %+v", d)
+	}
+}
+
 // TestDendrochronology expresses the rule of thumb for oak panels (common
 // practice; as given by Kuniholm 2000 and Klein 1998, see FIELD-NOTES): add
 // at least 7 sapwood rings (western European oak) or 9 (Baltic oak) to the

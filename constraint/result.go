@@ -184,8 +184,12 @@ type Disagreement struct {
 	Material, Name, Kind, Place string
 	Claims                      []string // "1704 (source)", …
 	Used                        string
-	ChangesVerdict              bool
-	Text                        string
+	// OneSource is set when every claim comes from one source (a paper
+	// that gives the earliest find and an earlier record, a patent and a
+	// first production): the claims differ, no two sources disagree.
+	OneSource      bool
+	ChangesVerdict bool
+	Text           string
 }
 
 // SourceRef is a dataset source cited by the evidence.

@@ -4,7 +4,9 @@ import (
 	"context"
 	"fmt"
 	"strings"
+
 	"terminus/constraint/network"
+	"terminus/constraint/wording"
 	"terminus/materials"
 )
 
@@ -38,7 +40,11 @@ func (a *analysis) sensitivity(ctx context.Context, opt Options, res *Result) er
 		if d.Place != "" {
 			what += " in " + a.placeName(d.Place)
 		}
-		d.Text = fmt.Sprintf("Sources disagree on when %s %s: %s. The bound uses %s, the most conservative.", d.Name, what, strings.Join(d.Claims, ", "), d.Used)
+		head := "Sources disagree on"
+		if d.OneSource {
+			head = "One source gives " + wording.Count(len(d.Claims)) + " dates for"
+		}
+		d.Text = fmt.Sprintf("%s when %s %s: %s. The bound uses %s, the most conservative.", head, d.Name, what, strings.Join(d.Claims, ", "), d.Used)
 		if len(changes) == 0 {
 			d.Text += fmt.Sprintf(" Under %s no verdict would change.", latest)
 		} else {
